@@ -1,0 +1,200 @@
+"""The ``kernline`` command.
+
+``kernline`` / ``kernline open FILE`` / ``kernline demo`` open the window; ``check``, ``size``,
+``report`` and ``schedule`` run headless and never import Qt, so they start fast and run on a server.
+
+Exit codes: 0 every wall passes (or the job was done), 1 a check fails or a wall cannot be sized,
+2 bad input (a message on stderr names the field), 3 an internal error (no traceback unless
+``KERNLINE_DEBUG=1``).
+"""
+
+from __future__ import annotations
+
+import argparse
+import json
+import os
+import sys
+from collections.abc import Sequence
+from pathlib import Path
+
+from engine import CAUTION, __version__
+from engine.errors import EngineError, InputError
+
+EXIT_OK, EXIT_FAIL, EXIT_INPUT, EXIT_INTERNAL = 0, 1, 2, 3
+
+
+def _parser() -> argparse.ArgumentParser:
+    parser = argparse.ArgumentParser(
+        prog="kernline",
+        description="Stability checks and sizing of concrete strip footings under shear walls. " + CAUTION,
+    )
+    parser.add_argument("--version", action="version", version=f"kernline {__version__}")
+    sub = parser.add_subparsers(dest="command", metavar="COMMAND")
+
+    p = sub.add_parser("open", help="open a project file in the window")
+    p.add_argument("file")
+
+    p = sub.add_parser("demo", help="open the built-in demo project in the window (or --save it)")
+    p.add_argument("--save", metavar="PATH", help="write the demo project to PATH instead of opening it")
+
+    p = sub.add_parser("check", help="check every wall on its current footing")
+    p.add_argument("file")
+    p.add_argument("--json", action="store_true", help="print the results as JSON (SI base units)")
+
+    p = sub.add_parser("size", help="find the smallest passing footing of every wall")
+    p.add_argument("file")
+    p.add_argument("--json", action="store_true", help="print the results as JSON (SI base units)")
+    p.add_argument("--write", action="store_true", help="store the chosen sizes back into the file")
+
+    p = sub.add_parser("report", help="write the calculation package (PDF)")
+    p.add_argument("file")
+    p.add_argument("-o", "--output", required=True, metavar="OUT.pdf")
+    p.add_argument("--walls", metavar="A1,B2", help="only these walls (comma-separated ids)")
+
+    p = sub.add_parser("schedule", help="write the footing schedule (CSV)")
+    p.add_argument("file")
+    p.add_argument("-o", "--output", required=True, metavar="OUT.csv")
+    return parser
+
+
+def main(argv: Sequence[str] | None = None) -> int:
+    """Run the command; return its exit code."""
+    args = _parser().parse_args(argv)
+    try:
+        return _dispatch(args)
+    except InputError as err:
+        print(f"kernline: {_where(args)}{err.message}", file=sys.stderr)
+        return EXIT_INPUT
+    except EngineError as err:
+        print(f"kernline: {err}", file=sys.stderr)
+        return EXIT_INPUT
+    except KeyboardInterrupt:
+        return 130
+    except Exception as err:  # never a traceback for the user
+        if os.environ.get("KERNLINE_DEBUG"):
+            raise
+        print(f"kernline: internal error: {type(err).__name__}: {err} (set KERNLINE_DEBUG=1 for details)", file=sys.stderr)
+        return EXIT_INTERNAL
+
+
+def _where(args: argparse.Namespace) -> str:
+    file = getattr(args, "file", None)
+    return f"{file}: " if file else ""
+
+
+def _dispatch(args: argparse.Namespace) -> int:
+    command = args.command
+    if command is None:
+        return _window(None, demo=False)
+    if command == "open":
+        return _window(args.file, demo=False)
+    if command == "demo":
+        if args.save:
+            return _save_demo(args.save)
+        return _window(None, demo=True)
+    if command == "check":
+        return _check(args.file, as_json=args.json)
+    if command == "size":
+        return _size(args.file, as_json=args.json, write=args.write)
+    if command == "report":
+        return _report(args.file, args.output, args.walls)
+    if command == "schedule":
+        return _schedule(args.file, args.output)
+    raise AssertionError(command)  # pragma: no cover - argparse refuses others
+
+
+def _window(path: str | None, demo: bool) -> int:
+    if path is not None and not Path(path).is_file():
+        raise InputError("", f"{path}: no such file")
+    try:
+        from app.main_window import launch
+    except ImportError as err:
+        print(f"kernline: the window cannot start here ({err}). The headless commands work: kernline check, size.", file=sys.stderr)
+        return EXIT_INTERNAL
+    return launch(path=path, demo=demo)
+
+
+def _save_demo(path: str) -> int:
+    from engine.project_file import atomic_write_text
+    from engine.resources import resource_path
+
+    text = resource_path("demo.kernline").read_text(encoding="utf-8")
+    atomic_write_text(Path(path), text)
+    print(f"wrote the demo project to {path}")
+    return EXIT_OK
+
+
+def _check(path: str, as_json: bool) -> int:
+    from engine.project_file import load_project
+    from engine.summary import check_table
+    from engine.results import check_project, results_json
+
+    doc = load_project(path)
+    results = check_project(doc.project)
+    if as_json:
+        print(json.dumps(results_json(results), indent=2))
+    else:
+        print(check_table(doc.project, results))
+    return EXIT_OK if all(r.passes for r in results) else EXIT_FAIL
+
+
+def _size(path: str, as_json: bool, write: bool) -> int:
+    from dataclasses import replace
+
+    from engine.project_file import load_project, save_project, with_footing_sizes
+    from engine.summary import size_table
+    from engine.results import check_wall, results_json
+    from engine.sizing import size_footing
+
+    doc = load_project(path)
+    project = doc.project
+    sized = []
+    results = []
+    for wall in project.walls:
+        s = size_footing(project, wall)
+        sized.append(s)
+        if s.feasible:
+            wall = replace(wall, footing=replace(wall.footing, width=s.width, thickness=s.thickness))
+        results.append(check_wall(project, wall))
+    if as_json:
+        print(json.dumps(results_json(tuple(results), {s.wall_id: s.as_json() for s in sized}), indent=2))
+    else:
+        print(size_table(project, sized, results))
+    if write:
+        sizes = {s.wall_id: (s.width, s.thickness) for s in sized if s.feasible and s.width is not None and s.thickness is not None}
+        save_project(path, with_footing_sizes(doc.raw, sizes, project.units))
+        print(f"wrote {len(sizes)} footing size(s) to {path}", file=sys.stderr if as_json else sys.stdout)
+    return EXIT_OK if all(s.feasible for s in sized) else EXIT_FAIL
+
+
+def _report(path: str, output: str, walls: str | None) -> int:
+    try:
+        from engine.report import write_report
+    except ImportError:
+        print("kernline: the calculation package is not built yet in this version", file=sys.stderr)
+        return EXIT_INTERNAL
+    from engine.project_file import load_project
+
+    doc = load_project(path)
+    ids = [w.strip() for w in walls.split(",")] if walls else None
+    write_report(doc.project, output, wall_ids=ids)
+    print(f"wrote {output}")
+    return EXIT_OK
+
+
+def _schedule(path: str, output: str) -> int:
+    try:
+        from engine.schedule import write_schedule
+    except ImportError:
+        print("kernline: the CSV schedule is not built yet in this version", file=sys.stderr)
+        return EXIT_INTERNAL
+    from engine.project_file import load_project
+
+    doc = load_project(path)
+    write_schedule(doc.project, output)
+    print(f"wrote {output}")
+    return EXIT_OK
+
+
+if __name__ == "__main__":  # pragma: no cover
+    sys.exit(main())

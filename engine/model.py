@@ -1,0 +1,371 @@
+"""The design inputs: small frozen dataclasses holding SI floats (m, N, N/m, Pa, N/m^3).
+
+Coordinates (the contract every module follows):
+
+* The footing runs along the wall. Its length is
+  ``L = extension_start + wall length + extension_end``; ``x`` runs along it from its start end, and
+  the wall occupies ``extension_start <= x <= extension_start + length``.
+* Load positions are given from the wall's start end (so ``x = extension_start + position``).
+* Vertical loads are positive downward. Lateral loads are in-plane shears (positive magnitudes) at a
+  height above the top of the footing; the sign of their push is the direction of the check.
+
+Edit a value with :func:`dataclasses.replace`; every constructor validates what it is given.
+"""
+
+from __future__ import annotations
+
+import math
+from dataclasses import dataclass, field
+from enum import Enum
+
+from .errors import InputError
+
+# Unit weights used as defaults: 150 pcf normal-weight concrete and 110 pcf soil (common practice).
+PCF = 4.4482216152605 / 0.3048**3  # N/m^3 per pcf (exact definitions, NIST SP 811)
+PSF = 4.4482216152605 / 0.3048**2  # Pa per psf
+INCH = 0.0254
+FOOT = 0.3048
+
+
+class LoadCase(Enum):
+    """Load cases by their ASCE 7-16 symbols (section 2.2)."""
+
+    D = "D"
+    L = "L"
+    LR = "Lr"
+    S = "S"
+    R = "R"
+    W = "W"
+    E = "E"
+
+    @property
+    def is_lateral_source(self) -> bool:
+        """W and E are the cases whose loads reverse with the direction of the lateral force."""
+        return self in (LoadCase.W, LoadCase.E)
+
+
+class Check(Enum):
+    """The three global stability checks."""
+
+    OVERTURNING = "overturning"
+    SLIDING = "sliding"
+    BEARING = "bearing"
+
+
+ALL_CHECKS: tuple[Check, ...] = (Check.OVERTURNING, Check.SLIDING, Check.BEARING)
+
+
+class Method(Enum):
+    """Design method: which load combinations and required ratios apply."""
+
+    ASCE7_16_ASD = "asce7-16-asd"
+    SERVICE_FS = "service-fs"
+
+
+class BearingBasis(Enum):
+    """Whether the allowable bearing pressure is gross or net of the overburden at the footing base."""
+
+    GROSS = "gross"
+    NET = "net"
+
+
+class Direction(Enum):
+    """Direction of the lateral load: '+' pushes toward x = L, '-' toward x = 0."""
+
+    POSITIVE = "+"
+    NEGATIVE = "-"
+    NONE = "none"
+
+    @property
+    def sign(self) -> int:
+        return {"+": 1, "-": -1, "none": 0}[self.value]
+
+
+def _require(condition: bool, field_name: str, problem: str) -> None:
+    if not condition:
+        raise InputError(field_name, problem)
+
+
+def _finite(value: float, field_name: str) -> None:
+    _require(isinstance(value, (int, float)) and math.isfinite(value), field_name, f"expected a finite number, got {value!r}")
+
+
+def _positive(value: float, field_name: str) -> None:
+    _finite(value, field_name)
+    _require(value > 0.0, field_name, "must be greater than zero")
+
+
+def _non_negative(value: float, field_name: str) -> None:
+    _finite(value, field_name)
+    _require(value >= 0.0, field_name, "must not be negative")
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class LineLoad:
+    """A uniform vertical line load along part of the wall (N/m, positive downward).
+
+    ``reverses``: for W and E loads that come from the overturning of the wall itself, the load as
+    given acts for direction '+', and in direction '-' it acts mirrored about the wall's mid-length.
+    """
+
+    case: LoadCase
+    value: float
+    start: float
+    end: float
+    label: str = ""
+    reverses: bool = False
+
+    def __post_init__(self) -> None:
+        _finite(self.value, "value")
+        _finite(self.start, "start")
+        _finite(self.end, "end")
+        _require(self.end > self.start, "end", "must be greater than start")
+        _require(not self.reverses or self.case.is_lateral_source, "reverses", "only W and E loads can reverse")
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class PointLoad:
+    """A concentrated vertical load (N, positive downward) at ``at`` from the wall's start end.
+
+    ``reverses`` as for :class:`LineLoad` (a hold-down force moves to the other end of the wall when
+    the shear reverses).
+    """
+
+    case: LoadCase
+    value: float
+    at: float
+    label: str = ""
+    reverses: bool = False
+
+    def __post_init__(self) -> None:
+        _finite(self.value, "value")
+        _finite(self.at, "at")
+        _require(not self.reverses or self.case.is_lateral_source, "reverses", "only W and E loads can reverse")
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class LateralLoad:
+    """An in-plane shear (N, magnitude) applied ``height`` above the top of the footing (W or E)."""
+
+    case: LoadCase
+    value: float
+    height: float
+    label: str = ""
+
+    def __post_init__(self) -> None:
+        _require(self.case.is_lateral_source, "case", f'lateral loads must be case W or E, got "{self.case.value}"')
+        _non_negative(self.value, "value")
+        _non_negative(self.height, "height")
+
+
+Load = LineLoad | PointLoad | LateralLoad
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class StripFooting:
+    """The continuous footing: width B across the wall, thickness D, extensions past the wall ends.
+
+    ``cover`` is the depth of soil over the top of the footing; ``offset`` is reserved for a
+    transverse offset of the wall on the footing (not used by the in-plane checks).
+    """
+
+    width: float
+    thickness: float
+    extension_start: float = 0.0
+    extension_end: float = 0.0
+    cover: float = 0.0
+    unit_weight: float = 150.0 * PCF
+    offset: float = 0.0
+
+    def __post_init__(self) -> None:
+        _positive(self.width, "width")
+        _positive(self.thickness, "thickness")
+        _non_negative(self.extension_start, "extension_start")
+        _non_negative(self.extension_end, "extension_end")
+        _non_negative(self.cover, "cover")
+        _non_negative(self.unit_weight, "unit_weight")
+        _finite(self.offset, "offset")
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class Stem:
+    """A concrete stem wall between footing and wall (height 0: no stem)."""
+
+    height: float = 0.0
+    thickness: float = 8.0 * INCH
+
+    def __post_init__(self) -> None:
+        _non_negative(self.height, "height")
+        _positive(self.thickness, "thickness")
+
+    @property
+    def present(self) -> bool:
+        return self.height > 0.0
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class SizingBounds:
+    """The candidate grid searched by automatic sizing (inclusive bounds, fixed steps)."""
+
+    width_min: float = 12.0 * INCH
+    width_max: float = 96.0 * INCH
+    width_step: float = 1.0 * INCH
+    thickness_min: float = 12.0 * INCH
+    thickness_max: float = 48.0 * INCH
+    thickness_step: float = 1.0 * INCH
+
+    def __post_init__(self) -> None:
+        for name in ("width_min", "width_max", "width_step", "thickness_min", "thickness_max", "thickness_step"):
+            _positive(getattr(self, name), name)
+        _require(self.width_max >= self.width_min, "width_max", "must not be less than width_min")
+        _require(self.thickness_max >= self.thickness_min, "thickness_max", "must not be less than thickness_min")
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class Wall:
+    """A shear wall on its strip footing, with the loads it delivers."""
+
+    id: str
+    length: float
+    thickness: float
+    footing: StripFooting
+    label: str = ""
+    stem: Stem = field(default_factory=Stem)
+    loads: tuple[Load, ...] = ()
+    sizing: SizingBounds = field(default_factory=SizingBounds)
+
+    def __post_init__(self) -> None:
+        _require(bool(self.id.strip()), "id", "must not be empty")
+        _positive(self.length, "length")
+        _positive(self.thickness, "thickness")
+        _require(
+            self.footing.width >= self.supported_thickness,
+            "footing.width",
+            "the footing is narrower than the " + ("stem" if self.stem.present else "wall") + " it carries",
+        )
+        low, high = -self.footing.extension_start, self.length + self.footing.extension_end
+        for i, load in enumerate(self.loads):
+            if isinstance(load, LineLoad):
+                _require(low - 1e-9 <= load.start and load.end <= high + 1e-9, f"loads[{i}]", "the line load runs past the footing")
+            elif isinstance(load, PointLoad):
+                _require(low - 1e-9 <= load.at <= high + 1e-9, f"loads[{i}].at", "the point load is off the footing")
+
+    @property
+    def footing_length(self) -> float:
+        """L = extension_start + wall length + extension_end."""
+        return self.footing.extension_start + self.length + self.footing.extension_end
+
+    @property
+    def supported_thickness(self) -> float:
+        """Thickness of what sits on the footing: the stem when there is one, else the wall."""
+        return self.stem.thickness if self.stem.present else self.thickness
+
+    @property
+    def has_lateral(self) -> bool:
+        return any(isinstance(load, LateralLoad) for load in self.loads)
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class SoilProperties:
+    """Values from the geotechnical report (or the code's presumptive values)."""
+
+    allowable_bearing: float = 2000.0 * PSF
+    bearing_basis: BearingBasis = BearingBasis.GROSS
+    friction: float = 0.35
+    cohesion: float = 0.0
+    passive: float = 0.0
+    passive_ignore: float = 0.0
+    unit_weight: float = 110.0 * PCF
+
+    def __post_init__(self) -> None:
+        _positive(self.allowable_bearing, "allowable_bearing")
+        _non_negative(self.friction, "friction")
+        _non_negative(self.cohesion, "cohesion")
+        _non_negative(self.passive, "passive")
+        _non_negative(self.passive_ignore, "passive_ignore")
+        _non_negative(self.unit_weight, "unit_weight")
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class RequiredRatios:
+    """The least ratio of capacity to demand each check must reach."""
+
+    overturning: float = 1.0
+    sliding: float = 1.0
+    bearing: float = 1.0
+
+    def __post_init__(self) -> None:
+        for name in ("overturning", "sliding", "bearing"):
+            _positive(getattr(self, name), name)
+
+    def of(self, check: Check) -> float:
+        return float(getattr(self, check.value))
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class LoadCombination:
+    """A named set of load factors and the checks it applies to."""
+
+    name: str
+    factors: tuple[tuple[LoadCase, float], ...]
+    checks: frozenset[Check] = frozenset(ALL_CHECKS)
+
+    def __post_init__(self) -> None:
+        _require(bool(self.name.strip()), "name", "must not be empty")
+        for case, factor in self.factors:
+            _finite(factor, f"factors.{case.value}")
+        _require(bool(self.checks), "checks", "must name at least one check")
+
+    def factor(self, case: LoadCase) -> float:
+        for c, f in self.factors:
+            if c is case:
+                return f
+        return 0.0
+
+    @property
+    def has_wind_or_seismic(self) -> bool:
+        return self.factor(LoadCase.W) != 0.0 or self.factor(LoadCase.E) != 0.0
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class DesignCriteria:
+    """Method, required ratios and load combinations (a custom list replaces the method's preset)."""
+
+    method: Method = Method.ASCE7_16_ASD
+    required: RequiredRatios = field(default_factory=RequiredRatios)
+    sds: float = 0.0
+    bearing_increase: float = 1.0
+    custom_combinations: tuple[LoadCombination, ...] = ()
+
+    def __post_init__(self) -> None:
+        _non_negative(self.sds, "sds")
+        _positive(self.bearing_increase, "bearing_increase")
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class ProjectInfo:
+    """Title-block information."""
+
+    name: str = ""
+    number: str = ""
+    engineer: str = ""
+    client: str = ""
+    address: str = ""
+    notes: str = ""
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class Project:
+    """A whole project: information, display units, criteria, soil and walls."""
+
+    info: ProjectInfo = field(default_factory=ProjectInfo)
+    units: str = "US"
+    criteria: DesignCriteria = field(default_factory=DesignCriteria)
+    soil: SoilProperties = field(default_factory=SoilProperties)
+    walls: tuple[Wall, ...] = ()
+
+    def __post_init__(self) -> None:
+        _require(self.units in ("US", "SI"), "units", f'expected "US" or "SI", got "{self.units}"')
+        ids = [w.id for w in self.walls]
+        for i, wid in enumerate(ids):
+            _require(wid not in ids[:i], f"walls[{i}].id", f'"{wid}" is used by another wall')

@@ -1,0 +1,46 @@
+"""Overturning of the wall and footing about the toe.
+
+Source: statics of a rigid body tipping about the edge of its base; the ratio of resisting to
+overturning moment about the toe, e.g. Das, *Principles of Foundation Engineering*, retaining-wall
+stability (FS_overturning = sum M_R / sum M_O); for shear walls on footings with ASCE 7-16 2.4.1
+combination 7 (0.6D + 0.6W) the required ratio is 1.0 (``../shared/reference/engineering-refs.md``
+section 5).
+
+Vertical loads resist when downward and overturn when upward; lateral loads overturn with
+f*H*(height + D), their arm measured from the base of the footing.
+"""
+
+from __future__ import annotations
+
+import numpy as np
+
+ArrayLike = float | np.ndarray
+
+
+def toe_arm(x: ArrayLike, length: float, toe_sign: int) -> ArrayLike:
+    """Arm (m) of a vertical load at x about the toe: L - x for the toe at x = L (sign +1), x for x = 0."""
+    return length - x if toe_sign > 0 else x
+
+
+def vertical_toe_moments(force: ArrayLike, arm: ArrayLike) -> tuple[ArrayLike, ArrayLike]:
+    """Split the moment of factored vertical force P (downward positive) at ``arm`` about the toe.
+
+    Returns:
+        (resisting, overturning) moments (N*m): P*arm when P is downward, |P|*arm when upward.
+    """
+    moment = np.multiply(force, arm)
+    return np.maximum(moment, 0.0), np.maximum(-moment, 0.0)
+
+
+def lateral_moment(force: ArrayLike, height: ArrayLike, thickness: ArrayLike) -> ArrayLike:
+    """Overturning moment (N*m) of shear H applied ``height`` above the top of a footing D thick.
+
+    M = H (h + D): the arm runs to the base of the footing, about which the footing tips.
+    """
+    return np.multiply(force, np.add(height, thickness))
+
+
+def overturning_ratio(resisting: ArrayLike, overturning: ArrayLike) -> ArrayLike:
+    """Ratio M_R / M_OT; inf where there is no overturning moment (no demand)."""
+    with np.errstate(divide="ignore", invalid="ignore"):
+        return np.where(np.asarray(overturning) > 0.0, np.divide(resisting, np.where(np.asarray(overturning) > 0.0, overturning, 1.0)), np.inf)

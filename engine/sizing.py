@@ -1,0 +1,203 @@
+"""Automatic sizing: the smallest footing width x thickness on the candidate grid that passes.
+
+Every candidate of the grid is checked against every case at once (numpy broadcasting over
+cases x thicknesses x widths; no Python loop over candidates). The choice is the passing candidate
+with the least cross-section B*D (the least concrete per length of footing), ties going to the
+thinner, then the narrower (common practice: excavation depth costs more than width). The full
+feasibility map is returned for the window's design map.
+"""
+
+from __future__ import annotations
+
+import math
+from dataclasses import dataclass, replace
+
+import numpy as np
+
+from .model import ALL_CHECKS, Check, Project, Wall
+from .stability import CaseTable, case_table, evaluate
+
+# Relative tolerance that lets the upper bound of a range be reached despite floating-point steps.
+GRID_TOLERANCE = 1e-6
+# A grid larger than this is refused (it would take seconds and memory; the steps are too fine).
+MAX_CANDIDATES = 250_000
+# Fraction of the wall length tried on each end when probing whether a longer footing would help.
+LONGER_PROBE = 0.1
+
+
+def candidate_values(low: float, high: float, step: float) -> np.ndarray:
+    """low, low + step, ... up to high inclusive (within a rounding tolerance)."""
+    count = int(math.floor((high - low) / step * (1.0 + GRID_TOLERANCE) + GRID_TOLERANCE)) + 1
+    return low + step * np.arange(count)
+
+
+def candidate_grid(wall: Wall) -> tuple[np.ndarray, np.ndarray]:
+    """The candidate widths and thicknesses of the wall's sizing bounds (m)."""
+    z = wall.sizing
+    return (
+        candidate_values(z.width_min, z.width_max, z.width_step),
+        candidate_values(z.thickness_min, z.thickness_max, z.thickness_step),
+    )
+
+
+@dataclass(frozen=True, slots=True, eq=False)
+class SizingResult:
+    """The chosen size and the feasibility map of every candidate.
+
+    Map arrays have shape (len(thicknesses), len(widths)): rows are thicknesses (up), columns widths.
+
+    Attributes:
+        widths, thicknesses: the candidate values (m).
+        allowed: False where the candidate is narrower than the wall or stem it carries.
+        passes: the candidate meets every required ratio (and is allowed).
+        governing: index into :data:`engine.model.ALL_CHECKS` of the check with the lowest
+            normalized ratio at each candidate.
+        normalized: that lowest ratio / required (>= 1 passes).
+        check_normalized: (3, rows, cols) lowest ratio / required of each check over all cases,
+            for drawing each check's boundary.
+        width, thickness: the chosen size, or None when no candidate passes.
+        message: what was found, in words; with suggestions when nothing passes.
+    """
+
+    wall_id: str
+    widths: np.ndarray
+    thicknesses: np.ndarray
+    allowed: np.ndarray
+    passes: np.ndarray
+    governing: np.ndarray
+    normalized: np.ndarray
+    check_normalized: np.ndarray
+    width: float | None
+    thickness: float | None
+    message: str
+    suggestions: tuple[str, ...] = ()
+
+    @property
+    def feasible(self) -> bool:
+        return self.width is not None
+
+    @property
+    def candidates(self) -> int:
+        return int(self.widths.size * self.thicknesses.size)
+
+    def governing_check(self, row: int, col: int) -> Check:
+        return ALL_CHECKS[int(self.governing[row, col])]
+
+    def as_json(self) -> dict[str, object]:
+        return {
+            "feasible": self.feasible, "width": self.width, "thickness": self.thickness,
+            "candidates": self.candidates, "message": self.message, "suggestions": list(self.suggestions),
+        }
+
+
+def feasibility_map(table: CaseTable, widths: np.ndarray, thicknesses: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
+    """Lowest ratio / required of each check over all cases, for every candidate.
+
+    Returns:
+        (check_normalized with shape (3, rows, cols), allowed with shape (rows, cols)).
+    """
+    b = widths[None, :]
+    d = thicknesses[:, None]
+    ev = evaluate(table, b, d)
+    check_normalized = ev.normalized.min(axis=1) if len(table.cases) else np.full((3, d.size, b.size), np.inf)
+    allowed = np.broadcast_to(b >= table.wall.supported_thickness - 1e-12, (d.size, b.size))
+    return check_normalized, allowed
+
+
+def size_footing(project: Project, wall: Wall) -> SizingResult:
+    """Find the passing candidate with the least B*D on the wall's sizing grid.
+
+    Raises:
+        InputError: the grid would be unreasonably large.
+    """
+    from .errors import InputError
+
+    widths, thicknesses = candidate_grid(wall)
+    if widths.size * thicknesses.size > MAX_CANDIDATES:
+        raise InputError(
+            f"sizing", f"the grid has {widths.size} x {thicknesses.size} candidates; use coarser steps (at most {MAX_CANDIDATES:,} candidates)"
+        )
+    table = case_table(wall, project.soil, project.criteria)
+    check_normalized, allowed = feasibility_map(table, widths, thicknesses)
+    governing = np.argmin(check_normalized, axis=0)
+    normalized = np.min(check_normalized, axis=0)
+    passes = allowed & (normalized >= 1.0 - 1e-9)
+
+    area = thicknesses[:, None] * widths[None, :]
+    if passes.any():
+        rows, cols = np.nonzero(passes)
+        # least B*D; ties to the thinner, then the narrower
+        order = np.lexsort((widths[cols], thicknesses[rows], np.round(area[rows, cols], 12)))
+        row, col = int(rows[order[0]]), int(cols[order[0]])
+        width, thickness = float(widths[col]), float(thicknesses[row])
+        message = _why_smallest(check_normalized, passes, row, col)
+        suggestions: tuple[str, ...] = ()
+    else:
+        width = thickness = None
+        message, suggestions = _diagnose(project, wall, table, widths, thicknesses, check_normalized, allowed)
+    return SizingResult(
+        wall_id=wall.id, widths=widths, thicknesses=thicknesses, allowed=np.array(allowed), passes=passes,
+        governing=governing, normalized=normalized, check_normalized=check_normalized,
+        width=width, thickness=thickness, message=message, suggestions=suggestions,
+    )
+
+
+def _why_smallest(check_normalized: np.ndarray, passes: np.ndarray, row: int, col: int) -> str:
+    """Say which check the next smaller candidate along each axis fails."""
+    parts = []
+    for axis_name, r, c in (("narrower", row, col - 1), ("thinner", row - 1, col)):
+        if r < 0 or c < 0:
+            parts.append(f"the next {axis_name} candidate is outside the bounds")
+            continue
+        if not passes[r, c]:
+            j = int(np.argmin(check_normalized[:, r, c]))
+            value = float(check_normalized[j, r, c])
+            if math.isfinite(value):
+                parts.append(f"the next {axis_name} one fails {ALL_CHECKS[j].value} (ratio/required {value:.3f})")
+            else:
+                parts.append(f"the next {axis_name} one is narrower than the wall it carries")
+    return "smallest passing size: " + "; ".join(parts)
+
+
+def _diagnose(
+    project: Project, wall: Wall, table: CaseTable, widths: np.ndarray, thicknesses: np.ndarray,
+    check_normalized: np.ndarray, allowed: np.ndarray,
+) -> tuple[str, tuple[str, ...]]:
+    """Why nothing passes: the failing check at the largest size, by how much, and what would help."""
+    last_r, last_c = thicknesses.size - 1, widths.size - 1
+    at_max = check_normalized[:, last_r, last_c]
+    failing = [(ALL_CHECKS[j], float(at_max[j])) for j in range(3) if at_max[j] < 1.0 - 1e-9]
+    if not allowed[last_r, last_c]:
+        return "even the widest candidate is narrower than the wall it carries", ("raise width_max above the wall thickness",)
+    worst_check, worst = min(failing, key=lambda t: t[1]) if failing else (ALL_CHECKS[0], 1.0)
+    described = ", ".join(f"{c.value} reaches {v:.0%} of its required ratio" for c, v in failing)
+    message = f"no candidate passes; at the largest size ({widths[-1]:.3f} m x {thicknesses[-1]:.3f} m) {described}"
+    suggestions = []
+    for check, value in failing:
+        helps = []
+        if widths.size > 1 and check_normalized[ALL_CHECKS.index(check), last_r, last_c - 1] < value - 1e-12:
+            helps.append("a wider footing (raise width_max)")
+        if thicknesses.size > 1 and check_normalized[ALL_CHECKS.index(check), last_r - 1, last_c] < value - 1e-12:
+            helps.append("a deeper footing (raise thickness_max)")
+        longer = _longer_probe(project, wall, widths[-1], thicknesses[-1], check)
+        if longer is not None and longer > value + 1e-12:
+            helps.append(f"a longer footing (extending each end by {LONGER_PROBE:.0%} of the wall length gives {longer:.0%})")
+        if helps:
+            suggestions.append(f"{check.value}: " + "; ".join(helps) + " would help")
+        else:
+            suggestions.append(f"{check.value}: no change of footing size helps; revisit the loads or the soil values")
+    return message, tuple(suggestions)
+
+
+def _longer_probe(project: Project, wall: Wall, width: float, thickness: float, check: Check) -> float | None:
+    """Normalized ratio of ``check`` with each end extended by LONGER_PROBE of the wall length."""
+    extra = LONGER_PROBE * wall.length
+    footing = replace(
+        wall.footing, width=float(width), thickness=float(thickness),
+        extension_start=wall.footing.extension_start + extra, extension_end=wall.footing.extension_end + extra,
+    )
+    # loads keep their positions on the wall: moving the wall's start moves them with it
+    longer = replace(wall, footing=footing)
+    table = case_table(longer, project.soil, project.criteria)
+    ev = evaluate(table, float(width), float(thickness))
+    return float(ev.normalized[ALL_CHECKS.index(check)].min()) if len(table.cases) else None

@@ -1,0 +1,93 @@
+"""Soil pressure under a rigid strip footing with a one-way eccentric load, soil taking no tension.
+
+Source: the classical linear contact-pressure solution (P/A +- M/S with S = B L^2 / 6 while the
+resultant is inside the kern; a triangular block of length 3(L/2 - e) beyond it), e.g. Das,
+*Principles of Foundation Engineering*, section on eccentrically loaded foundations (q_max =
+4P / (3B(L - 2e)) beyond the kern) and Bowles, *Foundation Analysis and Design*, 5th ed.,
+section 4-8; restated in ``../shared/reference/engineering-refs.md`` section 1.
+
+Every function takes floats or numpy arrays and broadcasts, so the same code serves a single check
+and the sizing grid.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+
+import numpy as np
+
+ArrayLike = float | np.ndarray
+
+
+@dataclass(frozen=True, slots=True)
+class PressureDistribution:
+    """Linear soil pressure along the footing (Pa) for a resultant N at eccentricity e.
+
+    Attributes:
+        q_max: peak pressure, at the end toward which e points (inf where there is no equilibrium).
+        q_min: pressure at the other end of the contact (0 beyond the kern).
+        contact_length: length in contact with the soil, measured from the loaded end (m).
+        stable: False where N <= 0 or |e| >= L/2 (the footing cannot be in equilibrium on the soil).
+    """
+
+    q_max: ArrayLike
+    q_min: ArrayLike
+    contact_length: ArrayLike
+    stable: ArrayLike
+
+
+def resultant_eccentricity(moment_about_centre: ArrayLike, vertical: ArrayLike) -> ArrayLike:
+    """e = M / N: eccentricity of the resultant from the footing's mid-length (m).
+
+    Source: statics; Das, *Principles of Foundation Engineering*, eccentric loading (e = M/Q).
+    Returns inf (with the sign of M) where N <= 0.
+    """
+    with np.errstate(divide="ignore", invalid="ignore"):
+        e = np.where(np.asarray(vertical) > 0.0, np.divide(moment_about_centre, np.where(np.asarray(vertical) > 0.0, vertical, 1.0)), np.copysign(np.inf, moment_about_centre))
+    return e
+
+
+def pressure_distribution(vertical: ArrayLike, eccentricity: ArrayLike, width: ArrayLike, length: ArrayLike) -> PressureDistribution:
+    """Soil pressure under a rigid footing of width B and length L, no tension.
+
+    * |e| <= L/6 (resultant in the kern): q = N/(B L) * (1 +- 6|e|/L), full contact.
+    * L/6 < |e| < L/2: triangular block, contact length a = 3 (L/2 - |e|),
+      q_max = 2 N / (3 B (L/2 - |e|)), q_min = 0.
+    * N <= 0 or |e| >= L/2: no equilibrium; q_max = inf, contact 0.
+
+    Args:
+        vertical: N, total vertical load on the soil (N, downward positive).
+        eccentricity: e, of N from the footing's mid-length (m).
+        width: B (m).
+        length: L (m).
+    """
+    n = np.asarray(vertical, dtype=float)
+    e = np.abs(np.asarray(eccentricity, dtype=float))
+    stable = (n > 0.0) & (e < 0.5 * length)
+    in_kern = e <= length / 6.0
+    with np.errstate(divide="ignore", invalid="ignore", over="ignore"):
+        average = n / (width * length)
+        q_max_kern = average * (1.0 + 6.0 * e / length)
+        q_min_kern = average * (1.0 - 6.0 * e / length)
+        half_minus_e = 0.5 * length - e
+        q_max_beyond = 2.0 * n / (3.0 * width * half_minus_e)
+    q_max = np.where(stable, np.where(in_kern, q_max_kern, q_max_beyond), np.inf)
+    q_min = np.where(stable & in_kern, q_min_kern, 0.0)
+    contact = np.where(stable, np.where(in_kern, length, 3.0 * half_minus_e), 0.0)
+    return PressureDistribution(q_max=q_max, q_min=q_min, contact_length=contact, stable=stable)
+
+
+def pressure_at(distribution: PressureDistribution, eccentricity: float, length: float, x: np.ndarray) -> np.ndarray:
+    """Pressure ordinates (Pa) at positions x (m from the footing's start end), for drawing.
+
+    The peak is at the end toward which e points; beyond the kern the pressure falls linearly to zero
+    over the contact length.
+    """
+    q_max = float(distribution.q_max)
+    if not bool(distribution.stable):
+        return np.zeros_like(x)
+    q_min = float(distribution.q_min)
+    a = float(distribution.contact_length)
+    # distance from the loaded end
+    s = (length - x) if eccentricity >= 0.0 else x
+    return np.clip(q_max - (q_max - q_min) * s / a, 0.0, None) * (s <= a + 1e-12)

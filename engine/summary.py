@@ -1,0 +1,70 @@
+"""Plain-text summary tables for the command line (formatting of engine results only)."""
+
+from __future__ import annotations
+
+import math
+from collections.abc import Sequence
+
+from . import CAUTION
+from .model import ALL_CHECKS, Project
+from .results import Governing, WallResult
+from .sizing import SizingResult
+from .units import format_length
+
+
+def ratio_text(g: Governing) -> str:
+    """"1.37 >= 1.00 OK" style text of a governing ratio (no colour needed to read it)."""
+    if math.isinf(g.ratio):
+        return "no demand"
+    verdict = "OK" if g.passes else "NG"
+    sign = ">=" if g.passes else "<"
+    return f"{g.ratio:.2f} {sign} {g.required:.2f} {verdict}"
+
+
+def case_text(g: Governing) -> str:
+    if math.isinf(g.ratio):
+        return ""
+    return g.combination if g.direction == "none" else f"{g.combination} ({g.direction})"
+
+
+def footing_text(width: float, thickness: float, length: float, units: str) -> str:
+    return f"{format_length(width, units)} x {format_length(thickness, units)} x {format_length(length, units)}"
+
+
+def _table(headers: Sequence[str], rows: Sequence[Sequence[str]]) -> str:
+    widths = [max(len(h), *(len(r[i]) for r in rows)) if rows else len(h) for i, h in enumerate(headers)]
+    line = "  ".join(h.ljust(w) for h, w in zip(headers, widths, strict=True))
+    out = [line, "  ".join("-" * w for w in widths)]
+    out += ["  ".join(c.ljust(w) for c, w in zip(r, widths, strict=True)) for r in rows]
+    return "\n".join(line.rstrip() for line in out)
+
+
+def check_table(project: Project, results: Sequence[WallResult]) -> str:
+    """One row per wall: footing, the three governing ratios with their cases, and the verdict."""
+    headers = ["Wall", "Footing B x D x L", *[c.value.capitalize() for c in ALL_CHECKS], "Governing case (worst)", "Result"]
+    rows = []
+    for r in results:
+        worst = r.worst
+        rows.append(
+            [
+                r.wall_id,
+                footing_text(r.width, r.thickness, r.length, project.units),
+                *[ratio_text(r.governing[c]) for c in ALL_CHECKS],
+                f"{worst.check.value}: {case_text(worst)}",
+                "PASS" if r.passes else "FAIL",
+            ]
+        )
+    failing = sum(not r.passes for r in results)
+    title = f"{project.info.name or 'Project'}: {len(results)} wall(s), {failing} failing"
+    return f"{title}\n\n{_table(headers, rows)}\n\n{CAUTION}"
+
+
+def size_table(project: Project, sized: Sequence[SizingResult], results: Sequence[WallResult]) -> str:
+    """One row per wall: the size found (or why none) and the governing ratios at that size."""
+    headers = ["Wall", "Sized B x D", "Candidates", *[c.value.capitalize() for c in ALL_CHECKS], "Why this size"]
+    rows = []
+    for s, r in zip(sized, results, strict=True):
+        size = f"{format_length(s.width, project.units)} x {format_length(s.thickness, project.units)}" if s.feasible else "none passes"
+        note = s.message if s.feasible else s.message + ". " + " ".join(s.suggestions)
+        rows.append([s.wall_id, size, str(s.candidates), *[ratio_text(r.governing[c]) if s.feasible else "" for c in ALL_CHECKS], note])
+    return f"{_table(headers, rows)}\n\n{CAUTION}"
