@@ -12,6 +12,7 @@ and the sizing grid.
 
 from __future__ import annotations
 
+import math
 from dataclasses import dataclass
 
 import numpy as np
@@ -91,3 +92,48 @@ def pressure_at(distribution: PressureDistribution, eccentricity: float, length:
     # distance from the loaded end
     s = (length - x) if eccentricity >= 0.0 else x
     return np.clip(q_max - (q_max - q_min) * s / a, 0.0, None) * (s <= a + 1e-12)
+
+
+@dataclass(frozen=True, slots=True)
+class PressureDiagram:
+    """What a view needs to draw the soil pressure of one case (SI units, x from the start end).
+
+    Attributes:
+        x, q: ordinates of the diagram (m, Pa), ready to plot.
+        kern: the kern limits, L/3 and 2L/3 (the middle third, within which e = |M/N| <= L/6 keeps the
+            whole footing in contact).
+        contact_start, contact_end: the stretch in contact with the soil.
+        resultant_x: where the resultant N acts (L/2 + e).
+        q_max, q_min, stable: as in :class:`PressureDistribution`.
+    """
+
+    x: np.ndarray
+    q: np.ndarray
+    kern: tuple[float, float]
+    contact_start: float
+    contact_end: float
+    resultant_x: float
+    q_max: float
+    q_min: float
+    stable: bool
+
+
+def pressure_diagram(vertical: float, eccentricity: float, width: float, length: float) -> PressureDiagram:
+    """The pressure diagram of a resultant N at eccentricity e under a footing B x L (see
+    :func:`pressure_distribution` for the formulas)."""
+    dist = pressure_distribution(vertical, eccentricity, width, length)
+    stable = bool(dist.stable)
+    kern = (length / 3.0, 2.0 * length / 3.0)
+    if not stable:
+        x = np.array([0.0, length])
+        return PressureDiagram(x, np.zeros(2), kern, 0.0, 0.0, math.nan, math.inf, 0.0, False)
+    a = float(dist.contact_length)
+    q_max, q_min = float(dist.q_max), float(dist.q_min)
+    # the peak is at the end toward which e points; the block closes to zero at both ends
+    if eccentricity >= 0.0:
+        start, end, q_start, q_end = length - a, length, q_min, q_max
+    else:
+        start, end, q_start, q_end = 0.0, a, q_max, q_min
+    x = np.array([start, start, end, end])
+    q = np.array([0.0, q_start, q_end, 0.0])
+    return PressureDiagram(x, q, kern, start, end, 0.5 * length + float(eccentricity), q_max, q_min, True)
