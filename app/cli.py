@@ -126,8 +126,8 @@ def _save_demo(path: str) -> int:
 
 def _check(path: str, as_json: bool) -> int:
     from engine.project_file import load_project
-    from engine.summary import check_table
     from engine.results import check_project, results_json
+    from engine.summary import check_table
 
     doc = load_project(path)
     results = check_project(doc.project)
@@ -142,9 +142,9 @@ def _size(path: str, as_json: bool, write: bool) -> int:
     from dataclasses import replace
 
     from engine.project_file import load_project, save_project, with_footing_sizes
-    from engine.summary import size_table
     from engine.results import check_wall, results_json
     from engine.sizing import size_footing
+    from engine.summary import size_table
 
     doc = load_project(path)
     project = doc.project

@@ -32,9 +32,15 @@ def allowable_pressure(allowable: float, increase: float, wind_or_seismic: Array
     return np.where(wind_or_seismic, allowable * increase, allowable)
 
 
-def bearing_ratio(allowable: ArrayLike, pressure: ArrayLike, stable: ArrayLike) -> ArrayLike:
+def bearing_ratio(allowable: ArrayLike, pressure: ArrayLike, stable: ArrayLike) -> np.ndarray:
     """allowable / q; inf where q <= 0 (no demand); 0 where the footing has no equilibrium."""
-    q = np.asarray(pressure)
+    q = np.asarray(pressure, dtype=float)
     with np.errstate(divide="ignore", invalid="ignore"):
-        ratio = np.where(q > 0.0, np.divide(allowable, np.where(q > 0.0, q, 1.0)), np.inf)
-    return np.where(stable, ratio, 0.0)
+        ratio = np.asarray(allowable, dtype=float) / q  # q = inf (no equilibrium) gives 0
+    no_demand = q <= 0.0
+    if no_demand.any():
+        ratio = np.where(no_demand, np.inf, ratio)
+    unstable = ~np.asarray(stable, dtype=bool)
+    if unstable.any():
+        ratio = np.where(unstable, 0.0, ratio)
+    return ratio

@@ -40,7 +40,12 @@ def lateral_moment(force: ArrayLike, height: ArrayLike, thickness: ArrayLike) ->
     return np.multiply(force, np.add(height, thickness))
 
 
-def overturning_ratio(resisting: ArrayLike, overturning: ArrayLike) -> ArrayLike:
+def overturning_ratio(resisting: ArrayLike, overturning: ArrayLike) -> np.ndarray:
     """Ratio M_R / M_OT; inf where there is no overturning moment (no demand)."""
+    m_ot = np.asarray(overturning, dtype=float)
     with np.errstate(divide="ignore", invalid="ignore"):
-        return np.where(np.asarray(overturning) > 0.0, np.divide(resisting, np.where(np.asarray(overturning) > 0.0, overturning, 1.0)), np.inf)
+        ratio = np.asarray(resisting, dtype=float) / m_ot
+    none = m_ot <= 0.0
+    if none.any():
+        ratio = np.where(none, np.inf, ratio)
+    return ratio

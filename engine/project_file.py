@@ -148,7 +148,7 @@ def _combination(raw: Any) -> LoadCombination:
         raise InputError("name", "is missing; give the combination a name such as \"0.6D + 0.6W\"")
     factors_raw = _object(obj.get("factors"), "factors", required=True)
     factors = []
-    for key, value in factors_raw.items():
+    for key in factors_raw:
         if key not in _CASES:
             raise InputError(f"factors.{key}", f"unknown load case; expected one of {', '.join(_CASES)}")
         factors.append((_CASES[key], _number(factors_raw, key, None)))

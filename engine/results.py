@@ -170,7 +170,7 @@ class WallResult:
 
 
 def _case_results(table: CaseTable, ev: Evaluation) -> tuple[CaseResult, ...]:
-    r = ev.ratios.tolist()
+    r = [ev.overturning_ratio.tolist(), ev.sliding_ratio.tolist(), ev.bearing_ratio.tolist()]
     applies = table.applies.tolist()
     req = table.required.tolist()
     vertical, moment, e = ev.vertical.tolist(), ev.moment.tolist(), ev.eccentricity.tolist()
@@ -212,9 +212,10 @@ def governing_case(table: CaseTable, evaluation: Evaluation, check: Check) -> Go
     demand the ratio is inf (printed as "no demand").
     """
     j = ALL_CHECKS.index(check)
-    i = int(np.argmin(evaluation.normalized[j]))
+    ratio_j = (evaluation.overturning_ratio, evaluation.sliding_ratio, evaluation.bearing_ratio)[j]
+    i = int(np.argmin(np.where(table.applies[j], ratio_j, np.inf)))  # one required value per check
     required = float(table.required[j])
-    ratio = float(evaluation.ratios[j, i]) if table.applies[j, i] else math.inf
+    ratio = float(ratio_j[i]) if table.applies[j, i] else math.inf
     design: DesignCase = table.cases[i]
     return Governing(
         check=check, ratio=ratio, required=required, combination=design.combination.name,

@@ -99,7 +99,7 @@ def feasibility_map(table: CaseTable, widths: np.ndarray, thicknesses: np.ndarra
     b = widths[None, :]
     d = thicknesses[:, None]
     ev = evaluate(table, b, d)
-    check_normalized = ev.normalized.min(axis=1) if len(table.cases) else np.full((3, d.size, b.size), np.inf)
+    check_normalized = ev.check_minima() if len(table.cases) else np.full((3, d.size, b.size), np.inf)
     allowed = np.broadcast_to(b >= table.wall.supported_thickness - 1e-12, (d.size, b.size))
     return check_normalized, allowed
 
@@ -115,7 +115,7 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
     widths, thicknesses = candidate_grid(wall)
     if widths.size * thicknesses.size > MAX_CANDIDATES:
         raise InputError(
-            f"sizing", f"the grid has {widths.size} x {thicknesses.size} candidates; use coarser steps (at most {MAX_CANDIDATES:,} candidates)"
+            "sizing", f"the grid has {widths.size} x {thicknesses.size} candidates; use coarser steps (at most {MAX_CANDIDATES:,} candidates)"
         )
     table = case_table(wall, project.soil, project.criteria)
     check_normalized, allowed = feasibility_map(table, widths, thicknesses)
@@ -200,4 +200,4 @@ def _longer_probe(project: Project, wall: Wall, width: float, thickness: float, 
     longer = replace(wall, footing=footing)
     table = case_table(longer, project.soil, project.criteria)
     ev = evaluate(table, float(width), float(thickness))
-    return float(ev.normalized[ALL_CHECKS.index(check)].min()) if len(table.cases) else None
+    return float(ev.check_minima()[ALL_CHECKS.index(check)]) if len(table.cases) else None

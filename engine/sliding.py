@@ -31,6 +31,8 @@ def friction_resistance(friction: float, vertical: ArrayLike) -> ArrayLike:
 
 def cohesion_resistance(cohesion: float, width: ArrayLike, contact_length: ArrayLike, vertical: ArrayLike) -> ArrayLike:
     """min(c * B * a, 0.5 N), never below zero (N)."""
+    if cohesion == 0.0:
+        return np.zeros(np.broadcast_shapes(np.shape(width), np.shape(contact_length), np.shape(vertical)))
     return np.maximum(np.minimum(cohesion * np.multiply(width, contact_length), COHESION_CAP * np.asarray(vertical)), 0.0)
 
 
@@ -41,8 +43,12 @@ def passive_resistance(passive: float, width: ArrayLike, cover: float, thickness
     return np.where(bottom > z0, 0.5 * passive * np.multiply(width, np.square(bottom) - z0 * z0), 0.0)
 
 
-def sliding_ratio(resistance: ArrayLike, shear: ArrayLike) -> ArrayLike:
+def sliding_ratio(resistance: ArrayLike, shear: ArrayLike) -> np.ndarray:
     """Resistance / |V|; inf where there is no shear (no demand)."""
-    v = np.abs(shear)
+    v = np.abs(np.asarray(shear, dtype=float))
     with np.errstate(divide="ignore", invalid="ignore"):
-        return np.where(v > 0.0, np.divide(resistance, np.where(v > 0.0, v, 1.0)), np.inf)
+        ratio = np.asarray(resistance, dtype=float) / v
+    none = v <= 0.0
+    if none.any():
+        ratio = np.where(none, np.inf, ratio)
+    return ratio

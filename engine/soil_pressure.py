@@ -37,18 +37,23 @@ class PressureDistribution:
     stable: ArrayLike
 
 
-def resultant_eccentricity(moment_about_centre: ArrayLike, vertical: ArrayLike) -> ArrayLike:
+def resultant_eccentricity(moment_about_centre: ArrayLike, vertical: ArrayLike) -> np.ndarray:
     """e = M / N: eccentricity of the resultant from the footing's mid-length (m).
 
     Source: statics; Das, *Principles of Foundation Engineering*, eccentric loading (e = M/Q).
-    Returns inf (with the sign of M) where N <= 0.
+    Returns +-inf (the sign of M; +inf for M = 0) where N <= 0: no resultant on the soil.
     """
+    n = np.asarray(vertical, dtype=float)
+    m = np.asarray(moment_about_centre, dtype=float)
     with np.errstate(divide="ignore", invalid="ignore"):
-        e = np.where(np.asarray(vertical) > 0.0, np.divide(moment_about_centre, np.where(np.asarray(vertical) > 0.0, vertical, 1.0)), np.copysign(np.inf, moment_about_centre))
+        e = m / n
+    no_resultant = n <= 0.0
+    if no_resultant.any():
+        e = np.where(no_resultant, np.copysign(np.inf, m), e)
     return e
 
 
-def pressure_distribution(vertical: ArrayLike, eccentricity: ArrayLike, width: ArrayLike, length: ArrayLike) -> PressureDistribution:
+def pressure_distribution(vertical: ArrayLike, eccentricity: ArrayLike, width: ArrayLike, length: float) -> PressureDistribution:
     """Soil pressure under a rigid footing of width B and length L, no tension.
 
     * |e| <= L/6 (resultant in the kern): q = N/(B L) * (1 +- 6|e|/L), full contact.
@@ -66,15 +71,18 @@ def pressure_distribution(vertical: ArrayLike, eccentricity: ArrayLike, width: A
     e = np.abs(np.asarray(eccentricity, dtype=float))
     stable = (n > 0.0) & (e < 0.5 * length)
     in_kern = e <= length / 6.0
+    half_minus_e = 0.5 * length - e
     with np.errstate(divide="ignore", invalid="ignore", over="ignore"):
-        average = n / (width * length)
-        q_max_kern = average * (1.0 + 6.0 * e / length)
-        q_min_kern = average * (1.0 - 6.0 * e / length)
-        half_minus_e = 0.5 * length - e
-        q_max_beyond = 2.0 * n / (3.0 * width * half_minus_e)
-    q_max = np.where(stable, np.where(in_kern, q_max_kern, q_max_beyond), np.inf)
-    q_min = np.where(stable & in_kern, q_min_kern, 0.0)
-    contact = np.where(stable, np.where(in_kern, length, 3.0 * half_minus_e), 0.0)
+        average = n / (np.asarray(width) * length)  # N / (B L)
+        swing = average * (6.0 / length) * e  # N / (B L) * 6|e|/L
+        q_max = np.where(in_kern, average + swing, (2.0 / 3.0) * n / (np.asarray(width) * half_minus_e))
+    q_min = np.where(in_kern, average - swing, 0.0)
+    contact = np.where(in_kern, length, 3.0 * half_minus_e)
+    unstable = ~stable
+    if unstable.any():
+        q_max = np.where(unstable, np.inf, q_max)
+        q_min = np.where(unstable, 0.0, q_min)
+        contact = np.where(unstable, 0.0, contact)
     return PressureDistribution(q_max=q_max, q_min=q_min, contact_length=contact, stable=stable)
 
 

@@ -16,7 +16,7 @@ import numpy as np
 from . import bearing, overturning, sliding, soil_pressure
 from .combinations import DesignCase, combinations_of, design_cases
 from .loads import lateral_resultants, self_weight, vertical_resultants
-from .model import ALL_CHECKS, DesignCriteria, Direction, LoadCase, SoilProperties, Wall
+from .model import ALL_CHECKS, DesignCriteria, LoadCase, SoilProperties, Wall
 
 
 @dataclass(frozen=True, slots=True, eq=False)
@@ -155,8 +155,35 @@ class Evaluation:
     friction: np.ndarray
     cohesion: np.ndarray
     passive: np.ndarray
-    ratios: np.ndarray  # (3, k, ...) overturning, sliding, bearing
-    normalized: np.ndarray  # (3, k, ...) ratio / required, inf where the check does not apply
+    overturning_ratio: np.ndarray
+    sliding_ratio: np.ndarray
+    bearing_ratio: np.ndarray
+    required: np.ndarray  # (3,)
+    applies: np.ndarray  # (3, k)
+
+    @property
+    def ratios(self) -> np.ndarray:
+        """(3, k, ...) ratios of overturning, sliding and bearing."""
+        return np.stack(np.broadcast_arrays(self.overturning_ratio, self.sliding_ratio, self.bearing_ratio))
+
+    @property
+    def normalized(self) -> np.ndarray:
+        """(3, k, ...) ratio / required; inf where the case's combination does not apply to the check."""
+        extra = (1,) * (self.overturning_ratio.ndim - 1)
+        applies = self.applies.reshape(self.applies.shape + extra)
+        return np.where(applies, self.ratios / self.required.reshape((3, 1) + extra), np.inf)
+
+    def check_minima(self) -> np.ndarray:
+        """(3, ...) lowest ratio / required of each check over the cases it applies to (inf: none)."""
+        out = []
+        for j, ratio in enumerate((self.overturning_ratio, self.sliding_ratio, self.bearing_ratio)):
+            mask = self.applies[j]
+            if not mask.any():
+                out.append(np.full(ratio.shape[1:], np.inf))
+                continue
+            rows = ratio if mask.all() else ratio[mask]
+            out.append(rows.min(axis=0) / self.required[j])
+        return np.stack(out)
 
 
 def evaluate(table: CaseTable, width: float | np.ndarray, thickness: float | np.ndarray) -> Evaluation:
@@ -194,7 +221,7 @@ def evaluate(table: CaseTable, width: float | np.ndarray, thickness: float | np.
     # Sliding: friction + cohesion + passive against the shear.
     friction = sliding.friction_resistance(soil.friction, vertical)
     cohesion = sliding.cohesion_resistance(soil.cohesion, b, pressure.contact_length, vertical)
-    passive = sliding.passive_resistance(soil.passive, b, cover, d, soil.passive_ignore) * np.ones_like(vertical)
+    passive = np.broadcast_to(sliding.passive_resistance(soil.passive, b, cover, d, soil.passive_ignore), np.shape(vertical))
     sl_ratio = sliding.sliding_ratio(friction + cohesion + passive, per_case(table.shear))
 
     # Bearing: peak (or net peak) pressure against the allowable.
@@ -202,10 +229,6 @@ def evaluate(table: CaseTable, width: float | np.ndarray, thickness: float | np.
     allowable = bearing.allowable_pressure(soil.allowable_bearing, table.criteria.bearing_increase, per_case(table.wind_or_seismic))
     br_ratio = bearing.bearing_ratio(allowable, compared, pressure.stable)
 
-    ratios = np.stack(np.broadcast_arrays(ot_ratio, sl_ratio, br_ratio))
-    required = table.required.reshape((3, 1) + (1,) * grid_ndim)
-    applies = table.applies.reshape((3, k) + (1,) * grid_ndim)
-    normalized = np.where(applies, ratios / required, np.inf)
     return Evaluation(
         self_weight=weight,
         vertical=vertical,
@@ -222,6 +245,9 @@ def evaluate(table: CaseTable, width: float | np.ndarray, thickness: float | np.
         friction=friction,
         cohesion=cohesion,
         passive=passive,
-        ratios=ratios,
-        normalized=normalized,
+        overturning_ratio=np.broadcast_to(ot_ratio, np.shape(vertical)),
+        sliding_ratio=np.broadcast_to(sl_ratio, np.shape(vertical)),
+        bearing_ratio=np.broadcast_to(br_ratio, np.shape(vertical)),
+        required=table.required,
+        applies=table.applies,
     )

@@ -1,0 +1,82 @@
+"""Engine benchmark: prints figures (not a test; timings on shared machines are noisy).
+
+    python tests/benchmarks/bench_engine.py
+
+Targets on a 2-core machine: one wall checked (all combinations) < 1 ms; one wall sized on a
+96 x 48 grid < 20 ms median; ``kernline check`` start-to-exit < 0.5 s; 1,000 walls sized from the
+command line (figure reported).
+"""
+
+from __future__ import annotations
+
+import copy
+import json
+import statistics
+import subprocess
+import sys
+import tempfile
+import time
+from dataclasses import replace
+from pathlib import Path
+
+from engine.model import INCH, SizingBounds
+from engine.project_file import load_project, parse_project
+from engine.resources import resource_path
+from engine.results import check_wall
+from engine.sizing import candidate_grid, size_footing
+
+
+def median_time(fn, repeat: int) -> tuple[float, float]:
+    times = []
+    for _ in range(repeat):
+        t = time.perf_counter()
+        fn()
+        times.append(time.perf_counter() - t)
+    times.sort()
+    return statistics.median(times), times[int(0.95 * (len(times) - 1))]
+
+
+def main() -> None:
+    doc = load_project(resource_path("demo.kernline"))
+    project = doc.project
+    wall = project.walls[0]
+    n_cases = len(check_wall(project, wall).cases)
+    med, p95 = median_time(lambda: check_wall(project, wall), 3000)
+    print(f"check one wall ({n_cases} cases), governing ratios: median {med * 1e3:.3f} ms, p95 {p95 * 1e3:.3f} ms (target < 1 ms)")
+    med, p95 = median_time(lambda: check_wall(project, wall).cases[0], 2000)
+    print(f"check one wall with every case record built:    median {med * 1e3:.3f} ms, p95 {p95 * 1e3:.3f} ms")
+
+    bounds = SizingBounds(width_min=12 * INCH, width_max=107 * INCH, width_step=INCH, thickness_min=12 * INCH, thickness_max=59 * INCH, thickness_step=INCH)
+    big = replace(wall, sizing=bounds)
+    widths, thicknesses = candidate_grid(big)
+    assert (widths.size, thicknesses.size) == (96, 48)
+    med, p95 = median_time(lambda: size_footing(project, big), 60)
+    print(f"size one wall on a {widths.size} x {thicknesses.size} grid ({n_cases} cases): median {med * 1e3:.2f} ms, p95 {p95 * 1e3:.2f} ms (target < 20 ms)")
+
+    with tempfile.TemporaryDirectory() as tmp:
+        demo = str(resource_path("demo.kernline"))
+        runs = []
+        for _ in range(10):
+            t = time.perf_counter()
+            subprocess.run([sys.executable, "-m", "app.cli", "check", demo], capture_output=True, check=False)
+            runs.append(time.perf_counter() - t)
+        print(f"kernline check demo, start to exit: median {statistics.median(runs):.3f} s, min {min(runs):.3f} s (target < 0.5 s)")
+
+        raw = json.loads(resource_path("demo.kernline").read_text(encoding="utf-8"))
+        walls = []
+        for i in range(1000):
+            w = copy.deepcopy(raw["walls"][i % len(raw["walls"])])
+            w["id"] = f"W{i:04d}"
+            walls.append(w)
+        raw["walls"] = walls
+        parse_project(raw)  # valid
+        path = Path(tmp) / "thousand.kernline"
+        path.write_text(json.dumps(raw), encoding="utf-8")
+        t = time.perf_counter()
+        subprocess.run([sys.executable, "-m", "app.cli", "size", str(path)], capture_output=True, check=False)
+        elapsed = time.perf_counter() - t
+        print(f"kernline size, 1,000 walls (demo walls repeated, grids of 1,800-3,145 candidates): {elapsed:.2f} s ({elapsed:.2f} ms per wall)")
+
+
+if __name__ == "__main__":
+    main()

@@ -1,0 +1,98 @@
+"""The headless ``kernline`` commands: exit codes, messages, JSON, --write, and no Qt import."""
+
+import json
+import subprocess
+import sys
+
+import pytest
+
+from app import cli
+from engine.resources import resource_path
+
+DEMO = str(resource_path("demo.kernline"))
+
+
+def run(*args: str) -> subprocess.CompletedProcess:
+    return subprocess.run([sys.executable, "-m", "app.cli", *args], capture_output=True, text=True, timeout=120)
+
+
+def test_check_demo_prints_table_and_exits_1_for_the_failing_wall(capsys):
+    """The demo has one wall (C3) that fails bearing as drawn: exit 1, and the table says so."""
+    code = cli.main(["check", DEMO])
+    out = capsys.readouterr().out
+    assert code == 1
+    assert "C3" in out and "FAIL" in out and "NG" in out
+    assert "licensed engineer" in out
+
+
+def test_check_json_follows_the_results_format(capsys):
+    """--json prints format kernline-results v1 with governing cases and every case."""
+    cli.main(["check", DEMO, "--json"])
+    doc = json.loads(capsys.readouterr().out)
+    assert doc["format"] == "kernline-results" and doc["version"] == 1
+    wall = doc["walls"][0]
+    assert set(wall["governing"]) == {"overturning", "sliding", "bearing"}
+    assert "q_max" in wall["governing"]["bearing"]
+    assert {"combination", "direction", "vertical", "lateral"} <= set(wall["cases"][0])
+    assert set(wall["footing"]) == {"width", "thickness", "length"}
+
+
+def test_bad_input_exits_2_with_the_field_and_no_traceback(tmp_path):
+    raw = json.loads(resource_path("demo.kernline").read_text(encoding="utf-8"))
+    raw["walls"][1]["footing"]["width"] = "24"
+    path = tmp_path / "bad.kernline"
+    path.write_text(json.dumps(raw), encoding="utf-8")
+    result = run("check", str(path))
+    assert result.returncode == 2
+    assert 'walls[1].footing.width: expected a length such as "24 in", got "24"' in result.stderr
+    assert "Traceback" not in result.stderr + result.stdout
+
+
+def test_missing_file_exits_2(tmp_path):
+    result = run("check", str(tmp_path / "nope.kernline"))
+    assert result.returncode == 2 and "no such file" in result.stderr
+
+
+def test_size_write_stores_sizes_and_keeps_the_rest(tmp_path, capsys):
+    """size --write changes only footing sizes; afterwards every wall passes its check."""
+    path = tmp_path / "demo.kernline"
+    assert cli.main(["demo", "--save", str(path)]) == 0
+    raw = json.loads(path.read_text(encoding="utf-8"))
+    raw["x-office"] = {"job": "keep me"}
+    path.write_text(json.dumps(raw, indent=2), encoding="utf-8")
+    assert cli.main(["size", str(path), "--write"]) == 0
+    after = json.loads(path.read_text(encoding="utf-8"))
+    assert after["x-office"] == {"job": "keep me"}
+    for before_wall, after_wall in zip(raw["walls"], after["walls"], strict=True):
+        assert {k: v for k, v in before_wall.items() if k != "footing"} == {k: v for k, v in after_wall.items() if k != "footing"}
+        assert after_wall["footing"]["width"].endswith(" in")
+    capsys.readouterr()
+    assert cli.main(["check", str(path)]) == 0
+
+
+def test_size_json_carries_the_sizing_record(capsys):
+    cli.main(["size", DEMO, "--json"])
+    doc = json.loads(capsys.readouterr().out)
+    sizing = doc["walls"][2]["sizing"]
+    assert sizing["feasible"] is True
+    assert sizing["candidates"] > 1000
+    assert doc["walls"][2]["footing"]["width"] == pytest.approx(sizing["width"])
+
+
+def test_headless_commands_do_not_import_qt(tmp_path):
+    """check and size must run where Qt is absent: they import no PySide6 or pyqtgraph."""
+    code = (
+        "import sys; from app import cli; "
+        f"cli.main(['check', {DEMO!r}]); cli.main(['size', {DEMO!r}]); "
+        "bad = [m for m in sys.modules if m.startswith(('PySide6', 'pyqtgraph', 'reportlab'))]; "
+        "print('QT', bad); sys.exit(1 if bad else 0)"
+    )
+    result = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, timeout=120)
+    assert result.returncode == 0, result.stdout[-500:] + result.stderr[-500:]
+
+
+def test_version(capsys):
+    with pytest.raises(SystemExit) as exit_:
+        cli.main(["--version"])
+    assert exit_.value.code == 0
+    assert capsys.readouterr().out.startswith("kernline ")
