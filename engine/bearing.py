@@ -20,14 +20,14 @@ from .model import BearingBasis
 ArrayLike = float | np.ndarray
 
 
-def compared_pressure(q_max: ArrayLike, basis: BearingBasis, soil_unit_weight: float, cover: float, thickness: ArrayLike) -> ArrayLike:
+def compared_pressure(q_max: ArrayLike, basis: BearingBasis, soil_unit_weight: float, cover: float, thickness: ArrayLike) -> np.ndarray:
     """q_max for a gross allowable; q_max - gs (c + D) for a net allowable (Pa)."""
     if basis is BearingBasis.NET:
-        return np.subtract(q_max, soil_unit_weight * np.add(cover, thickness))
+        return np.asarray(np.subtract(q_max, soil_unit_weight * np.add(cover, thickness)))
     return np.asarray(q_max)
 
 
-def allowable_pressure(allowable: float, increase: float, wind_or_seismic: ArrayLike) -> ArrayLike:
+def allowable_pressure(allowable: float, increase: float, wind_or_seismic: ArrayLike) -> np.ndarray:
     """The allowable, times the increase in combinations that carry W or E (Pa)."""
     return np.where(wind_or_seismic, allowable * increase, allowable)
 

@@ -22,7 +22,7 @@ def toe_arm(x: ArrayLike, length: float, toe_sign: int) -> ArrayLike:
     return length - x if toe_sign > 0 else x
 
 
-def vertical_toe_moments(force: ArrayLike, arm: ArrayLike) -> tuple[ArrayLike, ArrayLike]:
+def vertical_toe_moments(force: ArrayLike, arm: ArrayLike) -> tuple[np.ndarray, np.ndarray]:
     """Split the moment of factored vertical force P (downward positive) at ``arm`` about the toe.
 
     Returns:
@@ -32,7 +32,7 @@ def vertical_toe_moments(force: ArrayLike, arm: ArrayLike) -> tuple[ArrayLike, A
     return np.maximum(moment, 0.0), np.maximum(-moment, 0.0)
 
 
-def lateral_moment(force: ArrayLike, height: ArrayLike, thickness: ArrayLike) -> ArrayLike:
+def lateral_moment(force: ArrayLike, height: ArrayLike, thickness: ArrayLike) -> np.ndarray:
     """Overturning moment (N*m) of shear H applied ``height`` above the top of a footing D thick.
 
     M = H (h + D): the arm runs to the base of the footing, about which the footing tips.

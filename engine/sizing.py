@@ -124,6 +124,8 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
     passes = allowed & (normalized >= 1.0 - 1e-9)
 
     area = thicknesses[:, None] * widths[None, :]
+    width: float | None
+    thickness: float | None
     if passes.any():
         rows, cols = np.nonzero(passes)
         # least B*D; ties to the thinner, then the narrower
@@ -133,7 +135,7 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
         message = _why_smallest(check_normalized, passes, row, col)
         suggestions: tuple[str, ...] = ()
     else:
-        width = thickness = None
+        width, thickness = None, None
         message, suggestions = _diagnose(project, wall, table, widths, thicknesses, check_normalized, allowed)
     return SizingResult(
         wall_id=wall.id, widths=widths, thicknesses=thicknesses, allowed=np.array(allowed), passes=passes,

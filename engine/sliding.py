@@ -24,19 +24,19 @@ ArrayLike = float | np.ndarray
 COHESION_CAP = 0.5
 
 
-def friction_resistance(friction: float, vertical: ArrayLike) -> ArrayLike:
+def friction_resistance(friction: float, vertical: ArrayLike) -> np.ndarray:
     """mu * N while N > 0, else 0 (N)."""
-    return friction * np.maximum(vertical, 0.0)
+    return np.asarray(friction * np.maximum(vertical, 0.0))
 
 
-def cohesion_resistance(cohesion: float, width: ArrayLike, contact_length: ArrayLike, vertical: ArrayLike) -> ArrayLike:
+def cohesion_resistance(cohesion: float, width: ArrayLike, contact_length: ArrayLike, vertical: ArrayLike) -> np.ndarray:
     """min(c * B * a, 0.5 N), never below zero (N)."""
     if cohesion == 0.0:
         return np.zeros(np.broadcast_shapes(np.shape(width), np.shape(contact_length), np.shape(vertical)))
     return np.maximum(np.minimum(cohesion * np.multiply(width, contact_length), COHESION_CAP * np.asarray(vertical)), 0.0)
 
 
-def passive_resistance(passive: float, width: ArrayLike, cover: float, thickness: ArrayLike, ignore_depth: float) -> ArrayLike:
+def passive_resistance(passive: float, width: ArrayLike, cover: float, thickness: ArrayLike, ignore_depth: float) -> np.ndarray:
     """K B ((c + D)^2 - z0^2) / 2 with z0 = max(c, ignored depth); 0 when z0 >= c + D (N)."""
     z0 = max(cover, ignore_depth)
     bottom = np.add(cover, thickness)

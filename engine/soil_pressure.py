@@ -31,10 +31,10 @@ class PressureDistribution:
         stable: False where N <= 0 or |e| >= L/2 (the footing cannot be in equilibrium on the soil).
     """
 
-    q_max: ArrayLike
-    q_min: ArrayLike
-    contact_length: ArrayLike
-    stable: ArrayLike
+    q_max: np.ndarray
+    q_min: np.ndarray
+    contact_length: np.ndarray
+    stable: np.ndarray
 
 
 def resultant_eccentricity(moment_about_centre: ArrayLike, vertical: ArrayLike) -> np.ndarray:

@@ -82,7 +82,7 @@ def registry() -> pint.UnitRegistry:
         import pint
 
         try:
-            reg = pint.UnitRegistry(cache_folder=":auto:")
+            reg: pint.UnitRegistry = pint.UnitRegistry(cache_folder=":auto:")
         except Exception:  # pragma: no cover - a read-only home: build without the cache
             reg = pint.UnitRegistry()
         reg.load_definitions(str(resource_path("kernline_units.txt")))
