@@ -16,6 +16,7 @@ import numpy as np
 
 from .model import ALL_CHECKS, Check, Project, Wall
 from .stability import CaseTable, case_table, evaluate
+from .units import format_length
 
 # Relative tolerance that lets the upper bound of a range be reached despite floating-point steps.
 GRID_TOLERANCE = 1e-6
@@ -173,7 +174,8 @@ def _diagnose(
         return "even the widest candidate is narrower than the wall it carries", ("raise width_max above the wall thickness",)
     worst_check, worst = min(failing, key=lambda t: t[1]) if failing else (ALL_CHECKS[0], 1.0)
     described = ", ".join(f"{c.value} reaches {v:.0%} of its required ratio" for c, v in failing)
-    message = f"no candidate passes; at the largest size ({widths[-1]:.3f} m x {thicknesses[-1]:.3f} m) {described}"
+    size = f"{format_length(float(widths[-1]), project.units)} x {format_length(float(thicknesses[-1]), project.units)}"
+    message = f"no candidate passes; at the largest size ({size}) {described}"
     suggestions = []
     for check, value in failing:
         helps = []

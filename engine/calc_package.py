@@ -1,0 +1,1483 @@
+"""The calculation package as plain data: sections of headings, text, tables, equations and drawings.
+
+:func:`build_package` reads the engine's results (:mod:`engine.results`, :mod:`engine.sizing`,
+:mod:`engine.loads`, :mod:`engine.soil_pressure`) and lays them out the way a careful hand calc reads:
+inputs, sketches, each governing check's equation written out with the numbers put in, the result in
+words. Every result printed is an engine value formatted for display; the substituted expressions
+only repeat inputs and engine values, so a reviewer can redo the arithmetic. This module imports no
+PDF library: :mod:`engine.report` renders what it builds.
+
+Text is plain (never markup). Program-written formulas may mark subscripts as ``M_{OT}``
+(:func:`formula`); user text is kept in :class:`Run` objects and is never interpreted.
+"""
+
+from __future__ import annotations
+
+import datetime as _dt
+import math
+import re
+from collections.abc import Sequence
+from dataclasses import dataclass, field, replace
+
+from . import CAUTION, __version__
+from .combinations import combinations_of
+from .errors import InputError
+from .loads import VerticalResultant, lateral_resultants, vertical_resultants
+from .model import (
+    ALL_CHECKS,
+    BearingBasis,
+    Check,
+    LateralLoad,
+    LineLoad,
+    LoadCombination,
+    Method,
+    PointLoad,
+    Project,
+    Wall,
+)
+from .results import CaseResult, Governing, WallResult, check_wall
+from .schedule import schedule_rows
+from .sizing import SizingResult, size_footing
+from .soil_pressure import PressureDiagram, pressure_diagram
+from .units import Kind, format_length, format_quantity, to_display, unit_label
+
+PROGRAM = "Kernline"
+
+# Drawing area available on a sheet (points, 1/72 in): the renderer's frame is at least this big.
+CONTENT_WIDTH = 522.0
+
+# ---------------------------------------------------------------------------------------------
+# Text
+# ---------------------------------------------------------------------------------------------
+
+
+@dataclass(frozen=True, slots=True)
+class Run:
+    """A piece of text printed literally, optionally as a subscript or in bold."""
+
+    text: str
+    sub: bool = False
+    bold: bool = False
+
+
+Rich = tuple[Run, ...]
+
+_SUBSCRIPT = re.compile(r"_\{([^}]*)\}")
+
+
+def formula(text: str, bold: bool = False) -> Rich:
+    """Program-written text with ``_{...}`` subscripts (never call this on user text)."""
+    runs: list[Run] = []
+    pos = 0
+    for m in _SUBSCRIPT.finditer(text):
+        if m.start() > pos:
+            runs.append(Run(text[pos : m.start()], bold=bold))
+        runs.append(Run(m.group(1), sub=True, bold=bold))
+        pos = m.end()
+    if pos < len(text):
+        runs.append(Run(text[pos:], bold=bold))
+    return tuple(runs)
+
+
+def plain(text: str, bold: bool = False) -> Rich:
+    """User or program text printed exactly as given."""
+    return (Run(text, bold=bold),)
+
+
+def rich_text(value: Rich | str) -> str:
+    """The characters of a rich text, without its styling."""
+    return value if isinstance(value, str) else "".join(r.text for r in value)
+
+
+Cell = Rich | str
+
+# ---------------------------------------------------------------------------------------------
+# Blocks
+# ---------------------------------------------------------------------------------------------
+
+
+@dataclass(frozen=True, slots=True)
+class Heading:
+    text: Cell
+    level: int = 1
+
+
+@dataclass(frozen=True, slots=True)
+class Para:
+    """A paragraph; ``style`` is "body", "small", "note", "caution", "pass" or "fail"."""
+
+    text: Cell
+    style: str = "body"
+
+
+@dataclass(frozen=True, slots=True)
+class Bullets:
+    items: tuple[Cell, ...]
+    style: str = "body"
+
+
+@dataclass(frozen=True, slots=True)
+class Table:
+    """A table. ``widths`` are fractions of the frame width; ``fail_rows`` are printed in bold.
+
+    ``align`` gives "L", "R" or "C" per column.
+    """
+
+    headers: tuple[Cell, ...]
+    rows: tuple[tuple[Cell, ...], ...]
+    widths: tuple[float, ...]
+    align: str = ""
+    font_size: float = 8.0
+    fail_rows: tuple[int, ...] = ()
+    repeat_header: bool = True
+
+
+@dataclass(frozen=True, slots=True)
+class KeyValues:
+    """Pairs of label and value, laid out in ``columns`` label/value column pairs."""
+
+    pairs: tuple[tuple[Cell, Cell], ...]
+    columns: int = 2
+
+
+@dataclass(frozen=True, slots=True)
+class Equation:
+    """``symbol = formula = numbers = result`` (formula and numbers may be absent)."""
+
+    symbol: Rich
+    formula: Rich | None
+    numbers: Cell | None
+    result: Cell
+    note: Cell = ""
+
+
+@dataclass(frozen=True, slots=True)
+class Verdict:
+    """A result in words, printed prominently (``passes`` picks the wording's emphasis)."""
+
+    passes: bool
+    text: Cell
+
+
+# Drawing primitives, in points with y up; (0, 0) at the drawing's lower-left corner.
+
+
+@dataclass(frozen=True, slots=True)
+class Line:
+    x1: float
+    y1: float
+    x2: float
+    y2: float
+    width: float = 0.6
+    dash: bool = False
+    color: str = "ink"
+
+
+@dataclass(frozen=True, slots=True)
+class Rect:
+    x: float
+    y: float
+    w: float
+    h: float
+    fill: str = "none"
+    width: float = 0.8
+
+
+@dataclass(frozen=True, slots=True)
+class Polygon:
+    points: tuple[tuple[float, float], ...]
+    fill: str = "none"
+    width: float = 0.8
+
+
+@dataclass(frozen=True, slots=True)
+class Arrow:
+    """From tail (x1, y1) to head (x2, y2)."""
+
+    x1: float
+    y1: float
+    x2: float
+    y2: float
+    width: float = 0.8
+    color: str = "load"
+
+
+@dataclass(frozen=True, slots=True)
+class Label:
+    """Text at (x, y): ``anchor`` "start", "middle" or "end"; ``angle`` in degrees."""
+
+    x: float
+    y: float
+    text: str
+    anchor: str = "start"
+    size: float = 6.5
+    bold: bool = False
+    angle: float = 0.0
+    color: str = "ink"
+
+
+@dataclass(frozen=True, slots=True)
+class Dimension:
+    """A horizontal (y1 == y2) or vertical (x1 == x2) dimension line offset from the measured points."""
+
+    x1: float
+    y1: float
+    x2: float
+    y2: float
+    text: str
+    offset: float = 12.0
+
+
+Shape = Line | Rect | Polygon | Arrow | Label | Dimension
+
+
+@dataclass(frozen=True, slots=True)
+class Drawing:
+    width: float
+    height: float
+    shapes: tuple[Shape, ...]
+    caption: str = ""
+
+
+@dataclass(frozen=True, slots=True)
+class DrawingRow:
+    """Drawings side by side."""
+
+    drawings: tuple[Drawing, ...]
+
+
+@dataclass(frozen=True, slots=True)
+class Group:
+    """Blocks kept on one sheet when they fit."""
+
+    blocks: tuple[Block, ...]
+
+
+@dataclass(frozen=True, slots=True)
+class Contents:
+    """The list of sections with their sheet numbers (the renderer fills in the numbers)."""
+
+
+Block = Heading | Para | Bullets | Table | KeyValues | Equation | Verdict | Drawing | DrawingRow | Group | Contents
+
+
+@dataclass(frozen=True, slots=True)
+class Section:
+    """A part of the package that starts on a new sheet; ``subject`` goes in the title block."""
+
+    key: str
+    title: str
+    subject: str
+    blocks: tuple[Block, ...]
+
+
+@dataclass(frozen=True, slots=True)
+class TitleBlock:
+    project_name: str
+    project_number: str
+    client: str
+    address: str
+    prepared_by: str
+    date: str
+    checked_by: str
+    revision: str
+    program: str
+    caution: str
+
+
+@dataclass(frozen=True, slots=True)
+class Package:
+    title: TitleBlock
+    units: str
+    sections: tuple[Section, ...]
+    wall_ids: tuple[str, ...] = field(default_factory=tuple)
+
+
+# ---------------------------------------------------------------------------------------------
+# Formatting (display only: every number comes from the engine or the inputs)
+# ---------------------------------------------------------------------------------------------
+
+
+class _Fmt:
+    def __init__(self, units: str) -> None:
+        self.units = units
+
+    def length(self, value: float) -> str:
+        return format_length(value, self.units)
+
+    def force(self, value: float) -> str:
+        return format_quantity(value, Kind.FORCE, self.units)
+
+    def moment(self, value: float) -> str:
+        return format_quantity(value, Kind.MOMENT, self.units)
+
+    def pressure(self, value: float) -> str:
+        return format_quantity(value, Kind.PRESSURE, self.units)
+
+    def line_load(self, value: float) -> str:
+        return format_quantity(value, Kind.LINE_LOAD, self.units)
+
+    def unit_weight(self, value: float) -> str:
+        return format_quantity(value, Kind.UNIT_WEIGHT, self.units)
+
+    def gradient(self, value: float) -> str:
+        return format_quantity(value, Kind.PRESSURE_GRADIENT, self.units)
+
+    def number(self, value: float, kind: Kind) -> str:
+        """The display number of ``kind`` without its unit (for tables whose header names the unit)."""
+        if value is None or math.isnan(value):
+            return "—"
+        if math.isinf(value):
+            return "∞"
+        info = kind.info
+        decimals = info.decimals_us if self.units == "US" else info.decimals_si
+        return f"{to_display(value, kind, self.units):,.{decimals}f}"
+
+    def unit(self, kind: Kind) -> str:
+        return unit_label(kind, self.units)
+
+
+def factor_text(value: float) -> str:
+    """A load factor as printed in the combination names: up to four decimals, trailing zeros cut."""
+    text = f"{value:.4f}".rstrip("0").rstrip(".")
+    return text if text not in ("-0", "") else "0"
+
+
+def ratio_text(ratio: float, required: float, passes: bool) -> str:
+    """A ratio to two decimals; more where two would contradict the verdict (0.996 shown as 1.00)."""
+    if math.isinf(ratio):
+        return "no demand"
+    for decimals in (2, 3, 4, 6):
+        shown = round(ratio, decimals)
+        if (shown >= round(required, decimals)) == passes:
+            return f"{ratio:.{decimals}f}"
+    return f"{ratio:.6f}"
+
+
+def direction_text(direction: str) -> str:
+    return {"+": "+", "-": "−", "none": "—"}.get(direction, direction)
+
+
+def direction_words(direction: str) -> str:
+    return {
+        "+": "lateral load toward the end x = L (direction +)",
+        "-": "lateral load toward the end x = 0 (direction −)",
+        "none": "no lateral load",
+    }.get(direction, direction)
+
+
+def case_name(combination: str, direction: str) -> str:
+    return combination if direction == "none" else f"{combination} ({direction_text(direction)})"
+
+
+def _clean(text: str) -> str:
+    """User text without control characters (they have no glyph and can upset PDF text)."""
+    return "".join(ch for ch in text if ch in "\n\t" or ord(ch) >= 32 and ord(ch) != 127)
+
+
+_CHECK_WORD = {Check.OVERTURNING: "overturning", Check.SLIDING: "sliding", Check.BEARING: "bearing"}
+_CHECK_TITLE = {Check.OVERTURNING: "Overturning", Check.SLIDING: "Sliding", Check.BEARING: "Soil bearing"}
+_CHECK_RATIO = {
+    Check.OVERTURNING: "M_{R} / M_{OT}",
+    Check.SLIDING: "R / V",
+    Check.BEARING: "q_{a} / q",
+}
+
+# ---------------------------------------------------------------------------------------------
+# The package
+# ---------------------------------------------------------------------------------------------
+
+
+@dataclass(frozen=True, slots=True)
+class WallReport:
+    """What the wall sheets print: the wall, its results on the current footing and its sizing."""
+
+    wall: Wall
+    result: WallResult
+    sizing: SizingResult | None
+    sized_result: WallResult | None
+    sizing_error: str = ""
+
+
+def select_walls(project: Project, wall_ids: Sequence[str] | None) -> tuple[Wall, ...]:
+    """The walls named by ``wall_ids`` in the order given (all walls when None).
+
+    Raises:
+        InputError: an id the project does not have, or an empty selection.
+    """
+    if wall_ids is None:
+        return project.walls
+    by_id = {w.id: w for w in project.walls}
+    ids = [str(i).strip() for i in wall_ids if str(i).strip()]
+    if not ids:
+        raise InputError("walls", "no wall ids given; name one or more, such as " + ",".join(list(by_id)[:2]))
+    unknown = [i for i in ids if i not in by_id]
+    if unknown:
+        raise InputError(
+            "walls", f"no wall {', '.join(repr(u) for u in unknown)} in the project; its walls are {', '.join(by_id)}"
+        )
+    seen: list[str] = []
+    for i in ids:
+        if i not in seen:
+            seen.append(i)
+    return tuple(by_id[i] for i in seen)
+
+
+def wall_report(project: Project, wall: Wall) -> WallReport:
+    """Check the wall on its current footing and size it (engine calls only)."""
+    result = check_wall(project, wall)
+    try:
+        sizing = size_footing(project, wall)
+    except InputError as err:
+        return WallReport(wall, result, None, None, err.message)
+    sized = None
+    if sizing.feasible and sizing.width is not None and sizing.thickness is not None:
+        footing = replace(wall.footing, width=sizing.width, thickness=sizing.thickness)
+        sized = check_wall(project, replace(wall, footing=footing))
+    return WallReport(wall, result, sizing, sized)
+
+
+def build_package(
+    project: Project,
+    wall_ids: Sequence[str] | None = None,
+    *,
+    soil_report: str | None = None,
+    revision: str | None = None,
+    issued: _dt.date | str | None = None,
+    checked_by: str = "",
+) -> Package:
+    """Assemble the calculation package of ``project`` (the walls named, or all of them).
+
+    Args:
+        project: the parsed project.
+        wall_ids: walls to include, in order (None: all).
+        soil_report: the geotechnical report the soil values come from (the project file's
+            ``soil.report`` text); left as a blank to fill when None.
+        revision: the revision printed in the title block ("0" when None).
+        issued: the date printed in the title block (today when None).
+        checked_by: the checker's name; blank to fill by hand when empty.
+    """
+    walls = select_walls(project, wall_ids)
+    fmt = _Fmt(project.units)
+    reports = tuple(wall_report(project, w) for w in walls)
+    if issued is None:
+        issued = _dt.date.today()
+    date_text = issued.isoformat() if isinstance(issued, _dt.date) else _clean(str(issued))
+    info = project.info
+    title = TitleBlock(
+        project_name=_clean(info.name) or "(project name not given)",
+        project_number=_clean(info.number),
+        client=_clean(info.client),
+        address=_clean(info.address),
+        prepared_by=_clean(info.engineer),
+        date=date_text,
+        checked_by=_clean(checked_by),
+        revision=_clean(revision) if revision else "0",
+        program=f"{PROGRAM} {__version__}",
+        caution=CAUTION,
+    )
+    report_text = _clean(soil_report).strip() if soil_report else ""
+    sections = [
+        _cover(project, reports, title),
+        _design_basis(project, reports, fmt, report_text),
+        _references_and_notes(project, fmt),
+        _cautions(project, report_text),
+        _schedule(project, reports, fmt),
+    ]
+    for r in reports:
+        sections.append(_wall_section(project, r, fmt))
+    for r in reports:
+        sections.append(_appendix(project, r, fmt))
+    return Package(title=title, units=project.units, sections=tuple(sections), wall_ids=tuple(w.id for w in walls))
+
+
+# ---------------------------------------------------------------------------------------------
+# Front matter
+# ---------------------------------------------------------------------------------------------
+
+
+def _cover(project: Project, reports: Sequence[WallReport], title: TitleBlock) -> Section:
+    info = project.info
+    n_fail = sum(not r.result.passes for r in reports)
+    failing = [r.wall.id for r in reports if not r.result.passes]
+    ids = ", ".join(r.wall.id for r in reports)
+    scope = (
+        f"This package covers {len(reports)} of the project's {len(project.walls)} wall(s): {ids}."
+        if len(reports) != len(project.walls)
+        else f"This package covers all {len(reports)} wall(s) of the project: {ids}."
+    )
+    if n_fail:
+        verdict = Verdict(False, f"{n_fail} of {len(reports)} wall(s) FAIL on their current footing: {', '.join(failing)}. See the summary schedule and the wall sheets.")
+    else:
+        verdict = Verdict(True, f"All {len(reports)} wall(s) pass every check on their current footing.")
+    blocks: list[Block] = [
+        Heading("Calculation package"),
+        Para("Global stability of concrete strip footings under shear walls: overturning, sliding and soil bearing, "
+             "in every load combination and both directions of the lateral load."),
+        Heading("Project information", 2),
+        KeyValues(
+            (
+                ("Project", plain(title.project_name)),
+                ("Project number", plain(_clean(info.number) or "—")),
+                ("Client", plain(_clean(info.client) or "—")),
+                ("Site address", plain(_clean(info.address) or "—")),
+                ("Engineer", plain(_clean(info.engineer) or "—")),
+                ("Display units", "US customary (ft, in, kip, psf)" if project.units == "US" else "SI (m, kN, kPa)"),
+                ("Prepared with", f"{title.program} (program name and version; every input is printed in this package)"),
+            ),
+            columns=1,
+        ),
+        Para(scope),
+        verdict,
+        Para(CAUTION, "caution"),
+    ]
+    if info.notes.strip():
+        blocks += [Heading("Project notes", 2), Para(plain(_clean(info.notes)))]
+    blocks += [Heading("Contents", 2), Contents()]
+    return Section("cover", "Project information and contents", "Project information", tuple(blocks))
+
+
+_METHOD_TEXT = {
+    Method.ASCE7_16_ASD: (
+        "ASCE 7-16 allowable stress design: the basic combinations of section 2.4.1 with the seismic load effect of "
+        "section 12.4.2.3 (ASD forms of section 2.4.5). The vertical seismic effect Ev = 0.2 S_{DS} D (12.4.2.2) is "
+        "included in the dead-load factor of the seismic combinations. Wind W and seismic E are entered at strength "
+        "level; the combinations apply 0.6W and 0.7E."
+    ),
+    Method.SERVICE_FS: (
+        "Service loads with factors of safety (common practice): unfactored D + W and D + E checked against the "
+        "required ratios below; the gravity combinations are checked for bearing only."
+    ),
+}
+
+
+def _combination_rows(combos: Sequence[LoadCombination]) -> tuple[tuple[Cell, ...], ...]:
+    rows = []
+    for i, c in enumerate(combos, start=1):
+        factors = ", ".join(f"{case.value} × {factor_text(f)}" for case, f in c.factors if f != 0.0) or "—"
+        checks = ", ".join(_CHECK_WORD[ch] for ch in ALL_CHECKS if ch in c.checks)
+        rows.append((str(i), plain(_clean(c.name)), factors, checks))
+    return tuple(rows)
+
+
+def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, soil_report: str) -> Section:
+    crit = project.criteria
+    soil = project.soil
+    combos = combinations_of(crit)
+    if crit.custom_combinations:
+        method = "The project's own load combinations (they replace the preset of the design method: " + crit.method.value + ")."
+    else:
+        method = _METHOD_TEXT[crit.method]
+    req = crit.required
+    increase = (
+        f"× {factor_text(crit.bearing_increase)} in combinations with W or E (a value the geotechnical report, or IBC 2021 "
+        "1806.1 with the alternative combinations, must permit)"
+        if crit.bearing_increase != 1.0
+        else "none (× 1.0 in every combination)"
+    )
+    unit_weights = sorted({r.wall.footing.unit_weight for r in reports})
+    if len(unit_weights) == 1:
+        concrete = f"{fmt.unit_weight(unit_weights[0])} (every wall in this package)"
+    else:
+        concrete = "; ".join(f"{r.wall.id}: {fmt.unit_weight(r.wall.footing.unit_weight)}" for r in reports)
+    basis = "gross (compared with the peak pressure)" if soil.bearing_basis is BearingBasis.GROSS else (
+        "net (compared with the peak pressure less the overburden γ_{s}(c + D))"
+    )
+    blocks: list[Block] = [
+        Heading("Design basis"),
+        Heading("Method and load combinations", 2),
+        Para(formula(method)),
+        Table(
+            ("No.", "Combination", "Factors", "Checks it applies to"),
+            _combination_rows(combos),
+            (0.06, 0.38, 0.32, 0.24),
+            align="CLLL",
+        ),
+        Heading("Required ratios and seismic and bearing settings", 2),
+        KeyValues(
+            (
+                (formula("Overturning, M_{R} / M_{OT} ≥"), f"{req.overturning:.2f}"),
+                ("Sliding, R / V ≥", f"{req.sliding:.2f}"),
+                (formula("Bearing, q_{a} / q ≥"), f"{req.bearing:.2f}"),
+                (formula("S_{DS}"), f"{crit.sds:g}"),
+                ("Allowable bearing increase", increase),
+            ),
+            columns=1,
+        ),
+        Heading("Soil values", 2),
+        KeyValues(
+            (
+                (formula("Allowable bearing pressure q_{a}"), fmt.pressure(soil.allowable_bearing)),
+                ("Basis of the allowable", formula(basis)),
+                ("Friction coefficient μ (on the vertical load N)", f"{soil.friction:g}"),
+                ("Cohesion c (sliding; capped at 0.5 N)", fmt.pressure(soil.cohesion)),
+                ("Passive pressure K, per depth", fmt.gradient(soil.passive)),
+                ("Passive ignored from grade to depth", fmt.length(soil.passive_ignore)),
+                (formula("Soil unit weight γ_{s}"), fmt.unit_weight(soil.unit_weight)),
+                ("Source of the soil values", plain(soil_report) if soil_report else "not stated in the project file: ________________________________"),
+            ),
+            columns=1,
+        ),
+        Heading("Materials", 2),
+        KeyValues(((formula("Concrete unit weight γ_{c}"), concrete),), columns=1),
+        Heading("How the checks are made", 2),
+        Bullets(
+            (
+                formula("Overturning: moments about the toe (the footing end the lateral load pushes toward). "
+                        "Ratio M_{R} / M_{OT}; downward loads resist, uplift and lateral loads overturn; lateral loads act "
+                        "at their height above the top of the footing plus the footing thickness D."),
+                formula("Sliding: resistance R = friction μ N + cohesion min(c B a, 0.5 N) + passive on the footing's "
+                        "end face; ratio R / V (resisting over driving, Bowles)."),
+                formula("Soil bearing: rigid footing, linear soil pressure, no tension. Inside the kern (|e| ≤ L/6) "
+                        "q = N / (B L) (1 ± 6|e| / L); beyond it a triangular block of length a = 3 (L/2 − |e|) with "
+                        "q_{max} = 2N / (3B (L/2 − |e|)); |e| ≥ L/2 or N ≤ 0 has no equilibrium (fails). Ratio q_{a} / q_{max}."),
+                formula("Self weight of footing, stem and soil cover is dead load at the footing's mid-length, "
+                        "carried with the combination's factor on D."),
+                "Every combination is checked in both directions of the lateral load; the case with the lowest "
+                "ratio / required governs each check.",
+            )
+        ),
+    ]
+    return Section("basis", "Design basis", "Design basis", tuple(blocks))
+
+
+_REFERENCES = (
+    "ASCE/SEI 7-16, Minimum Design Loads and Associated Criteria for Buildings and Other Structures: "
+    "section 2.4.1 (basic combinations for allowable stress design), 2.4.5 (ASD combinations with seismic load "
+    "effects), 12.4.2.2 (vertical seismic load effect Ev = 0.2 S_{DS} D), 12.4.2.3 (seismic load combinations).",
+    "International Building Code 2021: section 1605 (load combinations), section 1806 (presumptive load-bearing "
+    "values: Table 1806.2; 1806.3 lateral sliding resistance, 1806.3.1 combined friction and passive resistance, "
+    "1806.3.2 cohesion-type resistance at most one-half of the dead load).",
+    "Das, B. M., Principles of Foundation Engineering: eccentrically loaded foundations (e = M / N; q_{max} = "
+    "4N / (3B (L − 2e)) beyond the kern); stability of retaining structures (overturning about the toe).",
+    "Bowles, J. E., Foundation Analysis and Design, 5th ed.: section 4-8 (footings with eccentric load, the kern); "
+    "sliding factor of safety as resisting over driving force.",
+    "Hibbeler, R. C., Statics, 14th ed., section 4.9: resultant of a distributed load.",
+)
+
+
+def _references_and_notes(project: Project, fmt: _Fmt) -> Section:
+    notes = [
+        "Scope: global stability of each wall and its strip footing in the plane of the wall (overturning, sliding, "
+        "soil bearing). Not covered here and to be checked separately: footing reinforcement, flexure and shear of "
+        "the footing, hold-down and anchor embedment, settlement, frost depth and code minimum footing sizes, and "
+        "out-of-plane loads.",
+        "Loads are as entered by the engineer of record. Vertical loads are positive downward; lateral loads are "
+        "in-plane shears at a height above the top of the footing.",
+        "Coordinates: x runs along the footing from its start end (x = 0) to x = L = extension at start + wall "
+        "length + extension at end. Direction + pushes toward x = L, direction − toward x = 0. Loads marked "
+        "\"reverses\" act at their mirror position about the wall's mid-length in direction −.",
+        "The footing is taken as rigid and the soil takes no tension. The soil pressure is checked along the "
+        "footing's length; its width B carries the pressure uniformly.",
+        "Passive resistance acts on the footing's end face of width B, from the deeper of the soil cover and the "
+        "ignored depth down to the base.",
+        "Dimensions are shown in " + ("feet and inches to the nearest 1/4 in; forces in kip to two decimals; pressures in psf." if
+                                      project.units == "US" else "metres; forces in kN; pressures in kPa."),
+        "A ratio of \"no demand\" means the case produces no overturning moment, no shear or no pressure for that check.",
+    ]
+    blocks: list[Block] = [
+        Heading("References"),
+        Bullets(tuple(formula(r) for r in _REFERENCES)),
+        Heading("General notes"),
+        Bullets(tuple(notes)),
+    ]
+    return Section("references", "References and general notes", "References and notes", tuple(blocks))
+
+
+def _cautions(project: Project, soil_report: str) -> Section:
+    source = f"the geotechnical report ({soil_report})" if soil_report else "the geotechnical report for the site"
+    blocks: list[Block] = [
+        Heading("Cautions"),
+        Para(CAUTION, "caution"),
+        Bullets(
+            (
+                "These results are for review by a licensed engineer, who takes responsibility for the design by sealing "
+                "and signing this package. They are not a design until then.",
+                "The local building code as adopted and amended by the jurisdiction governs. Where it differs from the "
+                "load combinations, factors or limits used here, the code governs and the results must be revised.",
+                f"The soil values must be those of {source}. Where the report limits bearing pressure, friction, "
+                "cohesion, passive resistance or any increase for wind or seismic load, the report governs.",
+                "The inputs printed on the wall sheets must match the structural drawings (wall lengths, footing sizes, "
+                "loads and their positions). Check them before sealing.",
+                "The checks cover global stability only; see the general notes for what is not checked.",
+            )
+        ),
+    ]
+    return Section("cautions", "Cautions", "Cautions", tuple(blocks))
+
+
+def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Section:
+    rows_in = schedule_rows(project, [r.result for r in reports])
+    rows: list[tuple[Cell, ...]] = []
+    fail_rows = []
+    for k, (r, row) in enumerate(zip(reports, rows_in, strict=True)):
+        # schedule columns: wall, label, wall length, B, D, L, then (ratio, required, case) per check, result
+        cells: list[Cell] = [plain(row[0]), plain(row[1]), f"{row[3]} × {row[4]} × {row[5]}"]
+        for j, check in enumerate(ALL_CHECKS):
+            ratio, required, case = row[6 + 3 * j : 9 + 3 * j]
+            g = r.result.governing[check]
+            if ratio == "no demand":
+                cells.append("no demand")
+            else:
+                shown = ratio_text(g.ratio, g.required, g.passes)
+                cells.append(f"{shown} / {required}\n{case}")
+        failing = [_CHECK_WORD[c] for c in ALL_CHECKS if not r.result.governing[c].passes]
+        cells.append("passes" if r.result.passes else "FAILS: " + ", ".join(failing))
+        if not r.result.passes:
+            fail_rows.append(k)
+        rows.append(tuple(cells))
+    blocks: list[Block] = [
+        Heading("Summary schedule"),
+        Para("Footing size as drawn (width B × thickness D × length L) and, for each check, the governing ratio / required "
+             "ratio with the combination and direction that govern."),
+        Table(
+            ("Wall", "Label", "Footing B × D × L", "Overturning", "Sliding", "Bearing", "Result"),
+            tuple(rows),
+            (0.07, 0.17, 0.18, 0.16, 0.16, 0.16, 0.10),
+            align="LLLLLLL",
+            font_size=7.0,
+            fail_rows=tuple(fail_rows),
+        ),
+    ]
+    sized = [r for r in reports if r.sizing is not None]
+    if sized:
+        srows = []
+        for r in sized:
+            s = r.sizing
+            assert s is not None
+            if s.feasible and s.width is not None and s.thickness is not None:
+                size = f"{fmt.length(s.width)} × {fmt.length(s.thickness)}"
+                same = _same_size(r.wall, s)
+                state = "current footing is this size" if same else ("current footing passes" if r.result.passes else "current footing FAILS")
+            else:
+                size, state = "none in the bounds passes", "revise the bounds, loads or footing length"
+            srows.append((plain(r.wall.id), size, f"{s.candidates:,}", state))
+        blocks += [
+            Heading("Smallest passing footing found by the program", 2),
+            Table(("Wall", "Smallest passing B × D", "Candidates checked", "Current footing"), tuple(srows), (0.12, 0.30, 0.20, 0.38)),
+        ]
+    blocks.append(Para(CAUTION, "note"))
+    return Section("schedule", "Summary schedule", "Summary schedule", tuple(blocks))
+
+
+def _same_size(wall: Wall, sizing: SizingResult) -> bool:
+    if sizing.width is None or sizing.thickness is None:
+        return False
+    return abs(wall.footing.width - sizing.width) < 1e-6 and abs(wall.footing.thickness - sizing.thickness) < 1e-6
+
+
+# ---------------------------------------------------------------------------------------------
+# Wall sheets
+# ---------------------------------------------------------------------------------------------
+
+
+def _wall_section(project: Project, report: WallReport, fmt: _Fmt) -> Section:
+    wall, result = report.wall, report.result
+    title = f"Wall {wall.id}" + (f": {_clean(wall.label)}" if wall.label.strip() else "")
+    blocks: list[Block] = [Heading(plain(_clean(title))), _wall_verdict(result)]
+    blocks.append(
+        DrawingRow((elevation_drawing(wall, fmt, 372.0, 210.0), section_drawing(wall, project, fmt, 140.0, 210.0)))
+    )
+    blocks += _inputs(project, wall, result, fmt)
+    blocks += _loads(wall, fmt)
+    blocks += _self_weight(project, wall, result, fmt)
+    blocks += _overturning(wall, result, fmt)
+    blocks += _sliding(project, wall, result, fmt)
+    blocks += _bearing(project, wall, result, fmt)
+    blocks += _results_table(result)
+    blocks += _sizing(project, report, fmt)
+    return Section(f"wall:{wall.id}", title, f"Wall {wall.id}", tuple(blocks))
+
+
+def _wall_verdict(result: WallResult) -> Verdict:
+    if result.passes:
+        return Verdict(True, f"Wall {result.wall_id} PASSES overturning, sliding and bearing on its current footing.")
+    parts = []
+    for check in ALL_CHECKS:
+        g = result.governing[check]
+        if not g.passes:
+            parts.append(f"{_CHECK_WORD[check]} (ratio {ratio_text(g.ratio, g.required, g.passes)} < {g.required:.2f} required, "
+                         f"{case_name(g.combination, g.direction)})")
+    return Verdict(False, f"Wall {result.wall_id} FAILS " + "; ".join(parts) + " on its current footing.")
+
+
+def _inputs(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
+    f = wall.footing
+    pairs: list[tuple[Cell, Cell]] = [
+        ("Wall length", fmt.length(wall.length)),
+        ("Wall thickness", fmt.length(wall.thickness)),
+        ("Footing width B", fmt.length(f.width)),
+        ("Footing thickness D", fmt.length(f.thickness)),
+        ("Extension at start / end", f"{fmt.length(f.extension_start)} / {fmt.length(f.extension_end)}"),
+        ("Footing length L", fmt.length(result.length)),
+        ("Soil cover c over the footing", fmt.length(f.cover)),
+        (formula("Concrete γ_{c}"), fmt.unit_weight(f.unit_weight)),
+        ("Stem wall height × thickness", f"{fmt.length(wall.stem.height)} × {fmt.length(wall.stem.thickness)}" if wall.stem.present else "no stem"),
+        (formula("Soil γ_{s}"), fmt.unit_weight(project.soil.unit_weight)),
+    ]
+    return [Heading("Inputs", 2), KeyValues(tuple(pairs), columns=2)]
+
+
+def _load_position(load: LineLoad | PointLoad | LateralLoad, fmt: _Fmt) -> str:
+    if isinstance(load, LineLoad):
+        return f"{fmt.length(load.start)} to {fmt.length(load.end)}"
+    if isinstance(load, PointLoad):
+        return f"at {fmt.length(load.at)}"
+    return f"h = {fmt.length(load.height)}"
+
+
+def _loads(wall: Wall, fmt: _Fmt) -> list[Block]:
+    verticals = iter(vertical_resultants(wall))
+    rows: list[tuple[Cell, ...]] = []
+    for i, load in enumerate(wall.loads, start=1):
+        if isinstance(load, LateralLoad):
+            kind, value, resultant, where = "lateral", fmt.force(load.value), fmt.force(load.value), "—"
+        else:
+            v = next(verticals)
+            kind = "line" if isinstance(load, LineLoad) else "point"
+            value = fmt.line_load(load.value) if isinstance(load, LineLoad) else fmt.force(load.value)
+            resultant = fmt.force(v.force)
+            where = fmt.length(v.x)
+            if load.reverses:
+                where += f" (−: {fmt.length(v.x_reversed)})"
+        label = _clean(load.label) + (" [reverses]" if getattr(load, "reverses", False) else "")
+        rows.append((str(i), kind, load.case.value, value, _load_position(load, fmt), resultant, where, plain(label)))
+    if not rows:
+        return [Heading("Loads", 2), Para("The wall carries no loads; only the self weight acts.")]
+    return [
+        Heading("Loads (as entered; positions from the wall's start end)", 2),
+        Table(
+            ("No.", "Type", "Case", "Value", "Position on wall", "Resultant P or H", "x on footing", "Label"),
+            tuple(rows),
+            (0.05, 0.07, 0.06, 0.12, 0.17, 0.13, 0.16, 0.24),
+            align="CLCRLRLL",
+            font_size=7.0,
+        ),
+        Para(formula("Resultant of a line load w from s_{1} to s_{2}: P = w (s_{2} − s_{1}) at its mid-point (Hibbeler 4.9). "
+                     "x on footing = extension at start + position; a reversing load acts at the position after \"−:\" "
+                     "in direction −."), "small"),
+    ]
+
+
+def _self_weight(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
+    f = wall.footing
+    sw = result.self_weight
+    L, B, D = fmt.length(result.length), fmt.length(result.width), fmt.length(result.thickness)
+    eqs: list[Block] = [
+        Heading("Self weight (dead load at the footing's mid-length)", 2),
+        Equation(formula("W_{f}"), formula("γ_{c} B D L"), f"{fmt.unit_weight(f.unit_weight)} × {B} × {D} × {L}", fmt.force(sw.footing)),
+    ]
+    if wall.stem.present:
+        eqs.append(
+            Equation(
+                formula("W_{stem}"), formula("γ_{c} t_{s} h_{s} L"),
+                f"{fmt.unit_weight(f.unit_weight)} × {fmt.length(wall.stem.thickness)} × {fmt.length(wall.stem.height)} × {L}",
+                fmt.force(sw.stem),
+            )
+        )
+    else:
+        eqs.append(Equation(formula("W_{stem}"), None, None, fmt.force(sw.stem), "no stem wall"))
+    t = "t_{s}" if wall.stem.present else "t_{w}"
+    eqs.append(
+        Equation(
+            formula("W_{soil}"), formula(f"γ_{{s}} c (B − {t}) L"),
+            f"{fmt.unit_weight(project.soil.unit_weight)} × {fmt.length(f.cover)} × ({B} − {fmt.length(wall.supported_thickness)}) × {L}",
+            fmt.force(sw.soil),
+        )
+    )
+    eqs.append(
+        Equation(formula("W"), formula("W_{f} + W_{stem} + W_{soil}"), f"{fmt.force(sw.footing)} + {fmt.force(sw.stem)} + {fmt.force(sw.soil)}",
+                 plain(fmt.force(sw.total), bold=True))
+    )
+    return [Group(tuple(eqs))]
+
+
+def _case_of(result: WallResult, g: Governing) -> tuple[CaseResult, LoadCombination, int, float]:
+    i = g.case_index
+    design = result.table.cases[i]
+    return result.cases[i], design.combination, i, float(result.table.dead_factor[i])
+
+
+def _governing_heading(check: Check, g: Governing) -> list[Block]:
+    head = Heading(f"{_CHECK_TITLE[check]}: governing case {case_name(g.combination, g.direction)}", 2)
+    return [head, Para(f"Lowest ratio / required over all {''}combinations and directions: {direction_words(g.direction)}.", "small")]
+
+
+def _lateral_terms(wall: Wall, combo: LoadCombination, direction: str, fmt: _Fmt, with_arm: bool) -> list[str]:
+    """Substituted terms f H (h + D) (or f H) of the lateral loads acting in the case."""
+    if direction == "none":
+        return []
+    terms = []
+    for h in lateral_resultants(wall):
+        f = combo.factor(h.case)
+        if f == 0.0:
+            continue
+        if with_arm:
+            terms.append(f"{factor_text(f)} × {fmt.force(h.force)} × ({fmt.length(h.height)} + {fmt.length(wall.footing.thickness)})")
+        else:
+            terms.append(f"{factor_text(f)} × {fmt.force(h.force)}")
+    return terms
+
+
+def _position(v: VerticalResultant, direction: str) -> float:
+    return v.x_reversed if direction == "-" else v.x
+
+
+def _join(terms: Sequence[str], empty: str = "0") -> str:
+    return " + ".join(terms) if terms else empty
+
+
+def _overturning(wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
+    g = result.governing[Check.OVERTURNING]
+    if math.isinf(g.ratio):
+        return [
+            Heading("Overturning", 2),
+            Para("No case produces an overturning moment (no lateral load and no uplift): no demand.", "body"),
+            Verdict(True, "Overturning passes: no demand."),
+        ]
+    case, combo, i, f_d = _case_of(result, g)
+    ot = case.overturning
+    assert ot is not None
+    toe_sign = float(result.table.toe_sign[i])
+    L = fmt.length(result.length)
+    toe = f"toe at x = L = {L} (the end the load pushes toward)" if toe_sign > 0 else "toe at x = 0 (the end the load pushes toward)"
+    resisting, overturning = [], []
+    for v in vertical_resultants(wall):
+        f = combo.factor(v.case)
+        if f == 0.0 or v.force == 0.0:
+            continue
+        x = fmt.length(_position(v, g.direction))
+        arm = f"({L} − {x})" if toe_sign > 0 else x
+        if f * v.force > 0.0:  # downward: resists
+            resisting.append(f"{factor_text(f)} × {fmt.force(v.force)} × {arm}")
+        else:  # upward: overturns
+            overturning.append(f"|{factor_text(f)} × {fmt.force(v.force)}| × {arm}")
+    weight = fmt.force(result.self_weight.total)
+    if f_d > 0.0:
+        resisting.append(f"{factor_text(f_d)} × {weight} × {L}/2")
+    elif f_d < 0.0:
+        overturning.append(f"|{factor_text(f_d)}| × {weight} × {L}/2")
+    lateral = _lateral_terms(wall, combo, g.direction, fmt, with_arm=True)
+    blocks: list[Block] = _governing_heading(Check.OVERTURNING, g)
+    blocks.append(Para(f"Moments about the {toe}. Arms of vertical loads are measured from the toe.", "small"))
+    blocks += [
+        Equation(formula("M_{OT}"), formula("Σ f H (h + D) + Σ |f P| arm (uplift)" + (" + |f_{D}| W L/2" if f_d < 0 else "")),
+                 _join(lateral + overturning), fmt.moment(ot.moment)),
+        Equation(formula("M_{R}"), formula("Σ f P arm (downward loads)" + (" + f_{D} W L/2" if f_d > 0 else "")),
+                 _join(resisting), fmt.moment(ot.resisting)),
+        Equation(formula("ratio"), formula("M_{R} / M_{OT}"), f"{fmt.moment(ot.resisting)} / {fmt.moment(ot.moment)}",
+                 plain(ratio_text(ot.ratio, ot.required, ot.passes), bold=True)),
+    ]
+    blocks.append(_check_verdict(Check.OVERTURNING, ot.ratio, ot.required, ot.passes))
+    return [Group(tuple(blocks))]
+
+
+def _check_verdict(check: Check, ratio: float, required: float, passes: bool) -> Verdict:
+    shown = ratio_text(ratio, required, passes)
+    sign = "≥" if passes else "<"
+    word = "passes" if passes else "FAILS"
+    return Verdict(passes, formula(f"{_CHECK_TITLE[check]} {word}: {_CHECK_RATIO[check]} = {shown} {sign} {required:.2f} required."))
+
+
+def _sliding(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
+    g = result.governing[Check.SLIDING]
+    if math.isinf(g.ratio):
+        return [Heading("Sliding", 2), Para("No case has a lateral shear: no demand."), Verdict(True, "Sliding passes: no demand.")]
+    case, combo, i, _ = _case_of(result, g)
+    sl = case.sliding
+    assert sl is not None
+    soil = project.soil
+    N = fmt.force(case.vertical)
+    B, D = fmt.length(result.width), fmt.length(result.thickness)
+    c = fmt.length(wall.footing.cover)
+    blocks: list[Block] = _governing_heading(Check.SLIDING, g)
+    blocks.append(
+        Equation(formula("V"), formula("Σ f H"), _join(_lateral_terms(wall, combo, g.direction, fmt, with_arm=False)), fmt.force(sl.force))
+    )
+    blocks.append(Equation(formula("N"), None, None, N, "vertical load on the soil in this case (see the bearing check for its build-up)"))
+    if case.vertical > 0.0:
+        blocks.append(Equation(formula("F_{μ}"), formula("μ N"), f"{soil.friction:g} × {N}", fmt.force(sl.friction), "friction"))
+    else:
+        blocks.append(Equation(formula("F_{μ}"), None, None, fmt.force(sl.friction), "N ≤ 0: no friction"))
+    if soil.cohesion > 0.0:
+        a = fmt.length(float(result.evaluation.contact_length[i]))
+        blocks.append(
+            Equation(formula("F_{c}"), formula("min(c B a, 0.5 N)"), f"min({fmt.pressure(soil.cohesion)} × {B} × {a}, 0.5 × {N})",
+                     fmt.force(sl.cohesion), "cohesion over the contact length a, capped (IBC 1806.3.2)")
+        )
+    else:
+        blocks.append(Equation(formula("F_{c}"), None, None, fmt.force(sl.cohesion), "no cohesion (c = 0)"))
+    if soil.passive > 0.0:
+        z = fmt.length(soil.passive_ignore)
+        note = "passive on the end face from z_{0} = max(c, ignored depth) to the base at c + D"
+        if sl.passive == 0.0:
+            note = "the ignored depth reaches the base: no passive resistance"
+        blocks.append(
+            Equation(formula("F_{p}"), formula("K B ((c + D)² − z_{0}²) / 2"),
+                     f"{fmt.gradient(soil.passive)} × {B} × (({c} + {D})² − max({c}, {z})²) / 2", fmt.force(sl.passive), formula(note))
+        )
+    else:
+        blocks.append(Equation(formula("F_{p}"), None, None, fmt.force(sl.passive), "no passive resistance (K = 0)"))
+    blocks += [
+        Equation(formula("R"), formula("F_{μ} + F_{c} + F_{p}"), f"{fmt.force(sl.friction)} + {fmt.force(sl.cohesion)} + {fmt.force(sl.passive)}",
+                 fmt.force(sl.resistance), "friction and passive combined (IBC 1806.3.1)"),
+        Equation(formula("ratio"), formula("R / V"), f"{fmt.force(sl.resistance)} / {fmt.force(sl.force)}",
+                 plain(ratio_text(sl.ratio, sl.required, sl.passes), bold=True)),
+        _check_verdict(Check.SLIDING, sl.ratio, sl.required, sl.passes),
+    ]
+    return [Group(tuple(blocks))]
+
+
+def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
+    g = result.governing[Check.BEARING]
+    if math.isinf(g.ratio):
+        return [Heading("Soil bearing", 2), Para("No case presses on the soil: no demand."), Verdict(True, "Bearing passes: no demand.")]
+    case, combo, i, f_d = _case_of(result, g)
+    br = case.bearing
+    assert br is not None
+    soil = project.soil
+    L, B = fmt.length(result.length), fmt.length(result.width)
+    N, M = fmt.force(case.vertical), fmt.moment(case.moment)
+    # N: factored vertical loads plus the factored self weight
+    n_terms = []
+    m_terms = []
+    for v in vertical_resultants(wall):
+        f = combo.factor(v.case)
+        if f == 0.0 or v.force == 0.0:
+            continue
+        n_terms.append(f"{factor_text(f)} × {fmt.force(v.force)}")
+        x = _position(v, g.direction)
+        if abs(x - 0.5 * result.length) > 1e-9:  # a load at mid-length adds no moment about it
+            m_terms.append(f"{factor_text(f)} × {fmt.force(v.force)} × ({fmt.length(x)} − {L}/2)")
+    n_terms.append(f"{factor_text(f_d)} × {fmt.force(result.self_weight.total)}")
+    lateral = _lateral_terms(wall, combo, g.direction, fmt, with_arm=True)
+    if lateral:
+        sign = "" if g.direction == "+" else "−"
+        m_terms.insert(0, f"{sign}[{' + '.join(lateral)}]")
+    blocks: list[Block] = _governing_heading(Check.BEARING, g)
+    blocks += [
+        Equation(formula("N"), formula("Σ f P + f_{D} W"), _join(n_terms), N),
+        Equation(formula("M"), formula("± Σ f H (h + D) + Σ f P (x − L/2)"), _join(m_terms), M,
+                 "about the footing's mid-length; + toward x = L; loads at mid-length add nothing"),
+    ]
+    if not br.stable:
+        blocks += [
+            Equation(formula("e"), formula("M / N"), f"{M} / {N}", fmt.length(br.eccentricity) if math.isfinite(br.eccentricity) else "∞"),
+            Para(formula("N ≤ 0 or |e| ≥ L/2: the resultant falls outside the footing and the footing cannot be in "
+                         "equilibrium on the soil. It overturns; bearing fails."), "fail"),
+            _check_verdict(Check.BEARING, br.ratio, br.required, br.passes),
+        ]
+        return [Group(tuple(blocks))]
+    e_abs = fmt.length(abs(br.eccentricity))
+    beyond = br.contact_length < result.length * (1.0 - 1e-9)
+    diagram = pressure_diagram(case.vertical, br.eccentricity, result.width, result.length)
+    kern_half = (diagram.kern[1] - diagram.kern[0]) / 2.0  # L/6: half the middle third (display only)
+    blocks.append(Equation(formula("e"), formula("M / N"), f"{M} / {N}", fmt.length(br.eccentricity)))
+    if not beyond:
+        blocks += [
+            Para(formula(f"|e| = {e_abs} ≤ L/6 = {fmt.length(kern_half)}: the resultant is inside the kern; the whole footing "
+                         "is in contact."), "body"),
+            Equation(formula("q_{max}"), formula("N / (B L) (1 + 6|e| / L)"), f"{N} / ({B} × {L}) × (1 + 6 × {e_abs} / {L})", fmt.pressure(br.q_max)),
+            Equation(formula("q_{min}"), formula("N / (B L) (1 − 6|e| / L)"), f"{N} / ({B} × {L}) × (1 − 6 × {e_abs} / {L})", fmt.pressure(br.q_min)),
+        ]
+    else:
+        blocks += [
+            Para(formula(f"|e| = {e_abs} > L/6 = {fmt.length(kern_half)}: the resultant is beyond the kern; only part of the "
+                         "footing is in contact and the pressure is a triangle."), "body"),
+            Equation(formula("a"), formula("3 (L/2 − |e|)"), f"3 × ({L}/2 − {e_abs})", fmt.length(br.contact_length), "contact length"),
+            Equation(formula("q_{max}"), formula("2N / (3B (L/2 − |e|))"), f"2 × {N} / (3 × {B} × ({L}/2 − {e_abs}))", fmt.pressure(br.q_max)),
+            Equation(formula("q_{min}"), None, None, fmt.pressure(br.q_min), "no tension beyond the contact length"),
+        ]
+    if soil.bearing_basis is BearingBasis.NET:
+        blocks.append(
+            Equation(formula("q"), formula("q_{max} − γ_{s} (c + D)"),
+                     f"{fmt.pressure(br.q_max)} − {fmt.unit_weight(soil.unit_weight)} × ({fmt.length(wall.footing.cover)} + {fmt.length(result.thickness)})",
+                     fmt.pressure(br.pressure_compared), "net pressure, for a net allowable")
+        )
+        q_symbol = "q"
+    else:
+        q_symbol = "q_{max}"
+    if combo.has_wind_or_seismic and project.criteria.bearing_increase != 1.0:
+        blocks.append(
+            Equation(formula("q_{a}"), formula("q_{a,report} × increase"),
+                     f"{fmt.pressure(soil.allowable_bearing)} × {factor_text(project.criteria.bearing_increase)}", fmt.pressure(br.allowable),
+                     "combination with W or E")
+        )
+    else:
+        blocks.append(Equation(formula("q_{a}"), None, None, fmt.pressure(br.allowable), "allowable bearing pressure"))
+    blocks += [
+        Equation(formula("ratio"), formula(f"q_{{a}} / {q_symbol}"), f"{fmt.pressure(br.allowable)} / {fmt.pressure(br.pressure_compared)}",
+                 plain(ratio_text(br.ratio, br.required, br.passes), bold=True)),
+        _check_verdict(Check.BEARING, br.ratio, br.required, br.passes),
+    ]
+    out: list[Block] = [Group(tuple(blocks))]
+    out.append(pressure_drawing(diagram, br.allowable, result, g, fmt, CONTENT_WIDTH, 150.0))
+    return out
+
+
+def _results_table(result: WallResult) -> list[Block]:
+    rows = []
+    fail_rows = []
+    for k, check in enumerate(ALL_CHECKS):
+        g = result.governing[check]
+        if math.isinf(g.ratio):
+            rows.append((_CHECK_TITLE[check], "—", "no demand", f"{g.required:.2f}", "passes (no demand)"))
+            continue
+        verdict = "passes" if g.passes else "FAILS"
+        rows.append((_CHECK_TITLE[check], case_name(g.combination, g.direction), ratio_text(g.ratio, g.required, g.passes), f"{g.required:.2f}", verdict))
+        if not g.passes:
+            fail_rows.append(k)
+    final = "The wall passes every check." if result.passes else "The wall FAILS: the footing must be revised."
+    return [
+        Group(
+            (
+                Heading("Results on the current footing", 2),
+                Table(("Check", "Governing case", "Ratio", "Required", "Result"), tuple(rows), (0.18, 0.42, 0.12, 0.12, 0.16),
+                      align="LLRRL", fail_rows=tuple(fail_rows)),
+                Verdict(result.passes, final),
+            )
+        )
+    ]
+
+
+def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
+    wall, s = report.wall, report.sizing
+    z = wall.sizing
+    blocks: list[Block] = [Heading("Sizing: the smallest footing that passes", 2)]
+    if s is None:
+        blocks.append(Para(plain(f"The program could not size this footing: {report.sizing_error}"), "fail"))
+        return [Group(tuple(blocks))]
+    blocks.append(
+        Para(
+            f"Searched: widths B from {fmt.length(z.width_min)} to {fmt.length(z.width_max)} in steps of {fmt.length(z.width_step)} "
+            f"({s.widths.size} values) and thicknesses D from {fmt.length(z.thickness_min)} to {fmt.length(z.thickness_max)} in steps of "
+            f"{fmt.length(z.thickness_step)} ({s.thicknesses.size} values): {s.candidates:,} candidates, each checked in every "
+            "combination and direction, with the footing length and the loads as entered. The smallest is the passing candidate "
+            "with the least cross-section B × D (least concrete), ties going to the thinner, then the narrower."
+        )
+    )
+    if not s.feasible or s.width is None or s.thickness is None:
+        blocks.append(Verdict(False, plain("No candidate within the bounds passes. " + s.message + ".")))
+        if s.suggestions:
+            blocks.append(Bullets(tuple(plain(t) for t in s.suggestions)))
+        return [Group(tuple(blocks))]
+    row = int(abs(s.thicknesses - s.thickness).argmin())
+    col = int(abs(s.widths - s.width).argmin())
+    table_rows: list[tuple[Cell, ...]] = []
+    fail_rows = []
+    for k, (name, r, c) in enumerate((("smallest passing", row, col), ("next narrower", row, col - 1), ("next thinner", row - 1, col))):
+        if r < 0 or c < 0:
+            table_rows.append((name, "outside the bounds", "", "", "", "not a candidate"))
+            continue
+        values = []
+        for j in range(len(ALL_CHECKS)):
+            v = float(s.check_normalized[j, r, c])
+            values.append("no demand" if math.isinf(v) else f"{v:.3f}")
+        if not bool(s.allowed[r, c]):
+            verdict = "narrower than the wall it carries"
+        elif bool(s.passes[r, c]):
+            verdict = "passes"
+        else:
+            verdict = "FAILS " + s.governing_check(r, c).value
+            fail_rows.append(k)
+        table_rows.append((name, f"{fmt.length(float(s.widths[c]))} × {fmt.length(float(s.thicknesses[r]))}", *values, verdict))
+    blocks += [
+        Para(formula(f"Smallest passing size: B × D = {fmt.length(s.width)} × {fmt.length(s.thickness)}.", bold=True)),
+        Table(("Candidate", "B × D", "Overturning", "Sliding", "Bearing", "Result"), tuple(table_rows),
+              (0.18, 0.22, 0.13, 0.13, 0.13, 0.21), align="LLRRRL", fail_rows=tuple(fail_rows)),
+        Para("Values are the lowest ratio / required over all cases (1.000 or more passes). Program's finding: " + s.message + ".", "small"),
+    ]
+    if report.sized_result is not None:
+        sr = report.sized_result
+        parts = [f"{_CHECK_WORD[c]} {ratio_text(sr.governing[c].ratio, sr.governing[c].required, sr.governing[c].passes)}" for c in ALL_CHECKS]
+        blocks.append(Para("Governing ratios at the smallest passing size: " + ", ".join(parts) + ".", "small"))
+    if _same_size(wall, s):
+        blocks.append(Verdict(True, "The current footing is this smallest passing size."))
+    elif report.result.passes:
+        blocks.append(
+            Verdict(True, f"The current footing ({fmt.length(wall.footing.width)} × {fmt.length(wall.footing.thickness)}) is not this size; "
+                          "it passes as drawn.")
+        )
+    else:
+        blocks.append(
+            Verdict(False, f"The current footing ({fmt.length(wall.footing.width)} × {fmt.length(wall.footing.thickness)}) FAILS; "
+                           f"revise it to at least the size above ({fmt.length(s.width)} × {fmt.length(s.thickness)}) or as the engineer decides.")
+        )
+    return [Group(tuple(blocks))]
+
+
+# ---------------------------------------------------------------------------------------------
+# Appendix
+# ---------------------------------------------------------------------------------------------
+
+
+def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
+    result = report.result
+    rows: list[tuple[Cell, ...]] = []
+    fail_rows = []
+    gov = {g.case_index for g in result.governing.values()}
+    for k, c in enumerate(result.cases):
+        ot, sl, br = c.overturning, c.sliding, c.bearing
+        failing = [name for name, r in (("OT", ot), ("SL", sl), ("BR", br)) if r is not None and not r.passes]
+        rows.append(
+            (
+                plain(_clean(c.combination) + (" *" if k in gov else "")),
+                direction_text(c.direction),
+                fmt.number(c.vertical, Kind.FORCE),
+                fmt.number(c.lateral, Kind.FORCE),
+                fmt.number(c.moment, Kind.MOMENT),
+                fmt.number(br.eccentricity, Kind.LENGTH) if br is not None else "n/a",
+                fmt.number(ot.moment, Kind.MOMENT) if ot is not None else "n/a",
+                fmt.number(ot.resisting, Kind.MOMENT) if ot is not None else "n/a",
+                ratio_text(ot.ratio, ot.required, ot.passes) if ot is not None else "n/a",
+                fmt.number(sl.resistance, Kind.FORCE) if sl is not None else "n/a",
+                ratio_text(sl.ratio, sl.required, sl.passes) if sl is not None else "n/a",
+                fmt.number(br.q_max, Kind.PRESSURE) if br is not None else "n/a",
+                fmt.number(br.allowable, Kind.PRESSURE) if br is not None else "n/a",
+                ratio_text(br.ratio, br.required, br.passes) if br is not None else "n/a",
+                "ok" if not failing else "fails " + "/".join(failing),
+            )
+        )
+        if failing:
+            fail_rows.append(k)
+    u = fmt.unit
+    headers = (
+        "Combination", "Dir", f"N ({u(Kind.FORCE)})", f"V ({u(Kind.FORCE)})", f"M ({u(Kind.MOMENT)})", f"e ({u(Kind.LENGTH)})",
+        formula(f"M_{{OT}} ({u(Kind.MOMENT)})"), formula(f"M_{{R}} ({u(Kind.MOMENT)})"), "OT ratio", f"R ({u(Kind.FORCE)})", "SL ratio",
+        formula(f"q_{{max}} ({u(Kind.PRESSURE)})"), formula(f"q_{{a}} ({u(Kind.PRESSURE)})"), "BR ratio", "Result",
+    )
+    widths = (0.17, 0.035, 0.06, 0.055, 0.065, 0.055, 0.065, 0.065, 0.055, 0.06, 0.055, 0.06, 0.055, 0.055, 0.065)
+    total = sum(widths)
+    blocks: list[Block] = [
+        Heading(plain(f"Appendix: every combination and direction, wall {report.wall.id}")),
+        Para(
+            f"Footing {fmt.length(result.width)} × {fmt.length(result.thickness)} × {fmt.length(result.length)} (B × D × L). "
+            "N vertical load on the soil, V shear, M moment about the footing's mid-length, e = M / N, moments about the toe, "
+            "R sliding resistance, q_max peak soil pressure, q_a allowable. * marks a case that governs a check; "
+            "n/a: the combination does not apply to that check.",
+            "small",
+        ),
+        Table(headers, tuple(rows), tuple(w / total for w in widths), align="LCRRRRRRRRRRRRL", font_size=6.0, fail_rows=tuple(fail_rows)),
+    ]
+    return Section(f"appendix:{report.wall.id}", f"Appendix: all cases, wall {report.wall.id}", f"Appendix, wall {report.wall.id}", tuple(blocks))
+
+
+# ---------------------------------------------------------------------------------------------
+# Drawings
+# ---------------------------------------------------------------------------------------------
+
+# Drawing scales: (points per metre at 1:n, the printed name). US architectural and engineering
+# scales; SI ratios (common practice).
+_US_SCALES = (
+    (16, '3/4" = 1\'-0"'), (24, '1/2" = 1\'-0"'), (32, '3/8" = 1\'-0"'), (48, '1/4" = 1\'-0"'), (64, '3/16" = 1\'-0"'),
+    (96, '1/8" = 1\'-0"'), (128, '3/32" = 1\'-0"'), (192, '1/16" = 1\'-0"'), (240, "1\" = 20'-0\""), (384, '1/32" = 1\'-0"'),
+    (480, "1\" = 40'-0\""), (600, "1\" = 50'-0\""), (1200, "1\" = 100'-0\""), (2400, "1\" = 200'-0\""),
+)
+_SI_SCALES = tuple((n, f"1:{n}") for n in (10, 20, 25, 50, 75, 100, 150, 200, 250, 500, 1000, 2000))
+_POINTS_PER_METRE = 72.0 / 0.0254
+
+
+def drawing_scale(fit: float, units: str) -> tuple[float, str]:
+    """The largest standard scale whose points per metre do not exceed ``fit``.
+
+    Returns (points per metre, printed scale). Falls back to ``fit`` itself ("not to a standard
+    scale") when even the smallest standard scale is too large.
+    """
+    for n, name in _US_SCALES if units == "US" else _SI_SCALES:
+        ppm = _POINTS_PER_METRE / n
+        if ppm <= fit:
+            return ppm, name
+    return fit, f"1:{_POINTS_PER_METRE / fit:,.0f}"
+
+
+def _group_loads(items: Sequence[tuple[float, str]]) -> list[tuple[float, str]]:
+    """Merge labels of loads at the same position."""
+    out: dict[float, list[str]] = {}
+    for x, text in items:
+        key = round(x, 6)
+        out.setdefault(key, []).append(text)
+    return [(x, ", ".join(t)) for x, t in sorted(out.items())]
+
+
+def elevation_drawing(wall: Wall, fmt: _Fmt, width: float, height: float) -> Drawing:
+    """To-scale elevation of the wall on its footing with its loads and dimensions (points)."""
+    f = wall.footing
+    length = wall.footing_length
+    laterals = lateral_resultants(wall)
+    h_top = max([h.height for h in laterals] + [0.0])
+    stem_h = wall.stem.height if wall.stem.present else 0.0
+    wall_top = max(h_top, stem_h + 2.0)  # at least a stub of wall above the stem
+    line_loads = [ld for ld in wall.loads if isinstance(ld, LineLoad)]
+    point_loads = [ld for ld in wall.loads if isinstance(ld, PointLoad)]
+    band = 12.0 * len(line_loads) + (24.0 if point_loads else 0.0)
+    left_margin, right_margin, bottom_margin, top_margin = 86.0, 46.0, 30.0, 16.0 + band
+    fit = min((width - left_margin - right_margin) / length, (height - bottom_margin - top_margin) / (wall_top + f.thickness))
+    s, scale_name = drawing_scale(fit, fmt.units)
+    x0 = left_margin + ((width - left_margin - right_margin) - length * s) / 2.0
+    y0 = bottom_margin + f.thickness * s  # top of footing
+
+    def X(x: float) -> float:
+        return x0 + x * s
+
+    def Y(y: float) -> float:
+        return y0 + y * s
+
+    shapes: list[Shape] = []
+    # grade line over the footing
+    grade = Y(f.cover)
+    shapes.append(Line(X(0) - 14, grade, X(length) + 14, grade, 0.5, dash=True, color="soil"))
+    shapes.append(Label(X(length) + 16, grade - 2, "grade", "start", 5.5, color="soil"))
+    if f.cover > 0:
+        shapes.append(Rect(X(0), Y(0), length * s, f.cover * s, fill="soil", width=0))
+    # footing
+    shapes.append(Rect(X(0), Y(-f.thickness), length * s, f.thickness * s, fill="concrete"))
+    # stem (full footing length) and wall
+    base = 0.0
+    if wall.stem.present:
+        shapes.append(Rect(X(0), Y(0), length * s, stem_h * s, fill="stem"))
+        base = stem_h
+    ws, we = f.extension_start, f.extension_start + wall.length
+    shapes.append(Rect(X(ws), Y(base), wall.length * s, (wall_top - base) * s, fill="wall"))
+    # break mark at the top of the wall (the wall continues above)
+    top = Y(wall_top)
+    shapes.append(Line(X(ws) + 0.45 * wall.length * s, top, X(ws) + 0.5 * wall.length * s, top + 4, 0.6, color="paper"))
+    # lateral loads: arrows at their heights pushing in direction +
+    for y, text in _group_loads([(h.height, f"{h.case.value} {fmt.force(h.force)}") for h in laterals]):
+        yy = Y(y)
+        shapes.append(Arrow(X(ws) - 30, yy, X(ws), yy))
+        shapes.append(Label(X(ws) - 33, yy - 2, text, "end", 6.0, color="load"))
+    # heights of lateral loads above the top of footing, on the right
+    for k, (y, _) in enumerate(_group_loads([(h.height, "") for h in laterals])):
+        shapes.append(Dimension(X(length), Y(0), X(length), Y(y), fmt.length(y), offset=14.0 + 18.0 * k))
+    # vertical loads: line loads as bands of arrows above the wall, point loads as single arrows
+    y_band = top + 8.0
+    for ld in line_loads:
+        xa, xb = X(f.extension_start + ld.start), X(f.extension_start + ld.end)
+        down = ld.value >= 0
+        shapes.append(Line(xa, y_band + 8, xb, y_band + 8, 0.5, color="load"))
+        n = max(2, int((xb - xa) / 18.0) + 1)
+        for k in range(n):
+            xx = xa + (xb - xa) * k / (n - 1)
+            if down:
+                shapes.append(Arrow(xx, y_band + 8, xx, y_band + 1, 0.5))
+            else:
+                shapes.append(Arrow(xx, y_band + 1, xx, y_band + 8, 0.5))
+        text = f"{ld.case.value} {fmt.line_load(ld.value)}" + (" (reverses)" if ld.reverses else "")
+        shapes.append(Label(xa - 4, y_band + 2, text, "end", 5.5, color="load"))
+        y_band += 12.0
+    if point_loads:
+        items = [(f.extension_start + p.at, f"{p.case.value} {fmt.force(p.value)}" + (" rev." if p.reverses else "")) for p in point_loads]
+        for x, text in _group_loads(items):
+            xx = X(x)
+            shapes.append(Arrow(xx, y_band + 16, xx, top + 2, 0.7))
+            shapes.append(Label(xx, y_band + 18, text, "middle", 5.5, color="load"))
+    # dimensions: footing length, extensions and wall length, footing thickness
+    shapes.append(Dimension(X(0), Y(-f.thickness), X(length), Y(-f.thickness), f"L = {fmt.length(length)}", offset=-18.0))
+    if f.extension_start > 0 or f.extension_end > 0:
+        if f.extension_start > 0:
+            shapes.append(Dimension(X(0), Y(-f.thickness), X(ws), Y(-f.thickness), fmt.length(f.extension_start), offset=-8.0))
+        if f.extension_end > 0:
+            shapes.append(Dimension(X(we), Y(-f.thickness), X(length), Y(-f.thickness), fmt.length(f.extension_end), offset=-8.0))
+    shapes.append(Label(X(ws + wall.length / 2), Y(base) + 4, f"wall {fmt.length(wall.length)}", "middle", 6.0))
+    shapes.append(Dimension(X(0), Y(-f.thickness), X(0), Y(0), f"D = {fmt.length(f.thickness)}", offset=-10.0))
+    if wall.stem.present:
+        shapes.append(Label(X(length) - 3, Y(stem_h) - 8, f"stem {fmt.length(stem_h)}", "end", 5.5))
+    shapes.append(Label(X(0), Y(-f.thickness) + 3, "x = 0", "start", 5.0))
+    shapes.append(Label(X(length) - 2, Y(-f.thickness) + 3, "x = L", "end", 5.0))
+    caption = f"Elevation along the wall, scale {scale_name} (printed at 100%); wall drawn to the highest lateral load; + direction to the right."
+    return Drawing(width, height, tuple(shapes), caption)
+
+
+def section_drawing(wall: Wall, project: Project, fmt: _Fmt, width: float, height: float) -> Drawing:
+    """To-scale section across the footing: width B, thickness D, cover, stem or wall."""
+    f = wall.footing
+    stem_h = wall.stem.height if wall.stem.present else 0.0
+    above = max(f.cover, stem_h) + 0.6  # show the wall a little above grade or the stem
+    margin_x, bottom, top = 24.0, 30.0, 14.0
+    fit = min((width - 2 * margin_x) / f.width, (height - bottom - top) / (above + f.thickness))
+    s, scale_name = drawing_scale(fit, fmt.units)
+    cx = width / 2.0
+    y0 = bottom + f.thickness * s
+
+    def Y(y: float) -> float:
+        return y0 + y * s
+
+    shapes: list[Shape] = []
+    half = f.width * s / 2.0
+    if f.cover > 0:
+        shapes.append(Rect(cx - half - 12, Y(0), f.width * s + 24, f.cover * s, fill="soil", width=0))
+    shapes.append(Line(cx - half - 14, Y(f.cover), cx + half + 14, Y(f.cover), 0.5, dash=True, color="soil"))
+    shapes.append(Rect(cx - half, Y(-f.thickness), f.width * s, f.thickness * s, fill="concrete"))
+    base = 0.0
+    if wall.stem.present:
+        ts = wall.stem.thickness * s
+        shapes.append(Rect(cx - ts / 2, Y(0), ts, stem_h * s, fill="stem"))
+        base = stem_h
+    tw = wall.thickness * s
+    shapes.append(Rect(cx - tw / 2, Y(base), tw, (above - base) * s, fill="wall"))
+    shapes.append(Dimension(cx - half, Y(-f.thickness), cx + half, Y(-f.thickness), f"B = {fmt.length(f.width)}", offset=-12.0))
+    shapes.append(Dimension(cx + half, Y(-f.thickness), cx + half, Y(0), fmt.length(f.thickness), offset=10.0))
+    if f.cover > 0:
+        shapes.append(Dimension(cx - half, Y(0), cx - half, Y(f.cover), fmt.length(f.cover), offset=-10.0))
+    return Drawing(width, height, tuple(shapes), f"Section across the footing, scale {scale_name}.")
+
+
+def pressure_drawing(diagram: PressureDiagram, allowable: float, result: WallResult, g: Governing, fmt: _Fmt, width: float, height: float) -> Drawing:
+    """Soil pressure under the footing in the governing bearing case, with the allowable line."""
+    length = result.length
+    left, right, top, bottom = 40.0, 40.0, 40.0, 14.0
+    sx = (width - left - right) / length
+    q_top = max(diagram.q_max if math.isfinite(diagram.q_max) else 0.0, allowable)
+    sy = (height - top - bottom - 14.0) / q_top if q_top > 0 else 0.0
+    y_base = height - top  # underside of the footing; pressure drawn downward from it
+
+    def X(x: float) -> float:
+        return left + x * sx
+
+    shapes: list[Shape] = []
+    # footing strip and the kern (middle third)
+    shapes.append(Rect(X(0), y_base, length * sx, 10.0, fill="concrete"))
+    k1, k2 = diagram.kern
+    shapes.append(Line(X(k1), y_base + 10, X(k1), y_base + 16, 0.6))
+    shapes.append(Line(X(k2), y_base + 10, X(k2), y_base + 16, 0.6))
+    shapes.append(Line(X(k1), y_base + 16, X(k2), y_base + 16, 0.6))
+    shapes.append(Label((X(k1) + X(k2)) / 2, y_base + 18, "kern (middle third)", "middle", 5.5))
+    if diagram.stable:
+        pts = tuple((X(float(x)), y_base - float(q) * sy) for x, q in zip(diagram.x, diagram.q, strict=True))
+        shapes.append(Polygon(pts, fill="pressure"))
+        # the resultant N
+        xr = X(diagram.resultant_x)
+        shapes.append(Arrow(xr, y_base + 34, xr, y_base + 11, 1.0))
+        shapes.append(Label(xr + 3, y_base + 28, f"N = {fmt.force(float(result.cases[g.case_index].vertical))}", "start", 6.0, color="load"))
+        shapes.append(Label(xr + 3, y_base + 21, f"e = {fmt.length(diagram.resultant_x - length / 2)}", "start", 6.0, color="load"))
+        # pressure values at the ends of the block
+        peak_left = float(diagram.q[1]) >= float(diagram.q[2])
+        x_peak = diagram.contact_start if peak_left else diagram.contact_end
+        x_other = diagram.contact_end if peak_left else diagram.contact_start
+        anchor_peak, anchor_other = ("end", "start") if peak_left else ("start", "end")
+        dx = -3 if peak_left else 3
+        shapes.append(Label(X(x_peak) + dx, y_base - diagram.q_max * sy, f"q_max = {fmt.pressure(diagram.q_max)}", anchor_peak, 6.0, bold=True))
+        shapes.append(Label(X(x_other) - dx, y_base - diagram.q_min * sy - 8, f"q_min = {fmt.pressure(diagram.q_min)}", anchor_other, 6.0))
+        if diagram.contact_end - diagram.contact_start < length * (1 - 1e-9):
+            shapes.append(
+                Dimension(X(diagram.contact_start), y_base, X(diagram.contact_end), y_base,
+                          f"contact a = {fmt.length(diagram.contact_end - diagram.contact_start)}", offset=-(diagram.q_max * sy + 12))
+            )
+    else:
+        shapes.append(Label(width / 2, y_base - 30, "no equilibrium: the resultant is outside the footing", "middle", 7.0, bold=True, color="fail"))
+    ya = y_base - allowable * sy
+    shapes.append(Line(X(0) - 6, ya, X(length) + 6, ya, 0.8, dash=True, color="allow"))
+    shapes.append(Label(X(length) + 8, ya - 2, f"q_a = {fmt.pressure(allowable)}", "start", 6.0, color="allow"))
+    shapes.append(Label(X(0), y_base + 3, "x = 0", "start", 5.0))
+    shapes.append(Label(X(length), y_base + 3, "x = L", "end", 5.0))
+    caption = (f"Soil pressure in the governing bearing case {case_name(g.combination, g.direction)} "
+               "(pressures drawn downward to a uniform scale; dashed: allowable).")
+    return Drawing(width, height, tuple(shapes), caption)
+
+
+__all__ = [
+    "CONTENT_WIDTH", "Arrow", "Block", "Bullets", "Contents", "Dimension", "Drawing", "DrawingRow", "Equation", "Group",
+    "Heading", "KeyValues", "Label", "Line", "Package", "Para", "Polygon", "Rect", "Run", "Section", "Table", "TitleBlock",
+    "Verdict", "WallReport", "build_package", "drawing_scale", "formula", "plain", "ratio_text", "rich_text", "select_walls",
+    "wall_report",
+]
