@@ -76,7 +76,7 @@ def pressure_distribution(vertical: ArrayLike, eccentricity: ArrayLike, width: A
         average = n / (np.asarray(width) * length)  # N / (B L)
         swing = average * (6.0 / length) * e  # N / (B L) * 6|e|/L
         q_max = np.where(in_kern, average + swing, (2.0 / 3.0) * n / (np.asarray(width) * half_minus_e))
-    q_min = np.where(in_kern, average - swing, 0.0)
+    q_min = np.where(in_kern, np.maximum(average - swing, 0.0), 0.0)  # no rounding below zero at e = L/6
     contact = np.where(in_kern, length, 3.0 * half_minus_e)
     unstable = ~stable
     if unstable.any():
