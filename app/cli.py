@@ -63,7 +63,8 @@ def main(argv: Sequence[str] | None = None) -> int:
     try:
         return _dispatch(args)
     except InputError as err:
-        print(f"kernline: {_where(args)}{err.message}", file=sys.stderr)
+        where = _where(args)
+        print(f"kernline: {'' if err.message.startswith(where) else where}{err.message}", file=sys.stderr)
         return EXIT_INPUT
     except EngineError as err:
         print(f"kernline: {err}", file=sys.stderr)
@@ -132,7 +133,7 @@ def _check(path: str, as_json: bool) -> int:
     doc = load_project(path)
     results = check_project(doc.project)
     if as_json:
-        print(json.dumps(results_json(results), indent=2))
+        print(json.dumps(results_json(results), indent=2, allow_nan=False))
     else:
         print(check_table(doc.project, results))
     return EXIT_OK if all(r.passes for r in results) else EXIT_FAIL
@@ -157,7 +158,7 @@ def _size(path: str, as_json: bool, write: bool) -> int:
             wall = replace(wall, footing=replace(wall.footing, width=s.width, thickness=s.thickness))
         results.append(check_wall(project, wall))
     if as_json:
-        print(json.dumps(results_json(tuple(results), {s.wall_id: s.as_json() for s in sized}), indent=2))
+        print(json.dumps(results_json(tuple(results), {s.wall_id: s.as_json() for s in sized}), indent=2, allow_nan=False))
     else:
         print(size_table(project, sized, results))
     if write:

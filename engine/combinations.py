@@ -39,6 +39,9 @@ ASD_SEISMIC = 0.7
 # ASCE 7-16 12.4.2.2, Eq. 12.4-4a: Ev = 0.2 S_DS D.
 EV_COEFFICIENT = 0.2
 
+# The largest S_DS for which the counteracting dead-load factor 0.6 - 0.14 S_DS stays >= 0.
+MAX_SDS = COUNTERACTING_DEAD / (ASD_SEISMIC * EV_COEFFICIENT)
+
 # Required ratios of the service-fs method (common practice; editable in the project).
 SERVICE_FS_REQUIRED = RequiredRatios(overturning=2.0, sliding=1.5, bearing=1.0)
 ASD_REQUIRED = RequiredRatios(overturning=1.0, sliding=1.0, bearing=1.0)

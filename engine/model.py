@@ -25,6 +25,8 @@ PCF = 4.4482216152605 / 0.3048**3  # N/m^3 per pcf (exact definitions, NIST SP 8
 PSF = 4.4482216152605 / 0.3048**2  # Pa per psf
 INCH = 0.0254
 FOOT = 0.3048
+# The largest sizing grid searched (about 0.1 s on two cores).
+MAX_CANDIDATES = 250_000
 
 
 class LoadCase(Enum):
@@ -205,7 +207,11 @@ class Stem:
 
 @dataclass(frozen=True, slots=True, kw_only=True)
 class SizingBounds:
-    """The candidate grid searched by automatic sizing (inclusive bounds, fixed steps)."""
+    """The candidate grid searched by automatic sizing (inclusive bounds, fixed steps).
+
+    A grid of more than :data:`MAX_CANDIDATES` candidates is refused: the steps are too fine for the
+    range (it would take seconds and much memory to search).
+    """
 
     width_min: float = 12.0 * INCH
     width_max: float = 96.0 * INCH
@@ -219,6 +225,14 @@ class SizingBounds:
             _positive(getattr(self, name), name)
         _require(self.width_max >= self.width_min, "width_max", "must not be less than width_min")
         _require(self.thickness_max >= self.thickness_min, "thickness_max", "must not be less than thickness_min")
+        widths = (self.width_max - self.width_min) / self.width_step + 1.0
+        thicknesses = (self.thickness_max - self.thickness_min) / self.thickness_step + 1.0
+        _require(
+            widths * thicknesses <= MAX_CANDIDATES,
+            "width_step",
+            f"the grid would have about {widths:,.0f} x {thicknesses:,.0f} candidates; use coarser steps or narrower "
+            f"bounds (at most {MAX_CANDIDATES:,} candidates)",
+        )
 
 
 @dataclass(frozen=True, slots=True, kw_only=True)

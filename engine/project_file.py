@@ -21,7 +21,7 @@ from dataclasses import dataclass
 from pathlib import Path
 from typing import Any
 
-from .combinations import default_required
+from .combinations import MAX_SDS, default_required
 from .errors import FormatVersionError, InputError
 from .model import (
     ALL_CHECKS,
@@ -101,6 +101,10 @@ def _number(obj: dict[str, Any], key: str, default: float | None, *, positive: b
     value = obj[key]
     if isinstance(value, bool) or not isinstance(value, (int, float)):
         raise InputError(key, f"expected a number, got {_show(value)}")
+    try:
+        value = float(value)
+    except OverflowError:
+        raise InputError(key, f"the number {_show(value)} is far too large") from None
     if not math.isfinite(value):
         raise InputError(key, f"expected a finite number, got {value}")
     if positive and not value > 0.0:
@@ -119,7 +123,7 @@ def _text(obj: dict[str, Any], key: str, default: str = "") -> str:
 
 def _choice(obj: dict[str, Any], key: str, choices: dict[str, Any], default: str) -> Any:
     value = obj.get(key, default)
-    if value not in choices:
+    if not isinstance(value, str) or value not in choices:
         allowed = ", ".join(f'"{c}"' for c in choices)
         raise InputError(key, f"expected one of {allowed}, got {_show(value)}")
     return choices[value]
@@ -128,10 +132,12 @@ def _choice(obj: dict[str, Any], key: str, choices: dict[str, Any], default: str
 def _case(obj: dict[str, Any], allowed: tuple[LoadCase, ...] = tuple(LoadCase)) -> LoadCase:
     value = obj.get("case")
     names = {c.value: c for c in allowed}
-    if value not in names:
+    if not isinstance(value, str) or value not in names:
         listing = ", ".join(names)
         if value is None:
             raise InputError("case", f"is missing; expected one of {listing}")
+        if isinstance(value, str) and value in _CASES:
+            raise InputError("case", f"a {obj.get('type')} load cannot be case {value}; expected one of {listing}")
         raise InputError("case", f"unknown load case {_show(value)}; expected one of {listing}")
     return names[value]
 
@@ -158,7 +164,7 @@ def _combination(raw: Any) -> LoadCombination:
     names = {c.value: c for c in ALL_CHECKS}
     checks = set()
     for i, c in enumerate(checks_raw):
-        if c not in names:
+        if not isinstance(c, str) or c not in names:
             raise InputError(f"checks[{i}]", f'expected "overturning", "sliding" or "bearing", got {_show(c)}')
         checks.add(names[c])
     return LoadCombination(name=name, factors=tuple(factors), checks=frozenset(checks))
@@ -181,8 +187,13 @@ def _criteria(raw: Any) -> DesignCriteria:
                 custom.append(_combination(c))
         if not custom:
             raise InputError("combinations", "is empty; leave it out to use the method's preset combinations")
+    sds = _number(obj, "sds", 0.0, non_negative=True)
+    if sds > MAX_SDS:
+        raise InputError(
+            "sds", f"{sds:g} makes the counteracting dead-load factor 0.6 - 0.14 S_DS negative (ASCE 7-16 2.4.5); check the value"
+        )
     return DesignCriteria(
-        method=method, required=required, sds=_number(obj, "sds", 0.0, non_negative=True),
+        method=method, required=required, sds=sds,
         bearing_increase=_number(obj, "bearing_increase", 1.0, positive=True), custom_combinations=tuple(custom),
     )
 
@@ -210,7 +221,9 @@ def _load(raw: Any, wall_length: float) -> LineLoad | PointLoad | LateralLoad:
         start = _quantity(obj, "start", Kind.LENGTH, "0 ft")
         end = _quantity(obj, "end", Kind.LENGTH, None) if "end" in obj else wall_length
         if not end > start:
-            raise InputError("end", f'must be beyond start, got "{obj.get("end")}"')
+            if "end" in obj:
+                raise InputError("end", f'must be beyond start ("{obj.get("start", "0 ft")}"), got "{obj["end"]}"')
+            raise InputError("start", f'"{obj.get("start")}" is at or beyond the wall\'s end, where the load ends by default; give an "end"')
         return LineLoad(case=case, value=_quantity(obj, "value", Kind.LINE_LOAD, None), start=start, end=end, label=label, reverses=reverses)
     if kind == "point":
         case = _case(obj)
@@ -280,6 +293,15 @@ def _wall(raw: Any, units: str) -> Wall:
                 raise InputError("", "the line load runs past the ends of the footing")
             if isinstance(load, PointLoad) and not low - 1e-9 <= load.at <= high + 1e-9:
                 raise InputError("at", f"the point load is off the footing (it runs from {format_length(low, units)} to {format_length(high, units)} from the wall's start)")
+            if not isinstance(load, LateralLoad) and load.reverses:
+                ends = (load.start, load.end) if isinstance(load, LineLoad) else (load.at, load.at)
+                mirrored = [length - x for x in ends]
+                if min(mirrored) < low - 1e-9 or max(mirrored) > high + 1e-9:
+                    raise InputError(
+                        "reverses",
+                        "in direction \"-\" this load acts at its mirror image about the wall's mid-length, which is off the "
+                        'footing; extend the footing at that end or set "reverses": false',
+                    )
         loads.append(load)
     with _scope("sizing"):
         z = _object(obj.get("sizing"), "")
@@ -312,10 +334,10 @@ def parse_project(raw: Any) -> Project:
     if version > VERSION:
         raise FormatVersionError(
             "version",
-            f"the file is format version {version}, written by a newer Kernline; this one reads up to version {VERSION}. Update Kernline to open it.",
+            f"the file is format version {_show(version)}, written by a newer Kernline; this one reads up to version {VERSION}. Update Kernline to open it.",
         )
     if version < 1:
-        raise FormatVersionError("version", f"expected 1, got {version}")
+        raise FormatVersionError("version", f"expected 1, got {_show(version)}")
     units = obj.get("units", "US")
     if units not in ("US", "SI"):
         raise InputError("units", f'expected "US" or "SI", got {_show(units)}')

@@ -257,8 +257,8 @@ def _check_json(result: CheckResult) -> dict[str, Any]:
     else:
         body = {
             "eccentricity": _num(result.eccentricity), "q_max": _num(result.q_max), "q_min": _num(result.q_min),
-            "contact_length": _num(result.contact_length), "allowable": _num(result.allowable),
-            "stable": result.stable,
+            "contact_length": _num(result.contact_length), "pressure_compared": _num(result.pressure_compared),
+            "allowable": _num(result.allowable), "stable": result.stable,
         }
     body.update(ratio=_num(result.ratio), required=result.required, passes=result.passes)
     return body
@@ -268,17 +268,18 @@ def wall_json(result: WallResult) -> dict[str, Any]:
     """The documented results record of one wall (SI base units; null where there is no demand)."""
     governing: dict[str, Any] = {}
     for check, g in result.governing.items():
+        demand = not math.isinf(g.ratio)
         entry: dict[str, Any] = {
-            "ratio": _num(g.ratio), "required": g.required, "combination": g.combination,
-            "direction": g.direction, "passes": g.passes,
+            "ratio": _num(g.ratio), "required": g.required, "combination": g.combination if demand else None,
+            "direction": g.direction if demand else None, "passes": g.passes,
         }
         if check is Check.BEARING:
             br = result.cases[g.case_index].bearing
-            entry["q_max"] = _num(br.q_max) if br is not None else None
+            entry["q_max"] = _num(br.q_max) if br is not None and demand else None
         governing[check.value] = entry
     cases = []
     for case in result.cases:
-        entry = {"combination": case.combination, "direction": case.direction, "vertical": case.vertical, "lateral": case.lateral}
+        entry = {"combination": case.combination, "direction": case.direction, "vertical": _num(case.vertical), "lateral": _num(case.lateral)}
         for check in ALL_CHECKS:
             r = case.of(check)
             if r is not None:

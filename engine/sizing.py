@@ -20,8 +20,6 @@ from .units import format_length
 
 # Relative tolerance that lets the upper bound of a range be reached despite floating-point steps.
 GRID_TOLERANCE = 1e-6
-# A grid larger than this is refused (it would take seconds and memory; the steps are too fine).
-MAX_CANDIDATES = 250_000
 # Fraction of the wall length tried on each end when probing whether a longer footing would help.
 LONGER_PROBE = 0.1
 
@@ -106,18 +104,9 @@ def feasibility_map(table: CaseTable, widths: np.ndarray, thicknesses: np.ndarra
 
 
 def size_footing(project: Project, wall: Wall) -> SizingResult:
-    """Find the passing candidate with the least B*D on the wall's sizing grid.
-
-    Raises:
-        InputError: the grid would be unreasonably large.
-    """
-    from .errors import InputError
-
+    """Find the passing candidate with the least B*D on the wall's sizing grid (its size is bounded by
+    :class:`engine.model.SizingBounds`)."""
     widths, thicknesses = candidate_grid(wall)
-    if widths.size * thicknesses.size > MAX_CANDIDATES:
-        raise InputError(
-            "sizing", f"the grid has {widths.size} x {thicknesses.size} candidates; use coarser steps (at most {MAX_CANDIDATES:,} candidates)"
-        )
     table = case_table(wall, project.soil, project.criteria)
     check_normalized, allowed = feasibility_map(table, widths, thicknesses)
     governing = np.argmin(check_normalized, axis=0)
@@ -133,7 +122,7 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
         order = np.lexsort((widths[cols], thicknesses[rows], np.round(area[rows, cols], 12)))
         row, col = int(rows[order[0]]), int(cols[order[0]])
         width, thickness = float(widths[col]), float(thicknesses[row])
-        message = _why_smallest(check_normalized, passes, row, col)
+        message = _why_smallest(check_normalized, passes, allowed, row, col)
         suggestions: tuple[str, ...] = ()
     else:
         width, thickness = None, None
@@ -145,20 +134,19 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
     )
 
 
-def _why_smallest(check_normalized: np.ndarray, passes: np.ndarray, row: int, col: int) -> str:
+def _why_smallest(check_normalized: np.ndarray, passes: np.ndarray, allowed: np.ndarray, row: int, col: int) -> str:
     """Say which check the next smaller candidate along each axis fails."""
     parts = []
     for axis_name, r, c in (("narrower", row, col - 1), ("thinner", row - 1, col)):
         if r < 0 or c < 0:
             parts.append(f"the next {axis_name} candidate is outside the bounds")
             continue
-        if not passes[r, c]:
+        if not allowed[r, c]:
+            parts.append(f"the next {axis_name} one is narrower than the wall it carries")
+        elif not passes[r, c]:
             j = int(np.argmin(check_normalized[:, r, c]))
             value = float(check_normalized[j, r, c])
-            if math.isfinite(value):
-                parts.append(f"the next {axis_name} one fails {ALL_CHECKS[j].value} (ratio/required {value:.3f})")
-            else:
-                parts.append(f"the next {axis_name} one is narrower than the wall it carries")
+            parts.append(f"the next {axis_name} one fails {ALL_CHECKS[j].value} (ratio/required {value:.3f})")
     return "smallest passing size: " + "; ".join(parts)
 
 
@@ -173,7 +161,11 @@ def _diagnose(
     if not allowed[last_r, last_c]:
         return "even the widest candidate is narrower than the wall it carries", ("raise width_max above the wall thickness",)
     worst_check, worst = min(failing, key=lambda t: t[1]) if failing else (ALL_CHECKS[0], 1.0)
-    described = ", ".join(f"{c.value} reaches {v:.0%} of its required ratio" for c, v in failing)
+    described = ", ".join(
+        f"{c.value} has no equilibrium (the resultant falls beyond the footing's end)" if c is Check.BEARING and v == 0.0
+        else f"{c.value} reaches {v:.0%} of its required ratio"
+        for c, v in failing
+    )
     size = f"{format_length(float(widths[-1]), project.units)} x {format_length(float(thicknesses[-1]), project.units)}"
     message = f"no candidate passes; at the largest size ({size}) {described}"
     suggestions = []
@@ -186,6 +178,8 @@ def _diagnose(
         longer = _longer_probe(project, wall, widths[-1], thicknesses[-1], check)
         if longer is not None and longer > value + 1e-12:
             helps.append(f"a longer footing (extending each end by {LONGER_PROBE:.0%} of the wall length gives {longer:.0%})")
+        if check is Check.BEARING and value == 0.0 and not helps:
+            helps.append("a longer footing or more resisting dead load, to bring the resultant back onto the footing")
         if helps:
             suggestions.append(f"{check.value}: " + "; ".join(helps) + " would help")
         else:

@@ -228,6 +228,11 @@ def evaluate(table: CaseTable, width: float | np.ndarray, thickness: float | np.
     compared = bearing.compared_pressure(pressure.q_max, soil.bearing_basis, soil.unit_weight, cover, d)
     allowable = bearing.allowable_pressure(soil.allowable_bearing, table.criteria.bearing_increase, per_case(table.wind_or_seismic))
     br_ratio = bearing.bearing_ratio(allowable, compared, pressure.stable)
+    # A case that puts no load at all on the soil (N = 0, M = 0: e.g. a combination of a case the wall
+    # does not have, on a weightless footing) is no demand, not a loss of equilibrium.
+    unloaded = (vertical == 0.0) & (moment == 0.0)
+    if unloaded.any():
+        br_ratio = np.where(unloaded, np.inf, br_ratio)
 
     return Evaluation(
         self_weight=weight,

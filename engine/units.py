@@ -13,6 +13,7 @@ from __future__ import annotations
 
 import math
 import re
+from collections.abc import Callable
 from dataclasses import dataclass
 from enum import Enum
 from functools import lru_cache
@@ -93,9 +94,16 @@ def registry() -> pint.UnitRegistry:
 _NUMBER = r"[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?"
 _BARE_NUMBER = re.compile(rf"^\s*({_NUMBER})\s*$")
 # 2'-6", 2' 6", 2', 6", 2'-6 1/2" is not supported (fractions are rare in a project file)
-_FEET_INCHES = re.compile(rf"""^\s*(?:({_NUMBER})\s*')?\s*-?\s*(?:({_NUMBER})\s*")?\s*$""")
-# "2 ft 6 in", "1 m 250 mm": two or more number-word pairs, summed
-_COMPOUND_PART = re.compile(rf"\s*({_NUMBER})\s*([A-Za-z]+)\s*")
+_UNSIGNED = r"(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?"
+_SIGN = re.compile(r"^\s*([-+])\s*")
+# after one leading sign: 2'-6", 2' 6", 2', 6" (the "-" between feet and inches is a separator)
+_FEET_INCHES = re.compile(rf"""^(?:({_UNSIGNED})\s*')?\s*(?:-\s*)?(?:({_UNSIGNED})\s*")?\s*$""")
+# after one leading sign: "2 ft 6 in", "1 m 250 mm": two or more unsigned number-word pairs, summed
+_COMPOUND_PART = re.compile(rf"\s*({_UNSIGNED})\s*([A-Za-z]+)\s*")
+# pint evaluates powers of numbers ("9**9**9 in" would run for minutes): refuse them, and big exponents
+_RISKY_POWER = re.compile(r"(\d\s*\)?\s*(\*\*|\^))|((\*\*|\^)\s*[-+]?\s*\d{2,})")
+# magnitudes beyond this (in SI) are typing errors, and would overflow products of forces and arms
+MAX_MAGNITUDE = 1e12
 _SIMPLE = re.compile(rf"^\s*({_NUMBER})\s*([A-Za-z_][A-Za-z_0-9*/^ .·]*?)\s*$")
 
 
@@ -186,37 +194,64 @@ def parse_quantity(text: str, kind: Kind, default_unit: str | None = None) -> fl
             raise _expected(kind, text)
         value = float(bare.group(1)) * factor
     elif kind is Kind.LENGTH and ("'" in text or '"' in text):
-        m = _FEET_INCHES.match(text)
-        if not m or (m.group(1) is None and m.group(2) is None):
-            raise _expected(kind, text)
-        feet = float(m.group(1) or 0.0)
-        inches = float(m.group(2) or 0.0)
-        value = (feet * 12.0 + inches) * 0.0254  # 1 in = 0.0254 m exactly (international inch, 1959)
+        value = _signed(text, kind, _feet_inches)
     else:
         simple = _SIMPLE.match(text)
         if simple:
             factor = _unit_factor(simple.group(2).strip(), dim)
             if factor is not None:
                 value = float(simple.group(1)) * factor
-        if value is None and kind is Kind.LENGTH:
-            parts = _COMPOUND_PART.findall(text)
-            if len(parts) >= 2 and "".join(f"{n}{u}" for n, u in parts) == re.sub(r"\s+", "", text):
-                total = 0.0
-                for number, unit in parts:
-                    factor = _unit_factor(unit, dim)
-                    if factor is None:
-                        raise _expected(kind, text)
-                    total += float(number) * factor
-                value = total
+        if value is None and kind is Kind.LENGTH and len(_COMPOUND_PART.findall(text)) >= 2:
+            value = _signed(text, kind, _compound_length)
         if value is None:
             value = _parse_with_pint(text, kind)
     if not math.isfinite(value):
         raise InputError("", f'expected a finite number, got "{text}"')
+    if abs(value) > MAX_MAGNITUDE:
+        raise InputError("", f'"{text}" is far too large; check the number and its unit')
     return value
+
+
+def _signed(text: str, kind: Kind, parse: Callable[[str, Kind], float | None]) -> float:
+    """Apply one leading sign to a compound form; a sign inside it is refused."""
+    sign = 1.0
+    m = _SIGN.match(text)
+    body = text
+    if m:
+        sign = -1.0 if m.group(1) == "-" else 1.0
+        body = text[m.end() :]
+    value = parse(body, kind)
+    if value is None:
+        raise _expected(kind, text)
+    return sign * value
+
+
+def _feet_inches(body: str, kind: Kind) -> float | None:
+    """2'-6", 2' 6", 2', 6" (unsigned): feet and inches, 1 in = 0.0254 m exactly (NIST SP 811)."""
+    m = _FEET_INCHES.match(body)
+    if not m or (m.group(1) is None and m.group(2) is None):
+        return None
+    return (float(m.group(1) or 0.0) * 12.0 + float(m.group(2) or 0.0)) * 0.0254
+
+
+def _compound_length(body: str, kind: Kind) -> float | None:
+    """"2 ft 6 in", "1 m 250 mm" (unsigned parts): the sum of the parts."""
+    parts = _COMPOUND_PART.findall(body)
+    if len(parts) < 2 or "".join(f"{n}{u}" for n, u in parts) != re.sub(r"\s+", "", body):
+        return None
+    total = 0.0
+    for number, unit in parts:
+        factor = _unit_factor(unit, kind.info.dimensionality)
+        if factor is None:
+            return None
+        total += float(number) * factor
+    return total
 
 
 def _parse_with_pint(text: str, kind: Kind) -> float:
     """General pint parse for anything the fast paths above do not cover ("3 kN/m", "1.5 kip/ft")."""
+    if _RISKY_POWER.search(text) or len(text) > 80:
+        raise _expected(kind, text)
     reg = registry()
     try:
         q: Any = reg.parse_expression(text.replace("·", "*"))
@@ -284,13 +319,21 @@ def format_length(value_si: float | None, system: str) -> str:
 
 
 def length_text(value_si: float, system: str) -> str:
-    """Text a project file stores for a footing dimension: whole or decimal inches (US) or mm (SI)."""
-    if system == "US":
-        inches = value_si / 0.0254
-        return f"{_trim(inches, 3)} in"
-    return f"{_trim(value_si * 1000.0, 1)} mm"
+    """Short text for a footing dimension that parses back to ``value_si`` (within 1e-9 m).
+
+    Whole or decimal inches (US) or millimetres (SI); when the value is on the other system's grid
+    (a US project sized in millimetre steps) that unit is used; otherwise as many decimals as needed.
+    """
+    units_in_order = (("in", 0.0254), ("mm", 0.001)) if system == "US" else (("mm", 0.001), ("in", 0.0254))
+    for name, size in units_in_order:
+        for decimals in range(4):
+            text = f"{_trim(value_si / size, decimals)} {name}"
+            if abs(float(text.split()[0]) * size - value_si) <= 1e-9:
+                return text
+    name, size = units_in_order[0]
+    return f"{value_si / size:.12g} {name}"
 
 
 def _trim(value: float, decimals: int) -> str:
-    text = f"{value:.{decimals}f}".rstrip("0").rstrip(".")
+    text = f"{value:.{decimals}f}".rstrip("0").rstrip(".") if decimals else f"{value:.0f}"
     return text if text not in ("-0", "") else "0"

@@ -96,3 +96,21 @@ def test_version(capsys):
         cli.main(["--version"])
     assert exit_.value.code == 0
     assert capsys.readouterr().out.startswith("kernline ")
+
+
+def test_json_never_carries_nan_or_infinity(tmp_path, capsys):
+    """No-demand ratios and unstable pressures are null; the governing case of a no-demand check too."""
+    raw = json.loads(resource_path("demo.kernline").read_text(encoding="utf-8"))
+    raw["walls"][0]["loads"] = [load for load in raw["walls"][0]["loads"] if load["case"] in ("D", "L")]
+    path = tmp_path / "p.kernline"
+    path.write_text(json.dumps(raw), encoding="utf-8")
+    cli.main(["check", str(path), "--json"])
+    text = capsys.readouterr().out
+    assert "NaN" not in text and "Infinity" not in text
+    overturning = json.loads(text)["walls"][0]["governing"]["overturning"]
+    assert overturning["ratio"] is None and overturning["combination"] is None
+
+
+def test_missing_file_is_named_once(tmp_path):
+    result = run("check", str(tmp_path / "nope.kernline"))
+    assert result.stderr.count("nope.kernline") == 1

@@ -104,9 +104,35 @@ def test_infeasible_sizing_says_which_check_fails_and_what_helps():
     assert at_max[ALL_CHECKS.index(Check.OVERTURNING)] < 1.0
 
 
-def test_sizing_refuses_an_absurd_grid():
+def test_an_absurd_grid_is_refused_when_the_file_is_read():
+    """Steps far too fine for the range are refused with the field path, before any memory is taken."""
     from engine.errors import InputError
 
-    p = project(sizing={"width_step": "0.01 in", "thickness_step": "0.01 in"})
-    with pytest.raises(InputError, match="coarser steps"):
-        size_footing(p, p.walls[0])
+    with pytest.raises(InputError) as err:
+        project(sizing={"width_max": "1e9 m", "width_step": "1 mm"})
+    assert err.value.field == "walls[0].sizing.width_step"
+    assert "coarser steps" in err.value.problem
+
+
+def test_next_narrower_candidate_below_the_wall_is_named_as_such():
+    """The message does not blame a check for a candidate refused only for being narrower than the wall."""
+    p = project(
+        footing={"width": "12 in", "thickness": "12 in"},
+        loads=[{"type": "line", "case": "D", "value": "100 plf"}],
+        sizing={"width_min": "6 in", "width_max": "24 in"},
+    )
+    s = size_footing(p, p.walls[0])
+    assert s.width == pytest.approx(8 * INCH)
+    assert "next narrower one is narrower than the wall" in s.message
+
+
+def test_no_equilibrium_at_the_largest_size_is_said_in_words():
+    """When the resultant stays beyond the footing's end, the diagnosis says so and what helps."""
+    p = project(
+        loads=[{"type": "line", "case": "D", "value": "50 plf"}, {"type": "lateral", "case": "W", "value": "60 kip", "height": "30 ft"}],
+        sizing={"width_max": "24 in", "thickness_max": "18 in"},
+    )
+    s = size_footing(p, p.walls[0])
+    assert not s.feasible
+    assert "no equilibrium" in s.message
+    assert any(t.startswith("bearing:") and "would help" in t for t in s.suggestions)

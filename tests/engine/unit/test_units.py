@@ -118,3 +118,20 @@ def test_length_text_round_trips():
     for value in (0.4572, 1.2192, 0.3):
         for system in ("US", "SI"):
             assert parse_quantity(units.length_text(value, system), Kind.LENGTH) == pytest.approx(value, abs=1e-6)
+
+
+@pytest.mark.parametrize(
+    ("text", "inches"),
+    [('-6"', -6.0), ("-2'-6\"", -30.0), ("-2 ft 6 in", -30.0), ("+3'", 36.0), ("2'-6\"", 30.0)],
+)
+def test_a_leading_sign_applies_to_the_whole_compound_length(text, inches):
+    """A minus sign before feet-and-inches negates the whole length (loads on the start extension)."""
+    assert parse_quantity(text, Kind.LENGTH) == pytest.approx(inches * INCH)
+
+
+@pytest.mark.parametrize("text", ["2 ft -6 in", "2'-+6\"", "9**9**9 in", "2^99 ft", "1e13 N", "(9)**9 in"])
+def test_signs_inside_powers_and_absurd_magnitudes_are_refused(text):
+    """No sign inside a compound length, no powers of numbers (pint would evaluate them), no 1e13 N."""
+    kind = Kind.FORCE if text.endswith(" N") else Kind.LENGTH
+    with pytest.raises(InputError):
+        parse_quantity(text, kind)
