@@ -178,7 +178,7 @@ def _report(path: str, output: str, walls: str | None) -> int:
 
     doc = load_project(path)
     ids = [w.strip() for w in walls.split(",")] if walls else None
-    write_report(doc.project, output, wall_ids=ids)
+    write_report(doc, output, wall_ids=ids)
     print(f"wrote {output}")
     return EXIT_OK
 

@@ -18,6 +18,7 @@ import math
 import re
 from collections.abc import Sequence
 from dataclasses import dataclass, field, replace
+from typing import Any
 
 from . import CAUTION, __version__
 from .combinations import combinations_of
@@ -82,11 +83,6 @@ def formula(text: str, bold: bool = False) -> Rich:
 def plain(text: str, bold: bool = False) -> Rich:
     """User or program text printed exactly as given."""
     return (Run(text, bold=bold),)
-
-
-def rich_text(value: Rich | str) -> str:
-    """The characters of a rich text, without its styling."""
-    return value if isinstance(value, str) else "".join(r.text for r in value)
 
 
 Cell = Rich | str
@@ -226,6 +222,7 @@ class Dimension:
     y2: float
     text: str
     offset: float = 12.0
+    outside: str = "end"  # where the text goes when it does not fit between the ends: "start" or "end"
 
 
 Shape = Line | Rect | Polygon | Arrow | Label | Dimension
@@ -254,8 +251,19 @@ class Group:
 
 
 @dataclass(frozen=True, slots=True)
+class ContentsEntry:
+    """A line of the contents: a title and where it is, as (words, section key) pairs such as
+    ("sheet", "wall:N1"); the renderer writes the sheet numbers."""
+
+    title: str
+    refs: tuple[tuple[str, str], ...]
+
+
+@dataclass(frozen=True, slots=True)
 class Contents:
     """The list of sections with their sheet numbers (the renderer fills in the numbers)."""
+
+    entries: tuple[ContentsEntry, ...] = ()
 
 
 Block = Heading | Para | Bullets | Table | KeyValues | Equation | Verdict | Drawing | DrawingRow | Group | Contents
@@ -305,8 +313,8 @@ class _Fmt:
     def length(self, value: float) -> str:
         return format_length(value, self.units)
 
-    def force(self, value: float) -> str:
-        return format_quantity(value, Kind.FORCE, self.units)
+    def force(self, value: float | Any) -> str:
+        return format_quantity(float(value), Kind.FORCE, self.units)
 
     def moment(self, value: float) -> str:
         return format_quantity(value, Kind.MOMENT, self.units)
@@ -478,16 +486,21 @@ def build_package(
     )
     report_text = _clean(soil_report).strip() if soil_report else ""
     sections = [
-        _cover(project, reports, title),
         _design_basis(project, reports, fmt, report_text),
         _references_and_notes(project, fmt),
         _cautions(project, report_text),
         _schedule(project, reports, fmt),
     ]
+    entries = [ContentsEntry("Project information and contents", (("sheet", "cover"),))]
+    entries += [ContentsEntry(s.title, (("sheet", s.key),)) for s in sections]
     for r in reports:
         sections.append(_wall_section(project, r, fmt))
     for r in reports:
         sections.append(_appendix(project, r, fmt))
+    for r in reports:
+        name = f"Wall {r.wall.id}" + (f": {_clean(r.wall.label)}" if r.wall.label.strip() else "")
+        entries.append(ContentsEntry(name, (("sheet", f"wall:{r.wall.id}"), ("all cases: sheet", f"appendix:{r.wall.id}"))))
+    sections.insert(0, _cover(project, reports, title, tuple(entries)))
     return Package(title=title, units=project.units, sections=tuple(sections), wall_ids=tuple(w.id for w in walls))
 
 
@@ -496,7 +509,7 @@ def build_package(
 # ---------------------------------------------------------------------------------------------
 
 
-def _cover(project: Project, reports: Sequence[WallReport], title: TitleBlock) -> Section:
+def _cover(project: Project, reports: Sequence[WallReport], title: TitleBlock, contents: tuple[ContentsEntry, ...]) -> Section:
     info = project.info
     n_fail = sum(not r.result.passes for r in reports)
     failing = [r.wall.id for r in reports if not r.result.passes]
@@ -533,7 +546,7 @@ def _cover(project: Project, reports: Sequence[WallReport], title: TitleBlock) -
     ]
     if info.notes.strip():
         blocks += [Heading("Project notes", 2), Para(plain(_clean(info.notes)))]
-    blocks += [Heading("Contents", 2), Contents()]
+    blocks += [Heading("Contents", 2), Contents(contents)]
     return Section("cover", "Project information and contents", "Project information", tuple(blocks))
 
 
@@ -714,13 +727,13 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
         # schedule columns: wall, label, wall length, B, D, L, then (ratio, required, case) per check, result
         cells: list[Cell] = [plain(row[0]), plain(row[1]), f"{row[3]} × {row[4]} × {row[5]}"]
         for j, check in enumerate(ALL_CHECKS):
-            ratio, required, case = row[6 + 3 * j : 9 + 3 * j]
+            ratio, required = row[6 + 3 * j : 8 + 3 * j]
             g = r.result.governing[check]
             if ratio == "no demand":
                 cells.append("no demand")
             else:
                 shown = ratio_text(g.ratio, g.required, g.passes)
-                cells.append(f"{shown} / {required}\n{case}")
+                cells.append(f"{shown} / {required}\n{case_name(g.combination, g.direction)}")
         failing = [_CHECK_WORD[c] for c in ALL_CHECKS if not r.result.governing[c].passes]
         cells.append("passes" if r.result.passes else "FAILS: " + ", ".join(failing))
         if not r.result.passes:
@@ -776,7 +789,7 @@ def _wall_section(project: Project, report: WallReport, fmt: _Fmt) -> Section:
     title = f"Wall {wall.id}" + (f": {_clean(wall.label)}" if wall.label.strip() else "")
     blocks: list[Block] = [Heading(plain(_clean(title))), _wall_verdict(result)]
     blocks.append(
-        DrawingRow((elevation_drawing(wall, fmt, 372.0, 210.0), section_drawing(wall, project, fmt, 140.0, 210.0)))
+        DrawingRow((elevation := elevation_drawing(wall, fmt, 372.0, 236.0), section_drawing(wall, project, fmt, 140.0, max(elevation.height, 150.0))))
     )
     blocks += _inputs(project, wall, result, fmt)
     blocks += _loads(wall, fmt)
@@ -847,7 +860,7 @@ def _loads(wall: Wall, fmt: _Fmt) -> list[Block]:
     return [
         Heading("Loads (as entered; positions from the wall's start end)", 2),
         Table(
-            ("No.", "Type", "Case", "Value", "Position on wall", "Resultant P or H", "x on footing", "Label"),
+            ("No.", "Type", "Case", "Value", "Position on wall", "Resultant", "x on footing", "Label"),
             tuple(rows),
             (0.05, 0.07, 0.06, 0.12, 0.17, 0.13, 0.16, 0.24),
             align="CLCRLRLL",
@@ -889,7 +902,17 @@ def _self_weight(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) ->
         Equation(formula("W"), formula("W_{f} + W_{stem} + W_{soil}"), f"{fmt.force(sw.footing)} + {fmt.force(sw.stem)} + {fmt.force(sw.soil)}",
                  plain(fmt.force(sw.total), bold=True))
     )
-    return [Group(tuple(eqs))]
+    return _lead(eqs, 2)
+
+
+def _lead(blocks: Sequence[Block], n: int) -> list[Block]:
+    """Keep the first ``n`` blocks together (a heading with what it introduces); the rest may flow."""
+    return [Group(tuple(blocks[:n])), *blocks[n:]]
+
+
+def _tail(blocks: list[Block], n: int) -> list[Block]:
+    """Keep the last ``n`` blocks together (the ratio with its verdict)."""
+    return [*blocks[:-n], Group(tuple(blocks[-n:]))]
 
 
 def _case_of(result: WallResult, g: Governing) -> tuple[CaseResult, LoadCombination, int, float]:
@@ -900,7 +923,7 @@ def _case_of(result: WallResult, g: Governing) -> tuple[CaseResult, LoadCombinat
 
 def _governing_heading(check: Check, g: Governing) -> list[Block]:
     head = Heading(f"{_CHECK_TITLE[check]}: governing case {case_name(g.combination, g.direction)}", 2)
-    return [head, Para(f"Lowest ratio / required over all {''}combinations and directions: {direction_words(g.direction)}.", "small")]
+    return [head, Para(f"The case with the lowest ratio / required of all combinations and directions: {direction_words(g.direction)}.", "small")]
 
 
 def _lateral_terms(wall: Wall, combo: LoadCombination, direction: str, fmt: _Fmt, with_arm: bool) -> list[str]:
@@ -969,14 +992,15 @@ def _overturning(wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
                  plain(ratio_text(ot.ratio, ot.required, ot.passes), bold=True)),
     ]
     blocks.append(_check_verdict(Check.OVERTURNING, ot.ratio, ot.required, ot.passes))
-    return [Group(tuple(blocks))]
+    return _lead(_tail(blocks, 2), 4)
 
 
-def _check_verdict(check: Check, ratio: float, required: float, passes: bool) -> Verdict:
+def _check_verdict(check: Check, ratio: float, required: float, passes: bool, symbol: str | None = None) -> Verdict:
     shown = ratio_text(ratio, required, passes)
     sign = "≥" if passes else "<"
     word = "passes" if passes else "FAILS"
-    return Verdict(passes, formula(f"{_CHECK_TITLE[check]} {word}: {_CHECK_RATIO[check]} = {shown} {sign} {required:.2f} required."))
+    symbol = symbol or _CHECK_RATIO[check]
+    return Verdict(passes, formula(f"{_CHECK_TITLE[check]} {word}: {symbol} = {shown} {sign} {required:.2f} required."))
 
 
 def _sliding(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
@@ -1025,7 +1049,7 @@ def _sliding(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
                  plain(ratio_text(sl.ratio, sl.required, sl.passes), bold=True)),
         _check_verdict(Check.SLIDING, sl.ratio, sl.required, sl.passes),
     ]
-    return [Group(tuple(blocks))]
+    return _lead(_tail(blocks, 2), 3)
 
 
 def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
@@ -1067,7 +1091,7 @@ def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
                          "equilibrium on the soil. It overturns; bearing fails."), "fail"),
             _check_verdict(Check.BEARING, br.ratio, br.required, br.passes),
         ]
-        return [Group(tuple(blocks))]
+        return _lead(blocks, 3)
     e_abs = fmt.length(abs(br.eccentricity))
     beyond = br.contact_length < result.length * (1.0 - 1e-9)
     diagram = pressure_diagram(case.vertical, br.eccentricity, result.width, result.length)
@@ -1075,15 +1099,15 @@ def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
     blocks.append(Equation(formula("e"), formula("M / N"), f"{M} / {N}", fmt.length(br.eccentricity)))
     if not beyond:
         blocks += [
-            Para(formula(f"|e| = {e_abs} ≤ L/6 = {fmt.length(kern_half)}: the resultant is inside the kern; the whole footing "
-                         "is in contact."), "body"),
+            Equation(formula("|e|"), None, None, formula(f"{e_abs} ≤ L/6 = {fmt.length(kern_half)}", bold=True),
+                     "the resultant is inside the kern (middle third): the whole footing is in contact"),
             Equation(formula("q_{max}"), formula("N / (B L) (1 + 6|e| / L)"), f"{N} / ({B} × {L}) × (1 + 6 × {e_abs} / {L})", fmt.pressure(br.q_max)),
             Equation(formula("q_{min}"), formula("N / (B L) (1 − 6|e| / L)"), f"{N} / ({B} × {L}) × (1 − 6 × {e_abs} / {L})", fmt.pressure(br.q_min)),
         ]
     else:
         blocks += [
-            Para(formula(f"|e| = {e_abs} > L/6 = {fmt.length(kern_half)}: the resultant is beyond the kern; only part of the "
-                         "footing is in contact and the pressure is a triangle."), "body"),
+            Equation(formula("|e|"), None, None, formula(f"{e_abs} > L/6 = {fmt.length(kern_half)}", bold=True),
+                     "the resultant is beyond the kern: only part of the footing is in contact and the pressure is a triangle"),
             Equation(formula("a"), formula("3 (L/2 − |e|)"), f"3 × ({L}/2 − {e_abs})", fmt.length(br.contact_length), "contact length"),
             Equation(formula("q_{max}"), formula("2N / (3B (L/2 − |e|))"), f"2 × {N} / (3 × {B} × ({L}/2 − {e_abs}))", fmt.pressure(br.q_max)),
             Equation(formula("q_{min}"), None, None, fmt.pressure(br.q_min), "no tension beyond the contact length"),
@@ -1108,11 +1132,10 @@ def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
     blocks += [
         Equation(formula("ratio"), formula(f"q_{{a}} / {q_symbol}"), f"{fmt.pressure(br.allowable)} / {fmt.pressure(br.pressure_compared)}",
                  plain(ratio_text(br.ratio, br.required, br.passes), bold=True)),
-        _check_verdict(Check.BEARING, br.ratio, br.required, br.passes),
+        _check_verdict(Check.BEARING, br.ratio, br.required, br.passes, f"q_{{a}} / {q_symbol}"),
     ]
-    out: list[Block] = [Group(tuple(blocks))]
-    out.append(pressure_drawing(diagram, br.allowable, result, g, fmt, CONTENT_WIDTH, 150.0))
-    return out
+    blocks.append(pressure_drawing(diagram, br.allowable, result, g, fmt, CONTENT_WIDTH, 150.0))
+    return _lead(_tail(blocks, 3), 3)
 
 
 def _results_table(result: WallResult) -> list[Block]:
@@ -1146,7 +1169,7 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
     blocks: list[Block] = [Heading("Sizing: the smallest footing that passes", 2)]
     if s is None:
         blocks.append(Para(plain(f"The program could not size this footing: {report.sizing_error}"), "fail"))
-        return [Group(tuple(blocks))]
+        return blocks
     blocks.append(
         Para(
             f"Searched: widths B from {fmt.length(z.width_min)} to {fmt.length(z.width_max)} in steps of {fmt.length(z.width_step)} "
@@ -1157,10 +1180,11 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
         )
     )
     if not s.feasible or s.width is None or s.thickness is None:
-        blocks.append(Verdict(False, plain("No candidate within the bounds passes. " + s.message + ".")))
+        finding = s.message[:1].upper() + s.message[1:]
+        blocks.append(Verdict(False, plain(f"No candidate within the bounds passes. Program's finding: {finding}.")))
         if s.suggestions:
             blocks.append(Bullets(tuple(plain(t) for t in s.suggestions)))
-        return [Group(tuple(blocks))]
+        return _lead(blocks, 3)
     row = int(abs(s.thicknesses - s.thickness).argmin())
     col = int(abs(s.widths - s.width).argmin())
     table_rows: list[tuple[Cell, ...]] = []
@@ -1201,14 +1225,19 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
     else:
         blocks.append(
             Verdict(False, f"The current footing ({fmt.length(wall.footing.width)} × {fmt.length(wall.footing.thickness)}) FAILS; "
-                           f"revise it to at least the size above ({fmt.length(s.width)} × {fmt.length(s.thickness)}) or as the engineer decides.")
+                           f"revise it, for example to the smallest passing size {fmt.length(s.width)} × {fmt.length(s.thickness)}, "
+                           "as the engineer decides.")
         )
-    return [Group(tuple(blocks))]
+    return _lead(blocks, 2)
 
 
 # ---------------------------------------------------------------------------------------------
 # Appendix
 # ---------------------------------------------------------------------------------------------
+
+
+def _short_ratio(ratio: float, required: float, passes: bool) -> str:
+    return "—" if math.isinf(ratio) else ratio_text(ratio, required, passes)
 
 
 def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
@@ -1229,12 +1258,12 @@ def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
                 fmt.number(br.eccentricity, Kind.LENGTH) if br is not None else "n/a",
                 fmt.number(ot.moment, Kind.MOMENT) if ot is not None else "n/a",
                 fmt.number(ot.resisting, Kind.MOMENT) if ot is not None else "n/a",
-                ratio_text(ot.ratio, ot.required, ot.passes) if ot is not None else "n/a",
+                _short_ratio(ot.ratio, ot.required, ot.passes) if ot is not None else "n/a",
                 fmt.number(sl.resistance, Kind.FORCE) if sl is not None else "n/a",
-                ratio_text(sl.ratio, sl.required, sl.passes) if sl is not None else "n/a",
+                _short_ratio(sl.ratio, sl.required, sl.passes) if sl is not None else "n/a",
                 fmt.number(br.q_max, Kind.PRESSURE) if br is not None else "n/a",
                 fmt.number(br.allowable, Kind.PRESSURE) if br is not None else "n/a",
-                ratio_text(br.ratio, br.required, br.passes) if br is not None else "n/a",
+                _short_ratio(br.ratio, br.required, br.passes) if br is not None else "n/a",
                 "ok" if not failing else "fails " + "/".join(failing),
             )
         )
@@ -1254,7 +1283,7 @@ def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
             f"Footing {fmt.length(result.width)} × {fmt.length(result.thickness)} × {fmt.length(result.length)} (B × D × L). "
             "N vertical load on the soil, V shear, M moment about the footing's mid-length, e = M / N, moments about the toe, "
             "R sliding resistance, q_max peak soil pressure, q_a allowable. * marks a case that governs a check; "
-            "n/a: the combination does not apply to that check.",
+            "— in a ratio column: no demand; n/a: the combination does not apply to that check.",
             "small",
         ),
         Table(headers, tuple(rows), tuple(w / total for w in widths), align="LCRRRRRRRRRRRRL", font_size=6.0, fail_rows=tuple(fail_rows)),
@@ -1275,6 +1304,9 @@ _US_SCALES = (
 )
 _SI_SCALES = tuple((n, f"1:{n}") for n in (10, 20, 25, 50, 75, 100, 150, 200, 250, 500, 1000, 2000))
 _POINTS_PER_METRE = 72.0 / 0.0254
+# A generous average character width of the sans-serif drawing font, per point of size (for
+# deciding whether a label fits; the renderer measures exactly).
+_TEXT_WIDTH = 0.58
 
 
 def drawing_scale(fit: float, units: str) -> tuple[float, str]:
@@ -1309,10 +1341,11 @@ def elevation_drawing(wall: Wall, fmt: _Fmt, width: float, height: float) -> Dra
     wall_top = max(h_top, stem_h + 2.0)  # at least a stub of wall above the stem
     line_loads = [ld for ld in wall.loads if isinstance(ld, LineLoad)]
     point_loads = [ld for ld in wall.loads if isinstance(ld, PointLoad)]
-    band = 12.0 * len(line_loads) + (24.0 if point_loads else 0.0)
-    left_margin, right_margin, bottom_margin, top_margin = 86.0, 46.0, 30.0, 16.0 + band
+    band = 10.0 * len(line_loads) + (24.0 if point_loads else 0.0)
+    left_margin, right_margin, bottom_margin, top_margin = 86.0, 46.0, 32.0, 14.0 + band
     fit = min((width - left_margin - right_margin) / length, (height - bottom_margin - top_margin) / (wall_top + f.thickness))
     s, scale_name = drawing_scale(fit, fmt.units)
+    height = bottom_margin + (wall_top + f.thickness) * s + top_margin  # the box shrinks to what it holds
     x0 = left_margin + ((width - left_margin - right_margin) - length * s) / 2.0
     y0 = bottom_margin + f.thickness * s  # top of footing
 
@@ -1325,8 +1358,8 @@ def elevation_drawing(wall: Wall, fmt: _Fmt, width: float, height: float) -> Dra
     shapes: list[Shape] = []
     # grade line over the footing
     grade = Y(f.cover)
-    shapes.append(Line(X(0) - 14, grade, X(length) + 14, grade, 0.5, dash=True, color="soil"))
-    shapes.append(Label(X(length) + 16, grade - 2, "grade", "start", 5.5, color="soil"))
+    shapes.append(Line(X(0) - 14, grade, X(length) + 8, grade, 0.5, dash=True, color="soil"))
+    shapes.append(Label(X(0) - 16, grade - 2, "grade", "end", 5.5, color="soil"))
     if f.cover > 0:
         shapes.append(Rect(X(0), Y(0), length * s, f.cover * s, fill="soil", width=0))
     # footing
@@ -1364,7 +1397,7 @@ def elevation_drawing(wall: Wall, fmt: _Fmt, width: float, height: float) -> Dra
                 shapes.append(Arrow(xx, y_band + 1, xx, y_band + 8, 0.5))
         text = f"{ld.case.value} {fmt.line_load(ld.value)}" + (" (reverses)" if ld.reverses else "")
         shapes.append(Label(xa - 4, y_band + 2, text, "end", 5.5, color="load"))
-        y_band += 12.0
+        y_band += 10.0
     if point_loads:
         items = [(f.extension_start + p.at, f"{p.case.value} {fmt.force(p.value)}" + (" rev." if p.reverses else "")) for p in point_loads]
         for x, text in _group_loads(items):
@@ -1375,15 +1408,18 @@ def elevation_drawing(wall: Wall, fmt: _Fmt, width: float, height: float) -> Dra
     shapes.append(Dimension(X(0), Y(-f.thickness), X(length), Y(-f.thickness), f"L = {fmt.length(length)}", offset=-18.0))
     if f.extension_start > 0 or f.extension_end > 0:
         if f.extension_start > 0:
-            shapes.append(Dimension(X(0), Y(-f.thickness), X(ws), Y(-f.thickness), fmt.length(f.extension_start), offset=-8.0))
+            shapes.append(Dimension(X(0), Y(-f.thickness), X(ws), Y(-f.thickness), fmt.length(f.extension_start), offset=-8.0, outside="start"))
         if f.extension_end > 0:
             shapes.append(Dimension(X(we), Y(-f.thickness), X(length), Y(-f.thickness), fmt.length(f.extension_end), offset=-8.0))
-    shapes.append(Label(X(ws + wall.length / 2), Y(base) + 4, f"wall {fmt.length(wall.length)}", "middle", 6.0))
-    shapes.append(Dimension(X(0), Y(-f.thickness), X(0), Y(0), f"D = {fmt.length(f.thickness)}", offset=-10.0))
+    wall_text = f"wall, {fmt.length(wall.length)} long"
+    if wall.length * s > _TEXT_WIDTH * 6.0 * len(wall_text) + 6.0:
+        shapes.append(Label(X(ws + wall.length / 2), Y((base + wall_top) / 2), wall_text, "middle", 6.0))
+    else:  # a narrow wall: the text runs up it
+        shapes.append(Label(X(ws + wall.length / 2) + 2.0, Y((base + wall_top) / 2), wall_text, "middle", 6.0, angle=90.0))
     if wall.stem.present:
-        shapes.append(Label(X(length) - 3, Y(stem_h) - 8, f"stem {fmt.length(stem_h)}", "end", 5.5))
-    shapes.append(Label(X(0), Y(-f.thickness) + 3, "x = 0", "start", 5.0))
-    shapes.append(Label(X(length) - 2, Y(-f.thickness) + 3, "x = L", "end", 5.0))
+        shapes.append(Label(X(ws + wall.length / 2), Y(stem_h / 2) - 2, f"stem wall, {fmt.length(stem_h)} high", "middle", 5.5))
+    shapes.append(Label(X(0), Y(-f.thickness) - 30, "x = 0", "middle", 5.0))
+    shapes.append(Label(X(length), Y(-f.thickness) - 30, "x = L", "middle", 5.0))
     caption = f"Elevation along the wall, scale {scale_name} (printed at 100%); wall drawn to the highest lateral load; + direction to the right."
     return Drawing(width, height, tuple(shapes), caption)
 
@@ -1425,7 +1461,7 @@ def section_drawing(wall: Wall, project: Project, fmt: _Fmt, width: float, heigh
 def pressure_drawing(diagram: PressureDiagram, allowable: float, result: WallResult, g: Governing, fmt: _Fmt, width: float, height: float) -> Drawing:
     """Soil pressure under the footing in the governing bearing case, with the allowable line."""
     length = result.length
-    left, right, top, bottom = 40.0, 40.0, 40.0, 14.0
+    left, right, top, bottom = 70.0, 30.0, 48.0, 30.0
     sx = (width - left - right) / length
     q_top = max(diagram.q_max if math.isfinite(diagram.q_max) else 0.0, allowable)
     sy = (height - top - bottom - 14.0) / q_top if q_top > 0 else 0.0
@@ -1441,43 +1477,46 @@ def pressure_drawing(diagram: PressureDiagram, allowable: float, result: WallRes
     shapes.append(Line(X(k1), y_base + 10, X(k1), y_base + 16, 0.6))
     shapes.append(Line(X(k2), y_base + 10, X(k2), y_base + 16, 0.6))
     shapes.append(Line(X(k1), y_base + 16, X(k2), y_base + 16, 0.6))
-    shapes.append(Label((X(k1) + X(k2)) / 2, y_base + 18, "kern (middle third)", "middle", 5.5))
+    shapes.append(Label(X(k1) - 3, y_base + 13, "kern (middle third)", "end", 5.5))
     if diagram.stable:
         pts = tuple((X(float(x)), y_base - float(q) * sy) for x, q in zip(diagram.x, diagram.q, strict=True))
         shapes.append(Polygon(pts, fill="pressure"))
         # the resultant N
         xr = X(diagram.resultant_x)
-        shapes.append(Arrow(xr, y_base + 34, xr, y_base + 11, 1.0))
-        shapes.append(Label(xr + 3, y_base + 28, f"N = {fmt.force(float(result.cases[g.case_index].vertical))}", "start", 6.0, color="load"))
-        shapes.append(Label(xr + 3, y_base + 21, f"e = {fmt.length(diagram.resultant_x - length / 2)}", "start", 6.0, color="load"))
-        # pressure values at the ends of the block
+        shapes.append(Arrow(xr, y_base + 36, xr, y_base + 11, 1.0))
+        case = result.cases[g.case_index]
+        text = f"N = {fmt.force(case.vertical)}"
+        if case.bearing is not None:
+            text += f" at e = {fmt.length(case.bearing.eccentricity)}"
+        shapes.append(Label(xr, y_base + 38, text, "middle", 6.0, color="load"))
+        # pressure values under the ends of the block
         peak_left = float(diagram.q[1]) >= float(diagram.q[2])
         x_peak = diagram.contact_start if peak_left else diagram.contact_end
         x_other = diagram.contact_end if peak_left else diagram.contact_start
-        anchor_peak, anchor_other = ("end", "start") if peak_left else ("start", "end")
-        dx = -3 if peak_left else 3
-        shapes.append(Label(X(x_peak) + dx, y_base - diagram.q_max * sy, f"q_max = {fmt.pressure(diagram.q_max)}", anchor_peak, 6.0, bold=True))
-        shapes.append(Label(X(x_other) - dx, y_base - diagram.q_min * sy - 8, f"q_min = {fmt.pressure(diagram.q_min)}", anchor_other, 6.0))
+        anchor_peak, anchor_other = ("start", "end") if peak_left else ("end", "start")
+        shapes.append(Label(X(x_peak), y_base - diagram.q_max * sy - 8, f"q_max = {fmt.pressure(diagram.q_max)}", anchor_peak, 6.0, bold=True))
+        if diagram.q_min > 0:
+            shapes.append(Label(X(x_other), y_base - diagram.q_min * sy - 8, f"q_min = {fmt.pressure(diagram.q_min)}", anchor_other, 6.0))
         if diagram.contact_end - diagram.contact_start < length * (1 - 1e-9):
             shapes.append(
                 Dimension(X(diagram.contact_start), y_base, X(diagram.contact_end), y_base,
-                          f"contact a = {fmt.length(diagram.contact_end - diagram.contact_start)}", offset=-(diagram.q_max * sy + 12))
+                          f"contact a = {fmt.length(diagram.contact_end - diagram.contact_start)}", offset=-(diagram.q_max * sy + 24))
             )
     else:
         shapes.append(Label(width / 2, y_base - 30, "no equilibrium: the resultant is outside the footing", "middle", 7.0, bold=True, color="fail"))
     ya = y_base - allowable * sy
-    shapes.append(Line(X(0) - 6, ya, X(length) + 6, ya, 0.8, dash=True, color="allow"))
-    shapes.append(Label(X(length) + 8, ya - 2, f"q_a = {fmt.pressure(allowable)}", "start", 6.0, color="allow"))
-    shapes.append(Label(X(0), y_base + 3, "x = 0", "start", 5.0))
-    shapes.append(Label(X(length), y_base + 3, "x = L", "end", 5.0))
+    shapes.append(Line(X(0), ya, X(length), ya, 0.8, dash=True, color="allow"))
+    shapes.append(Label(X(0) - 4, ya - 2, f"q_a = {fmt.pressure(allowable)}", "end", 6.0, color="allow"))
+    shapes.append(Label(X(0) - 4, y_base + 2, "x = 0", "end", 5.5))
+    shapes.append(Label(X(length) + 4, y_base + 2, "x = L", "start", 5.5))
     caption = (f"Soil pressure in the governing bearing case {case_name(g.combination, g.direction)} "
                "(pressures drawn downward to a uniform scale; dashed: allowable).")
     return Drawing(width, height, tuple(shapes), caption)
 
 
 __all__ = [
-    "CONTENT_WIDTH", "Arrow", "Block", "Bullets", "Contents", "Dimension", "Drawing", "DrawingRow", "Equation", "Group",
+    "CONTENT_WIDTH", "Arrow", "Block", "Bullets", "Contents", "ContentsEntry", "Dimension", "Drawing", "DrawingRow", "Equation", "Group",
     "Heading", "KeyValues", "Label", "Line", "Package", "Para", "Polygon", "Rect", "Run", "Section", "Table", "TitleBlock",
-    "Verdict", "WallReport", "build_package", "drawing_scale", "formula", "plain", "ratio_text", "rich_text", "select_walls",
+    "Verdict", "WallReport", "build_package", "drawing_scale", "formula", "plain", "ratio_text", "select_walls",
     "wall_report",
 ]
