@@ -1,0 +1,418 @@
+"""The open project: raw document, parsed model, results, path, dirty flag and undo stack.
+
+One :class:`ProjectDocument` owns all state of the window. The raw JSON dict is the source of truth
+(it keeps the user's unit text and keys Kernline does not know); every edit is an undoable command
+(:mod:`app.commands`) that changes the raw dict at a path and re-parses it with the engine. An edit
+the engine refuses is reverted before it reaches the undo stack, so the last valid model stays in
+force. Results come from :func:`engine.results.check_wall`; nothing here computes engineering.
+
+Views render from the signals (named in the past tense) and write only through :meth:`push`.
+"""
+
+from __future__ import annotations
+
+import copy
+import json
+from collections.abc import Iterable
+from dataclasses import dataclass
+from pathlib import Path
+from typing import Any
+
+from PySide6.QtCore import QObject, Signal
+from PySide6.QtGui import QUndoStack
+
+from engine.errors import InputError
+from engine.model import Check, DesignCriteria, Project, SoilProperties, Wall
+from engine.project_file import FORMAT, VERSION, atomic_write_text, dumps_project, load_project, parse_project, save_project
+from engine.resources import resource_path
+from engine.results import WallResult, check_wall
+from engine.sizing import SizingResult
+
+PathKey = str | int
+RawPath = tuple[PathKey, ...]
+
+
+class _Missing:
+    """Marks a key that is absent from the raw dict (so undo removes it again)."""
+
+    _instance: _Missing | None = None
+
+    def __new__(cls) -> _Missing:
+        if cls._instance is None:
+            cls._instance = super().__new__(cls)
+        return cls._instance
+
+    def __repr__(self) -> str:
+        return "MISSING"
+
+
+MISSING: Any = _Missing()
+
+
+def path_text(path: Iterable[PathKey]) -> str:
+    """("walls", 1, "footing", "width") -> "walls[1].footing.width" (the engine's field paths)."""
+    out = ""
+    for key in path:
+        if isinstance(key, int):
+            out += f"[{key}]"
+        else:
+            out += f".{key}" if out else key
+    return out
+
+
+def get_at(raw: Any, path: RawPath, default: Any = MISSING) -> Any:
+    """The value at ``path`` in the raw document, or ``default`` when any step is missing."""
+    node = raw
+    for key in path:
+        if isinstance(key, int):
+            if not isinstance(node, list) or not -len(node) <= key < len(node):
+                return default
+            node = node[key]
+        else:
+            if not isinstance(node, dict) or key not in node:
+                return default
+            node = node[key]
+    return node
+
+
+# ---- templates ---------------------------------------------------------------------------------------
+
+# Starting values of a new wall and a new project. They are placeholders to be replaced by the
+# engineer's own values; soil values echo the engine's defaults (see the project-file format).
+_WALL_TEMPLATE = {
+    "US": {
+        "length": "10 ft", "thickness": "6 in",
+        "footing": {"width": "18 in", "thickness": "12 in", "extension_start": "0 ft", "extension_end": "0 ft",
+                    "cover": "12 in", "unit_weight": "150 pcf"},
+        "stem": {"height": "0 in", "thickness": "8 in"},
+        "loads": [{"type": "line", "case": "D", "value": "300 plf", "label": "dead"}],
+        "sizing": {"width_min": "12 in", "width_max": "8 ft", "width_step": "1 in",
+                   "thickness_min": "12 in", "thickness_max": "4 ft", "thickness_step": "1 in"},
+    },
+    "SI": {
+        "length": "3 m", "thickness": "150 mm",
+        "footing": {"width": "450 mm", "thickness": "300 mm", "extension_start": "0 m", "extension_end": "0 m",
+                    "cover": "300 mm", "unit_weight": "23.6 kN/m^3"},
+        "stem": {"height": "0 mm", "thickness": "200 mm"},
+        "loads": [{"type": "line", "case": "D", "value": "4.4 kN/m", "label": "dead"}],
+        "sizing": {"width_min": "300 mm", "width_max": "2400 mm", "width_step": "25 mm",
+                   "thickness_min": "300 mm", "thickness_max": "1200 mm", "thickness_step": "25 mm"},
+    },
+}
+
+
+def wall_template(wall_id: str, units: str) -> dict[str, Any]:
+    """A new wall's raw dict in the project's units."""
+    body = copy.deepcopy(_WALL_TEMPLATE["SI" if units == "SI" else "US"])
+    return {"id": wall_id, "label": "", **body}
+
+
+def new_project_raw(units: str = "US") -> dict[str, Any]:
+    """The raw document of File > New: one wall, the ASCE 7-16 ASD preset, default soil values."""
+    soil = (
+        {"allowable_bearing": "2000 psf", "bearing_basis": "gross", "friction": 0.35, "cohesion": "0 psf",
+         "passive": "0 pcf", "passive_ignore": "12 in", "unit_weight": "110 pcf"}
+        if units != "SI" else
+        {"allowable_bearing": "95 kPa", "bearing_basis": "gross", "friction": 0.35, "cohesion": "0 kPa",
+         "passive": "0 kPa/m", "passive_ignore": "300 mm", "unit_weight": "17.3 kN/m^3"}
+    )
+    return {
+        "format": FORMAT, "version": VERSION,
+        "project": {"name": "Untitled project", "number": "", "engineer": "", "client": "", "address": "", "notes": ""},
+        "units": units,
+        "criteria": {"method": "asce7-16-asd", "sds": 0.0, "bearing_increase": 1.0},
+        "soil": soil,
+        "walls": [wall_template("W1", units)],
+    }
+
+
+def unique_wall_id(raw: dict[str, Any], stem: str) -> str:
+    """``stem`` if no wall uses it, else ``stem-2``, ``stem-3``, ..."""
+    used = {w.get("id") for w in raw.get("walls", []) if isinstance(w, dict)}
+    if stem not in used:
+        return stem
+    n = 2
+    while f"{stem}-{n}" in used:
+        n += 1
+    return f"{stem}-{n}"
+
+
+def next_wall_id(raw: dict[str, Any]) -> str:
+    """W1, W2, ... : the first free one."""
+    used = {w.get("id") for w in raw.get("walls", []) if isinstance(w, dict)}
+    n = 1
+    while f"W{n}" in used:
+        n += 1
+    return f"W{n}"
+
+
+# ---- state -------------------------------------------------------------------------------------------
+
+
+@dataclass(frozen=True, slots=True)
+class SizingEntry:
+    """A sizing result together with the inputs it was computed from (to tell when it is stale)."""
+
+    wall: Wall
+    soil: SoilProperties
+    criteria: DesignCriteria
+    result: SizingResult
+
+    def fresh_for(self, project: Project, wall: Wall) -> bool:
+        return self.wall == wall and self.soil == project.soil and self.criteria == project.criteria
+
+
+CaseChoice = tuple[str, Check] | tuple[str, str, str]
+GOVERNING_BEARING: CaseChoice = ("governing", Check.BEARING)
+
+
+class ProjectDocument(QObject):
+    """All state of the open project. Signals are named for what has happened."""
+
+    project_changed = Signal()  # raw and model changed (an edit, undo, redo, open, new)
+    results_changed = Signal()  # check results recomputed
+    document_replaced = Signal()  # a different project was opened (views reset their edits)
+    current_wall_changed = Signal(int)
+    case_choice_changed = Signal()
+    edit_refused = Signal(str, str)  # field path text, message
+    path_changed = Signal()
+    dirty_changed = Signal(bool)
+    sizing_changed = Signal(str)  # wall id
+
+    def __init__(self, parent: QObject | None = None) -> None:
+        super().__init__(parent)
+        self.undo_stack = QUndoStack(self)
+        self.undo_stack.cleanChanged.connect(self._on_clean_changed)
+        self.raw: dict[str, Any] = new_project_raw()
+        self.project: Project = parse_project(self.raw)
+        self.results: dict[str, WallResult] = {}
+        self.path: Path | None = None
+        self.is_demo = False
+        self.current_index = 0
+        self.case_choice: CaseChoice = GOVERNING_BEARING
+        self.sizing: dict[str, SizingEntry] = {}
+        self.last_error: str | None = None
+        self._recovered = False
+        self._loaded_text: str | None = None
+        self._recompute(None)
+
+    # ---- replacing the whole document ----------------------------------------------------------
+
+    def replace(self, raw: dict[str, Any], path: Path | None, *, project: Project | None = None,
+                demo: bool = False, recovered: bool = False) -> None:
+        """Make ``raw`` the open project (clears undo history, sizing and selection)."""
+        project = project if project is not None else parse_project(raw)
+        self._loaded_text = None
+        self.undo_stack.clear()
+        self.raw = raw
+        self.path = Path(path) if path is not None else None
+        self.is_demo = demo
+        self.current_index = 0
+        self.case_choice = GOVERNING_BEARING
+        self.sizing = {}
+        self.last_error = None
+        self.project = project
+        self._recompute(None)
+        self._recovered = recovered
+        self.document_replaced.emit()
+        self.project_changed.emit()
+        self.results_changed.emit()
+        self.current_wall_changed.emit(self.current_index)
+        self.case_choice_changed.emit()
+        self.path_changed.emit()
+        self.dirty_changed.emit(self.dirty)
+
+    def new(self, units: str = "US") -> None:
+        self.replace(new_project_raw(units), None)
+
+    def open(self, path: str | Path) -> None:
+        """Open a project file. Raises InputError with a readable message when it cannot be used."""
+        doc = load_project(path)
+        self.replace(doc.raw, Path(path), project=doc.project)
+        try:
+            self._loaded_text = Path(path).read_text(encoding="utf-8")
+        except (OSError, UnicodeDecodeError):  # pragma: no cover - it was just read
+            self._loaded_text = None
+
+    def open_demo(self) -> None:
+        text = resource_path("demo.kernline").read_text(encoding="utf-8")
+        raw = json.loads(text)
+        self.replace(raw, None, demo=True)
+
+    def save(self, path: str | Path | None = None) -> Path:
+        """Write the raw document (atomically) to ``path`` or the current path; mark it clean."""
+        target = Path(path) if path is not None else self.path
+        if target is None:
+            raise InputError("", "the project has no file yet; choose where to save it")
+        if self._loaded_text is not None and _same_document(self._loaded_text, self.raw):
+            # unchanged since it was read: write the file's own text back, formatting and all
+            atomic_write_text(target, self._loaded_text)
+        else:
+            save_project(target, self.raw)
+            self._loaded_text = dumps_project(self.raw)
+        changed = target != self.path
+        self.path = target
+        self.is_demo = False
+        was_dirty = self.dirty
+        self._recovered = False
+        self.undo_stack.setClean()
+        if changed:
+            self.path_changed.emit()
+        if was_dirty:
+            self.dirty_changed.emit(self.dirty)
+        return target
+
+    # ---- state read by views -------------------------------------------------------------------
+
+    @property
+    def dirty(self) -> bool:
+        return self._recovered or not self.undo_stack.isClean()
+
+    @property
+    def units(self) -> str:
+        return self.project.units
+
+    @property
+    def display_name(self) -> str:
+        name = self.project.info.name.strip()
+        if self.path is not None:
+            return f"{name} ({self.path.name})" if name else self.path.name
+        return (name or "Untitled project") + (" (demo)" if self.is_demo else "")
+
+    @property
+    def current_wall(self) -> Wall:
+        return self.project.walls[self.current_index]
+
+    @property
+    def current_result(self) -> WallResult:
+        return self.results[self.current_wall.id]
+
+    def result_of(self, wall: Wall) -> WallResult:
+        return self.results[wall.id]
+
+    def wall_path(self, *rest: PathKey) -> RawPath:
+        return ("walls", self.current_index, *rest)
+
+    def chosen_case_index(self) -> int:
+        """Index into the current wall's cases of the case the drawings show."""
+        result = self.current_result
+        choice = self.case_choice
+        if choice[0] == "governing":
+            return result.governing[choice[1]].case_index  # type: ignore[index]
+        for i, case in enumerate(result.table.cases):
+            if case.combination.name == choice[1] and case.direction.value == choice[2]:
+                return i
+        return result.governing[Check.BEARING].case_index
+
+    def sizing_for(self, wall: Wall) -> tuple[SizingEntry | None, bool]:
+        """The wall's last sizing result and whether it still matches the inputs."""
+        entry = self.sizing.get(wall.id)
+        if entry is None:
+            return None, False
+        return entry, entry.fresh_for(self.project, wall)
+
+    # ---- changes that are not edits of the file ------------------------------------------------
+
+    def set_current_index(self, index: int) -> None:
+        index = max(0, min(index, len(self.project.walls) - 1))
+        if index != self.current_index:
+            self.current_index = index
+            self.current_wall_changed.emit(index)
+
+    def set_case_choice(self, choice: CaseChoice) -> None:
+        if choice != self.case_choice:
+            self.case_choice = choice
+            self.case_choice_changed.emit()
+
+    def set_sizing(self, entries: Iterable[SizingEntry]) -> None:
+        for entry in entries:
+            self.sizing[entry.wall.id] = entry
+            self.sizing_changed.emit(entry.wall.id)
+
+    # ---- edits ---------------------------------------------------------------------------------
+
+    def push(self, command: Any, *, quiet: bool = False) -> str | None:
+        """Apply an edit command if the engine accepts the result; return the refusal message if not.
+
+        The command's changes are applied to the raw dict and the whole project re-parsed; when the
+        engine raises InputError the changes are reverted, ``edit_refused`` is emitted and nothing
+        reaches the undo stack. ``quiet`` refusals (a live attempt while the user is still typing)
+        emit nothing.
+        """
+        command.apply_changes()
+        try:
+            project = parse_project(self.raw)
+        except InputError as err:
+            command.revert_changes()
+            message = readable(err)
+            if not quiet:
+                self.last_error = message
+                self.edit_refused.emit(path_text(command.focus_path), message)
+            return message
+        command.prepared = project
+        self.last_error = None
+        self.undo_stack.push(command)
+        return None
+
+    def _commit(self, project: Project, select: int | None) -> None:
+        """Called by commands: the raw dict now parses to ``project``."""
+        previous, self.project = self.project, project
+        self._recompute(previous)
+        if select is not None:
+            self.current_index = max(0, min(select, len(project.walls) - 1))
+        elif self.current_index >= len(project.walls):
+            self.current_index = len(project.walls) - 1
+        self.project_changed.emit()
+        self.results_changed.emit()
+        self.current_wall_changed.emit(self.current_index)
+
+    def _reparse(self) -> Project:
+        return parse_project(self.raw)
+
+    def _recompute(self, previous: Project | None) -> None:
+        """Check every wall whose inputs changed (the engine does all the engineering)."""
+        project = self.project
+        old_results = self.results
+        same_basis = previous is not None and previous.soil == project.soil and previous.criteria == project.criteria
+        old_walls = {w.id: w for w in previous.walls} if previous is not None else {}
+        results: dict[str, WallResult] = {}
+        for wall in project.walls:
+            old = old_walls.get(wall.id)
+            if same_basis and old is not None and old == wall and wall.id in old_results:
+                results[wall.id] = old_results[wall.id]
+            else:
+                results[wall.id] = check_wall(project, wall)
+        self.results = results
+
+    def _on_clean_changed(self, clean: bool) -> None:
+        self.dirty_changed.emit(self.dirty)
+
+
+def _same_document(text: str, raw: dict[str, Any]) -> bool:
+    try:
+        return json.loads(text) == raw
+    except ValueError:
+        return False
+
+
+_FRIENDLY = {
+    "footing.width": "footing width", "footing.thickness": "footing thickness", "length": "wall length",
+    "thickness": "wall thickness", "walls": "walls",
+}
+
+
+def readable(err: InputError) -> str:
+    """The engine's message, with the field path shortened to what a user recognises."""
+    field = err.field
+    if field.startswith("walls["):
+        close = field.find("]")
+        field = field[close + 2:] if close >= 0 else field
+    field = field.replace("criteria.", "").replace("soil.", "soil ")
+    name = _FRIENDLY.get(field, field.replace("_", " "))
+    return f"{name}: {err.problem}" if name else err.problem
+
+
+__all__ = [
+    "GOVERNING_BEARING", "MISSING", "ProjectDocument", "SizingEntry", "get_at", "new_project_raw",
+    "next_wall_id", "path_text", "readable", "unique_wall_id", "wall_template",
+]

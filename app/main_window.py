@@ -1,0 +1,647 @@
+"""Kernline's main window: walls, inputs, drawings and verdict on one screen.
+
+Layout (ours): the walls list on the left; the selected wall's inputs and the project-wide soil and
+criteria in the middle; on the right the elevation above the soil pressure (one x scale), the verdict,
+and tabs for every case, the design map and the schedule. A caution line stays at the bottom.
+
+:func:`launch` is what ``kernline``, ``kernline open FILE`` and ``kernline demo`` call.
+"""
+
+from __future__ import annotations
+
+import json
+import sys
+import time
+from pathlib import Path
+from typing import Any
+
+from PySide6.QtCore import QSettings, QStandardPaths, Qt, QTimer
+from PySide6.QtGui import QAction, QActionGroup, QCloseEvent, QKeySequence
+from PySide6.QtWidgets import (
+    QApplication,
+    QFileDialog,
+    QLabel,
+    QMainWindow,
+    QMessageBox,
+    QScrollArea,
+    QSplitter,
+    QTabWidget,
+    QVBoxLayout,
+    QWidget,
+)
+
+from engine import CAUTION, __version__
+from engine.errors import InputError
+from engine.project_file import EXTENSION, atomic_write_text, dumps_project
+from engine.schedule import write_schedule
+from engine.units import format_length
+
+from . import commands
+from .document import ProjectDocument
+from .runner import SizingBatch, SizingRunner
+from .style import STYLE_SHEET, configure_pyqtgraph
+from .views.cases import CasesTable
+from .views.design_map import DesignMapView
+from .views.drawings import DrawingsPanel
+from .views.forms import ProjectForm, WallForm
+from .views.schedule import ScheduleView
+from .views.verdict import VerdictView
+from .views.walls import WallsView
+
+AUTOSAVE_MS = 60_000
+RECENT_LIMIT = 8
+RECOVERY_NAME = "autosave.kernline-recovery"
+RECOVERY_FORMAT = "kernline-recovery"
+FILE_FILTER = f"Kernline project (*{EXTENSION});;All files (*)"
+
+
+def default_recovery_dir() -> Path:
+    base = QStandardPaths.writableLocation(QStandardPaths.StandardLocation.GenericDataLocation) or str(Path.home())
+    return Path(base) / "Kernline" / "recovery"
+
+
+class MainWindow(QMainWindow):
+    """The one window. ``settings`` and ``recovery_dir`` can be given so tests never touch real ones."""
+
+    def __init__(self, settings: QSettings | None = None, recovery_dir: Path | None = None, autosave_ms: int = AUTOSAVE_MS) -> None:
+        configure_pyqtgraph()
+        super().__init__()
+        self.settings = settings if settings is not None else QSettings("Kernline", "Kernline")
+        self.recovery_dir = Path(recovery_dir) if recovery_dir is not None else default_recovery_dir()
+        self.document = ProjectDocument(self)
+        self.runner = SizingRunner(self)
+        self.setObjectName("mainWindow")
+        self.setStyleSheet(STYLE_SHEET)
+        self.resize(1480, 940)
+        self._build_views()
+        self._build_actions()
+        self._connect()
+        self.autosave_timer = QTimer(self)
+        self.autosave_timer.setInterval(autosave_ms)
+        self.autosave_timer.timeout.connect(self.autosave_now)
+        self.autosave_timer.start()
+        self._rendered_index = -1
+        self._on_document_replaced()
+        self._update_title()
+
+    # ---- construction --------------------------------------------------------------------------
+
+    def _build_views(self) -> None:
+        doc = self.document
+        self.walls_view = WallsView(doc)
+        self.wall_form = WallForm(doc)
+        self.project_form = ProjectForm(doc)
+        forms = QWidget()
+        forms_layout = QVBoxLayout(forms)
+        forms_layout.setContentsMargins(6, 6, 10, 6)
+        forms_layout.addWidget(self.wall_form)
+        forms_layout.addWidget(self.project_form)
+        forms_layout.addStretch(1)
+        self.forms_scroll = QScrollArea()
+        self.forms_scroll.setWidget(forms)
+        self.forms_scroll.setWidgetResizable(True)
+        self.forms_scroll.setMinimumWidth(400)
+        self.forms_scroll.setHorizontalScrollBarPolicy(Qt.ScrollBarPolicy.ScrollBarAlwaysOff)
+
+        self.drawings = DrawingsPanel(doc)
+        self.verdict = VerdictView()
+        self.cases_table = CasesTable()
+        self.design_map = DesignMapView(doc)
+        self.schedule = ScheduleView(doc)
+        self.tabs = QTabWidget()
+        self.tabs.setObjectName("resultTabs")
+        self.tabs.addTab(self.cases_table, "All cases")
+        self.tabs.addTab(self.design_map, "Design map")
+        self.tabs.addTab(self.schedule, "Schedule")
+        lower = QWidget()
+        lower_layout = QVBoxLayout(lower)
+        lower_layout.setContentsMargins(0, 0, 0, 0)
+        lower_layout.setSpacing(2)
+        lower_layout.addWidget(self.verdict)
+        lower_layout.addWidget(self.tabs, 1)
+        right = QSplitter(Qt.Orientation.Vertical)
+        right.addWidget(self.drawings)
+        right.addWidget(lower)
+        right.setStretchFactor(0, 5)
+        right.setStretchFactor(1, 4)
+        right.setChildrenCollapsible(False)
+        self.right_splitter = right
+
+        self.walls_view.setMinimumWidth(250)
+        main = QSplitter(Qt.Orientation.Horizontal)
+        main.addWidget(self.walls_view)
+        main.addWidget(self.forms_scroll)
+        main.addWidget(right)
+        main.setStretchFactor(0, 0)
+        main.setStretchFactor(1, 0)
+        main.setStretchFactor(2, 1)
+        main.setSizes([250, 450, 780])
+        self.main_splitter = main
+
+        self.caution = QLabel(CAUTION)
+        self.caution.setObjectName("caution")
+        self.caution.setWordWrap(True)
+        centre = QWidget()
+        centre.setObjectName("centre")
+        layout = QVBoxLayout(centre)
+        layout.setContentsMargins(0, 0, 0, 0)
+        layout.setSpacing(0)
+        layout.addWidget(main, 1)
+        layout.addWidget(self.caution)
+        self.setCentralWidget(centre)
+        self.statusBar().setSizeGripEnabled(True)
+
+    def _action(self, text: str, slot: Any, shortcut: QKeySequence | str | None = None, tip: str = "") -> QAction:
+        action = QAction(text, self)
+        if shortcut is not None:
+            action.setShortcut(QKeySequence(shortcut))
+        if tip:
+            action.setStatusTip(tip)
+            action.setToolTip(tip)
+        action.triggered.connect(slot)
+        return action
+
+    def _build_actions(self) -> None:
+        Std = QKeySequence.StandardKey
+        self.new_action = self._action("&New", self.new_project, Std.New, "Start a new project")
+        self.open_action = self._action("&Open…", self.open_dialog, Std.Open, "Open a Kernline project file")
+        self.demo_action = self._action("Open the &demo project", self.open_demo, None, "Open the built-in demo project")
+        self.save_action = self._action("&Save", self.save, Std.Save, "Save the project")
+        self.save_as_action = self._action("Save &As…", self.save_as, Std.SaveAs, "Save the project under a new name")
+        self.export_action = self._action("Export &schedule (CSV)…", self.export_schedule, None, "Write the footing schedule as CSV")
+        self.quit_action = self._action("&Quit", self.close, Std.Quit, "Close Kernline")
+        self.undo_action = self.document.undo_stack.createUndoAction(self, "&Undo")
+        self.undo_action.setShortcut(QKeySequence(Std.Undo))
+        self.redo_action = self.document.undo_stack.createRedoAction(self, "&Redo")
+        self.redo_action.setShortcuts([QKeySequence(Std.Redo), QKeySequence("Ctrl+Y")])
+        self.size_action = self._action("Size this &footing", self.size_current, "Ctrl+M", "Find the smallest passing footing of the selected wall")
+        self.size_all_action = self._action("Size &all walls", self.size_all, "Ctrl+Shift+M", "Find the smallest passing footing of every wall")
+        self.add_wall_action = self._action("&Add wall", self.walls_view.add, "Ctrl+Shift+N", "Add a wall")
+        self.duplicate_action = self._action("&Duplicate wall", self.walls_view.duplicate, "Ctrl+D", "Duplicate the selected wall")
+        self.rename_action = self._action("&Rename wall", self.walls_view.start_rename, "F2", "Rename the selected wall")
+        self.delete_wall_action = self._action("D&elete wall", self.walls_view.delete, None, "Delete the selected wall")
+        self.about_action = self._action("&About Kernline", self.about, Std.HelpContents, "What Kernline is, and the caution that goes with it")
+
+        self.units_group = QActionGroup(self)
+        self.units_group.setExclusive(True)
+        self.us_action = QAction("US", self, checkable=True)
+        self.us_action.setToolTip("Show feet, inches, kips, psf")
+        self.si_action = QAction("SI", self, checkable=True)
+        self.si_action.setToolTip("Show metres, millimetres, kN, kPa")
+        for a in (self.us_action, self.si_action):
+            self.units_group.addAction(a)
+        self.us_action.triggered.connect(lambda: self.set_units("US"))
+        self.si_action.triggered.connect(lambda: self.set_units("SI"))
+
+        bar = self.menuBar()
+        file_menu = bar.addMenu("&File")
+        for a in (self.new_action, self.open_action, self.demo_action):
+            file_menu.addAction(a)
+        self.recent_menu = file_menu.addMenu("Open &Recent")
+        file_menu.addSeparator()
+        for a in (self.save_action, self.save_as_action, self.export_action):
+            file_menu.addAction(a)
+        file_menu.addSeparator()
+        file_menu.addAction(self.quit_action)
+        edit_menu = bar.addMenu("&Edit")
+        edit_menu.addAction(self.undo_action)
+        edit_menu.addAction(self.redo_action)
+        wall_menu = bar.addMenu("&Wall")
+        for a in (self.add_wall_action, self.duplicate_action, self.rename_action, self.delete_wall_action):
+            wall_menu.addAction(a)
+        wall_menu.addSeparator()
+        wall_menu.addAction(self.size_action)
+        wall_menu.addAction(self.size_all_action)
+        view_menu = bar.addMenu("&Units")
+        view_menu.addAction(self.us_action)
+        view_menu.addAction(self.si_action)
+        help_menu = bar.addMenu("&Help")
+        help_menu.addAction(self.about_action)
+
+        tools = self.addToolBar("Main")
+        tools.setObjectName("mainToolbar")
+        tools.setMovable(False)
+        tools.setToolButtonStyle(Qt.ToolButtonStyle.ToolButtonTextOnly)
+        for a in (self.new_action, self.open_action, self.save_action):
+            tools.addAction(a)
+        tools.addSeparator()
+        # the toolbar's buttons keep short fixed words (the menu items name the edit they undo)
+        stack = self.document.undo_stack
+        self.undo_button = QAction("Undo", self)
+        self.undo_button.setToolTip("Undo the last edit (Ctrl+Z)")
+        self.undo_button.triggered.connect(stack.undo)
+        self.undo_button.setEnabled(stack.canUndo())
+        stack.canUndoChanged.connect(self.undo_button.setEnabled)
+        self.redo_button = QAction("Redo", self)
+        self.redo_button.setToolTip("Redo the edit undone last (Ctrl+Shift+Z)")
+        self.redo_button.triggered.connect(stack.redo)
+        self.redo_button.setEnabled(stack.canRedo())
+        stack.canRedoChanged.connect(self.redo_button.setEnabled)
+        tools.addAction(self.undo_button)
+        tools.addAction(self.redo_button)
+        tools.addSeparator()
+        tools.addAction(self.size_action)
+        tools.addAction(self.size_all_action)
+        tools.addSeparator()
+        tools.addWidget(QLabel(" Units "))
+        tools.addAction(self.us_action)
+        tools.addAction(self.si_action)
+        self._rebuild_recent_menu()
+
+    def _connect(self) -> None:
+        doc = self.document
+        doc.project_changed.connect(self._on_project_changed)
+        doc.results_changed.connect(self._on_results_changed)
+        doc.current_wall_changed.connect(self._on_current_wall_changed)
+        doc.case_choice_changed.connect(self._on_case_choice_changed)
+        doc.document_replaced.connect(self._on_document_replaced)
+        doc.dirty_changed.connect(self._on_dirty_changed)
+        doc.path_changed.connect(self._update_title)
+        doc.edit_refused.connect(self._on_edit_refused)
+        doc.sizing_changed.connect(self._on_sizing_changed)
+        self.runner.finished.connect(self._on_sizing_finished)
+        self.cases_table.case_activated.connect(self._on_case_activated)
+        self.tabs.currentChanged.connect(self._on_tab_changed)
+        self.design_map.size_requested.connect(self.size_current)
+        self.design_map.size_all_requested.connect(self.size_all)
+        self.schedule.export_requested.connect(self.export_schedule)
+
+    def _set_tab_order(self) -> None:
+        chain: list[QWidget] = [self.walls_view.tree, *self.wall_form.focus_order(), *self.project_form.focus_order(),
+                                self.drawings.picker, self.tabs]
+        for a, b in zip(chain, chain[1:], strict=False):
+            QWidget.setTabOrder(a, b)
+
+    # ---- rendering from document signals -------------------------------------------------------
+
+    def _on_document_replaced(self) -> None:
+        self._rendered_index = -1
+        self.wall_form.refresh(force=True)
+        self.project_form.refresh(force=True)
+        self._set_tab_order()
+        self._render_results()
+        self._update_units_actions()
+        self._update_title()
+
+    def _on_project_changed(self) -> None:
+        self.wall_form.refresh()
+        self.project_form.refresh()
+        self._update_units_actions()
+        self._update_title()
+
+    def _on_results_changed(self) -> None:
+        self._render_results()
+
+    def _on_current_wall_changed(self, index: int) -> None:
+        if index == self._rendered_index:
+            return
+        self.wall_form.refresh(force=True)
+        self._render_results()
+
+    def _on_case_choice_changed(self) -> None:
+        self.drawings.render()
+
+    def _render_results(self) -> None:
+        """Redraw everything that shows results of the current wall."""
+        doc = self.document
+        self._rendered_index = doc.current_index
+        self.walls_view.refresh()
+        self.drawings.render()
+        self.verdict.render(doc.current_wall, doc.current_result)
+        current = self.tabs.currentWidget()
+        if current is self.cases_table:
+            self.cases_table.set_result(doc.current_result, doc.units)
+        elif current is self.schedule:
+            self.schedule.refresh()
+        elif current is self.design_map:
+            self._render_map(auto_size=True)
+
+    def _render_map(self, auto_size: bool) -> None:
+        doc = self.document
+        wall = doc.current_wall
+        entry, fresh = doc.sizing_for(wall)
+        if auto_size and not fresh:
+            self._request_wall_sizing()
+        self.design_map.busy = self.runner.busy(f"wall:{wall.id}") or self.runner.busy("all")
+        self.design_map.render()
+
+    def _on_tab_changed(self, _index: int) -> None:
+        doc = self.document
+        current = self.tabs.currentWidget()
+        if current is self.cases_table:
+            self.cases_table.set_result(doc.current_result, doc.units)
+        elif current is self.schedule:
+            self.schedule.refresh()
+        elif current is self.design_map:
+            self._give_map_room()
+            self._render_map(auto_size=True)
+        if current is not self.design_map and self._sizes_before_map is not None:
+            self.right_splitter.setSizes(self._sizes_before_map)
+            self._sizes_before_map = None
+
+    _sizes_before_map: list[int] | None = None
+
+    def _give_map_room(self) -> None:
+        """The design map needs height: move the splitter so the tabs get nearly half the column
+        (put back when another tab is chosen)."""
+        sizes = self.right_splitter.sizes()
+        total = sum(sizes)
+        if total and sizes[1] < 0.46 * total:
+            self._sizes_before_map = sizes
+            self.right_splitter.setSizes([int(0.54 * total), total - int(0.54 * total)])
+
+    def _on_case_activated(self, index: int) -> None:
+        case = self.document.current_result.table.cases[index]
+        self.document.set_case_choice(("case", case.combination.name, case.direction.value))
+
+    def _on_dirty_changed(self, _dirty: bool) -> None:
+        self._update_title()
+
+    def _on_edit_refused(self, field: str, message: str) -> None:
+        self.statusBar().showMessage(f"Not applied — {message}", 8000)
+
+    def _update_title(self) -> None:
+        self.setWindowTitle(f"{self.document.display_name}[*] — Kernline")
+        self.setWindowModified(self.document.dirty)
+
+    def _update_units_actions(self) -> None:
+        si = self.document.units == "SI"
+        self.si_action.setChecked(si)
+        self.us_action.setChecked(not si)
+
+    # ---- edits from the window -----------------------------------------------------------------
+
+    def set_units(self, units: str) -> None:
+        doc = self.document
+        if units != doc.units:
+            doc.push(commands.set_units(doc, units))
+        self._update_units_actions()
+
+    # ---- sizing --------------------------------------------------------------------------------
+
+    def _request_wall_sizing(self) -> int:
+        doc = self.document
+        wall = doc.current_wall
+        self.design_map.busy = True
+        return self.runner.request(f"wall:{wall.id}", doc.project, [wall])
+
+    def size_current(self) -> int:
+        """Size the selected wall and show the design map."""
+        self.tabs.setCurrentWidget(self.design_map)
+        seq = self._request_wall_sizing()
+        self.design_map.busy = self.runner.busy(f"wall:{self.document.current_wall.id}")
+        self.design_map.render()
+        return seq
+
+    def size_all(self) -> int:
+        """Size every wall (on a worker when it is more than a frame's work)."""
+        doc = self.document
+        self.statusBar().showMessage(f"Sizing {len(doc.project.walls)} walls…")
+        self.tabs.setCurrentWidget(self.design_map)
+        return self.runner.request("all", doc.project, doc.project.walls)
+
+    def _on_sizing_finished(self, batch: SizingBatch) -> None:
+        doc = self.document
+        project_walls = {w.id: w for w in doc.project.walls}
+        # results for walls whose inputs changed meanwhile are kept but shown as stale
+        entries = [e for e in batch.entries if e.wall.id in project_walls]
+        self.design_map.busy = False
+        doc.set_sizing(entries)
+        if batch.key == "all":
+            units = doc.units
+            parts = []
+            for e in entries:
+                s = e.result
+                parts.append(f"{e.wall.id} {format_length(s.width, units)} × {format_length(s.thickness, units)}" if s.feasible else f"{e.wall.id} no size passes")
+            parts += [f"{wid}: {msg}" for wid, msg in batch.errors.items()]
+            self.statusBar().showMessage(f"Sized {len(entries)} walls in {batch.seconds * 1000:.0f} ms: " + "; ".join(parts), 15000)
+        elif batch.errors:
+            self.statusBar().showMessage("; ".join(batch.errors.values()), 15000)
+        if self.tabs.currentWidget() is self.design_map:
+            self.design_map.render()
+
+    def _on_sizing_changed(self, wall_id: str) -> None:
+        if wall_id == self.document.current_wall.id and self.tabs.currentWidget() is self.design_map:
+            self.design_map.render()
+
+    # ---- files ---------------------------------------------------------------------------------
+
+    def start(self, path: str | None = None, demo: bool = False) -> None:
+        """What the window opens with: a recovered project, the file, the demo, or a new project."""
+        if self.offer_recovery():
+            return
+        if path:
+            if self.open_path(path, confirm=False):
+                return
+        if demo:
+            self.open_demo(confirm=False)
+
+    def confirm_discard(self) -> bool:
+        """Ask before unsaved changes would be lost: True when it is fine to go on."""
+        if not self.document.dirty:
+            return True
+        answer = QMessageBox.question(
+            self, "Unsaved changes", f"Save the changes to {self.document.display_name} first?",
+            QMessageBox.StandardButton.Save | QMessageBox.StandardButton.Discard | QMessageBox.StandardButton.Cancel,
+            QMessageBox.StandardButton.Save,
+        )
+        if answer == QMessageBox.StandardButton.Save:
+            return self.save()
+        return answer == QMessageBox.StandardButton.Discard
+
+    def new_project(self) -> None:
+        if self.confirm_discard():
+            self.document.new(self.document.units)
+            self.remove_recovery()
+
+    def open_demo(self, confirm: bool = True) -> None:
+        if confirm and not self.confirm_discard():
+            return
+        self.document.open_demo()
+        self.remove_recovery()
+
+    def open_dialog(self) -> None:
+        if not self.confirm_discard():
+            return
+        start = str(self.document.path.parent) if self.document.path else ""
+        path, _ = QFileDialog.getOpenFileName(self, "Open a Kernline project", start, FILE_FILTER)
+        if path:
+            self.open_path(path, confirm=False)
+
+    def open_path(self, path: str | Path, confirm: bool = True) -> bool:
+        """Open a project file; a file that cannot be used is reported and the current project kept."""
+        if confirm and not self.confirm_discard():
+            return False
+        try:
+            self.document.open(path)
+        except InputError as err:
+            QMessageBox.warning(self, "Cannot open the project", f"{path}\n\n{err.message}")
+            return False
+        self.remove_recovery()
+        self._add_recent(Path(path))
+        self.statusBar().showMessage(f"Opened {path}", 5000)
+        return True
+
+    def save(self) -> bool:
+        if self.document.path is None:
+            return self.save_as()
+        return self._save_to(self.document.path)
+
+    def save_as(self) -> bool:
+        doc = self.document
+        suggestion = str(doc.path) if doc.path else (doc.project.info.name.strip() or "project") + EXTENSION
+        path, _ = QFileDialog.getSaveFileName(self, "Save the project as", suggestion, FILE_FILTER)
+        if not path:
+            return False
+        if not Path(path).suffix:
+            path += EXTENSION
+        return self._save_to(Path(path))
+
+    def _save_to(self, path: Path) -> bool:
+        try:
+            self.document.save(path)
+        except (OSError, InputError) as err:
+            QMessageBox.warning(self, "Cannot save the project", f"{path}\n\n{err}")
+            return False
+        self.remove_recovery()
+        self._add_recent(path)
+        self.statusBar().showMessage(f"Saved {path}", 5000)
+        return True
+
+    def export_schedule(self) -> bool:
+        doc = self.document
+        suggestion = str(doc.path.with_suffix("") if doc.path else Path("schedule")) + "-schedule.csv"
+        path, _ = QFileDialog.getSaveFileName(self, "Export the footing schedule", suggestion, "CSV (*.csv)")
+        if not path:
+            return False
+        try:
+            write_schedule(doc.project, path, [doc.results[w.id] for w in doc.project.walls])
+        except OSError as err:
+            QMessageBox.warning(self, "Cannot write the schedule", f"{path}\n\n{err}")
+            return False
+        self.statusBar().showMessage(f"Wrote the schedule to {path}", 5000)
+        return True
+
+    # ---- recent files --------------------------------------------------------------------------
+
+    def recent_files(self) -> list[str]:
+        value = self.settings.value("recent_files", [])
+        if isinstance(value, str):
+            value = [value]
+        return [str(v) for v in (value or [])]
+
+    def _add_recent(self, path: Path) -> None:
+        text = str(Path(path).resolve())
+        files = [text] + [f for f in self.recent_files() if f != text]
+        self.settings.setValue("recent_files", files[:RECENT_LIMIT])
+        self.settings.sync()
+        self._rebuild_recent_menu()
+
+    def _rebuild_recent_menu(self) -> None:
+        self.recent_menu.clear()
+        files = self.recent_files()
+        for i, f in enumerate(files):
+            action = self.recent_menu.addAction(f"&{i + 1} {Path(f).name}")
+            action.setToolTip(f)
+            action.triggered.connect(lambda _c=False, p=f: self._open_recent(p))
+        self.recent_menu.setEnabled(bool(files))
+
+    def _open_recent(self, path: str) -> None:
+        if not Path(path).is_file():
+            QMessageBox.warning(self, "File not found", f"{path}\n\nno longer exists; it is removed from the list.")
+            self.settings.setValue("recent_files", [f for f in self.recent_files() if f != path])
+            self._rebuild_recent_menu()
+            return
+        self.open_path(path)
+
+    # ---- autosave and recovery -----------------------------------------------------------------
+
+    @property
+    def recovery_path(self) -> Path:
+        return self.recovery_dir / RECOVERY_NAME
+
+    def autosave_now(self) -> bool:
+        """Write the unsaved project to the recovery file (nothing when there is nothing unsaved)."""
+        doc = self.document
+        if not doc.dirty:
+            return False
+        record = {"format": RECOVERY_FORMAT, "version": 1, "saved": time.strftime("%Y-%m-%d %H:%M:%S"),
+                  "path": str(doc.path) if doc.path else None, "demo": doc.is_demo, "project": doc.raw}
+        try:
+            self.recovery_dir.mkdir(parents=True, exist_ok=True)
+            atomic_write_text(self.recovery_path, dumps_project(record))
+        except OSError as err:
+            self.statusBar().showMessage(f"Autosave failed: {err}", 8000)
+            return False
+        return True
+
+    def remove_recovery(self) -> None:
+        try:
+            self.recovery_path.unlink()
+        except FileNotFoundError:
+            pass
+        except OSError:
+            pass
+
+    def offer_recovery(self) -> bool:
+        """If the last session ended without closing, offer its autosaved project. True if restored."""
+        path = self.recovery_path
+        if not path.is_file():
+            return False
+        try:
+            record = json.loads(path.read_text(encoding="utf-8"))
+            if record.get("format") != RECOVERY_FORMAT or not isinstance(record.get("project"), dict):
+                raise ValueError("not a recovery file")
+        except (OSError, ValueError):
+            self.remove_recovery()
+            return False
+        name = record.get("path") or "an unsaved project"
+        answer = QMessageBox.question(
+            self, "Restore unsaved work?",
+            f"Kernline did not close normally. Restore the changes to {name} autosaved at {record.get('saved', '?')}?",
+            QMessageBox.StandardButton.Yes | QMessageBox.StandardButton.No, QMessageBox.StandardButton.Yes,
+        )
+        if answer != QMessageBox.StandardButton.Yes:
+            self.remove_recovery()
+            return False
+        try:
+            original = Path(record["path"]) if record.get("path") else None
+            self.document.replace(record["project"], original, demo=bool(record.get("demo")), recovered=True)
+        except InputError as err:
+            QMessageBox.warning(self, "Cannot restore", f"The autosaved project cannot be used:\n\n{err.message}")
+            self.remove_recovery()
+            return False
+        self.statusBar().showMessage("Restored the autosaved project; save it to keep it.", 10000)
+        return True
+
+    # ---- about, closing ------------------------------------------------------------------------
+
+    def about(self) -> None:
+        QMessageBox.about(
+            self, "About Kernline",
+            f"<h3>Kernline {__version__}</h3>"
+            "<p>Global stability of concrete strip footings under shear walls: overturning, sliding and soil "
+            "bearing (with soil pressure beyond the kern) under ASCE 7-16 ASD load combinations in both lateral "
+            "directions, and automatic sizing on a grid of widths and thicknesses.</p>"
+            f"<p><b>Caution.</b> {CAUTION}</p>",
+        )
+
+    def closeEvent(self, event: QCloseEvent) -> None:  # noqa: N802 - Qt's name
+        if not self.confirm_discard():
+            event.ignore()
+            return
+        self.autosave_timer.stop()
+        self.runner.wait()
+        self.remove_recovery()
+        event.accept()
+
+
+def launch(path: str | None = None, demo: bool = False) -> int:
+    """Create the application, show the window (with ``path`` or the demo) and run until it closes."""
+    app = QApplication.instance() or QApplication(sys.argv[:1])
+    app.setOrganizationName("Kernline")
+    app.setApplicationName("Kernline")
+    window = MainWindow()
+    window.start(path, demo)
+    window.show()
+    return int(app.exec())

@@ -1,0 +1,73 @@
+"""Kernline's palette and the few style rules of the window (our own: quiet, one accent, one warm tone).
+
+Pass and fail are never told by colour alone: every verdict also carries a word ("OK" / "NG") and a
+symbol (✓ / ✗), and the design map's check boundaries differ by dash pattern as well as tone.
+"""
+
+from __future__ import annotations
+
+# Text and lines: a graphite grey, not black.
+GRAPHITE = "#2f3439"
+MUTED = "#6b737b"
+HAIRLINE = "#c9ced3"
+PAPER = "#fbfaf7"
+PANEL = "#f1f0ec"
+
+# The one accent (selection, the chosen size, passing region): a deep slate teal.
+ACCENT = "#1f6f78"
+ACCENT_LIGHT = "#cfe3e4"
+ACCENT_FAINT = "#e7f0f0"
+
+# A warm tone for "NG" and invalid input: burnt sienna.
+WARM = "#b4532a"
+WARM_LIGHT = "#f5dccf"
+
+# Drawing materials (elevation): concrete, soil, wall.
+CONCRETE = "#b9b7b0"
+CONCRETE_EDGE = "#55585c"
+SOIL = "#e4d9c6"
+WALL = "#e9e6df"
+LOAD = "#3d4a57"
+
+OK_MARK = "✓"
+NG_MARK = "✗"
+NO_DEMAND_MARK = "–"
+
+# Dash patterns of the three check boundaries on the design map (overturning, sliding, bearing).
+CHECK_DASHES = ((1, 0), (6, 3), (1.5, 2.5))
+CHECK_TONES = ("#2f3439", "#7a4b8c", "#b4532a")
+
+STYLE_SHEET = f"""
+QMainWindow, QWidget#centre {{ background: {PAPER}; }}
+QWidget {{ color: {GRAPHITE}; }}
+QLabel#caution {{ color: {GRAPHITE}; background: {PANEL}; border-top: 1px solid {HAIRLINE}; padding: 4px 8px; }}
+QLabel#sectionTitle {{ font-weight: 600; color: {GRAPHITE}; }}
+QLabel#fieldError {{ color: {WARM}; }}
+QLabel#hint {{ color: {MUTED}; }}
+QLabel#verdictHead {{ font-weight: 600; }}
+QLineEdit[invalid="true"] {{ border: 2px solid {WARM}; background: {WARM_LIGHT}; }}
+QLineEdit {{ border: 1px solid {HAIRLINE}; border-radius: 3px; padding: 2px 4px; background: white; }}
+QLineEdit:focus {{ border: 1px solid {ACCENT}; }}
+QToolButton#sectionToggle {{ border: none; font-weight: 600; text-align: left; padding: 3px 0px; }}
+QTreeWidget::item:selected, QTableView::item:selected, QListWidget::item:selected {{
+    background: {ACCENT_LIGHT}; color: {GRAPHITE};
+}}
+QTabWidget::pane {{ border: 1px solid {HAIRLINE}; }}
+QToolBar {{ border: none; spacing: 4px; background: {PANEL}; }}
+QToolBar QToolButton:checked {{ background: {ACCENT}; color: white; border-radius: 3px; }}
+QPushButton {{ padding: 3px 10px; }}
+"""
+
+
+def mark(passes: bool | None) -> str:
+    """The symbol and word of a verdict, readable without colour."""
+    if passes is None:
+        return f"{NO_DEMAND_MARK} no demand"
+    return f"{OK_MARK} OK" if passes else f"{NG_MARK} NG"
+
+
+def configure_pyqtgraph() -> None:
+    """pyqtgraph's global options, set before any plot is created (idempotent)."""
+    import pyqtgraph as pg
+
+    pg.setConfigOptions(antialias=True, background=PAPER, foreground=GRAPHITE, imageAxisOrder="row-major")

@@ -1,0 +1,132 @@
+"""Every combination and direction of the selected wall in a sortable table (engine numbers, formatted)."""
+
+from __future__ import annotations
+
+import math
+from typing import Any
+
+from PySide6.QtCore import QModelIndex, QSortFilterProxyModel, Qt, Signal
+from PySide6.QtGui import QBrush, QColor, QStandardItem, QStandardItemModel
+from PySide6.QtWidgets import QAbstractItemView, QHeaderView, QTableView, QWidget
+
+from engine.model import ALL_CHECKS
+from engine.results import WallResult
+from engine.units import Kind
+
+from ..style import NG_MARK, OK_MARK, WARM
+from .fields import FORCE, LONG, PRESSURE, trim, unit_factor
+
+SORT_ROLE = Qt.ItemDataRole.UserRole + 1
+CASE_ROLE = Qt.ItemDataRole.UserRole + 2
+
+
+class CasesModel(QStandardItemModel):
+    """Rows: the wall's cases; columns: loads on the soil and the ratio of each check.
+
+    A QStandardItemModel keeps the cell data on the C++ side, so painting the table does not call
+    back into Python for every cell and role; an update touches only the cells whose text changed.
+    """
+
+    def set_result(self, result: WallResult, units: str) -> bool:
+        """Show ``result``; True when the table's shape changed."""
+        us = units != "SI"
+        f_force = unit_factor(FORCE[0] if us else FORCE[1], Kind.FORCE)
+        f_len = unit_factor(LONG[0] if us else LONG[1], Kind.LENGTH)
+        q_unit = PRESSURE[0] if us else PRESSURE[1]
+        f_q = unit_factor(q_unit, Kind.PRESSURE)
+        headers = [
+            "Combination", "Dir.", f"N ({FORCE[0] if us else FORCE[1]})", f"V ({FORCE[0] if us else FORCE[1]})",
+            f"e ({LONG[0] if us else LONG[1]})", f"q max ({q_unit})", "Overturning", "Sliding", "Bearing", "Result",
+        ]
+        ev = result.evaluation
+        rows = []
+        for i, case in enumerate(result.cases):
+            e = float(ev.eccentricity[i])
+            bearing = case.bearing
+            q_max = bearing.q_max if bearing is not None else math.nan
+            texts = [case.combination, case.direction, trim(case.vertical / f_force, 2), trim(case.lateral / f_force, 2),
+                     trim(e / f_len, 3) if math.isfinite(e) else "∞",
+                     (trim(q_max / f_q, 0 if us else 1) if math.isfinite(q_max) else ("∞" if bearing is not None else "—"))]
+            keys: list[Any] = [case.combination, case.direction, case.vertical, case.lateral, e if math.isfinite(e) else math.inf,
+                               q_max if not math.isnan(q_max) else -1.0]
+            ok = True
+            for check in ALL_CHECKS:
+                r = case.of(check)
+                if r is None:
+                    texts.append("—")
+                    keys.append(math.inf)
+                    continue
+                ok = ok and r.passes
+                mark = OK_MARK if r.passes else NG_MARK
+                texts.append("no demand" if math.isinf(r.ratio) else f"{r.ratio:.2f} {mark}")
+                keys.append(r.ratio / r.required)
+            texts.append("OK" if ok else "NG")
+            keys.append(int(ok))
+            rows.append((texts, keys, ok, i))
+        reshaped = self.rowCount() != len(rows) or [self.headerData(c, Qt.Orientation.Horizontal) for c in range(self.columnCount())] != headers
+        if reshaped:
+            self.clear()
+            self.setColumnCount(len(headers))
+            self.setHorizontalHeaderLabels(headers)
+            for c in range(6, 9):
+                self.horizontalHeaderItem(c).setToolTip(
+                    "Ratio of capacity to demand for this case, with ✓ where it meets the required ratio; — where the check does not apply.")
+            self.setRowCount(len(rows))
+        # one dataChanged for the whole update instead of one per cell (the proxy re-sorts once)
+        self.blockSignals(True)
+        try:
+            for r, (texts, keys, ok, case_index) in enumerate(rows):
+                for c, text in enumerate(texts):
+                    item = self.item(r, c)
+                    if item is None:
+                        item = QStandardItem()
+                        item.setEditable(False)
+                        item.setData(case_index, CASE_ROLE)
+                        if c >= 2:
+                            item.setTextAlignment(Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter)
+                        self.setItem(r, c, item)
+                    if item.text() != text:
+                        item.setText(text)
+                        item.setData(keys[c], SORT_ROLE)
+                        if c == len(texts) - 1:
+                            item.setForeground(QColor(WARM) if not ok else QBrush())
+        finally:
+            self.blockSignals(False)
+        if rows:
+            self.dataChanged.emit(self.index(0, 0), self.index(len(rows) - 1, len(headers) - 1))
+        return reshaped
+
+
+class CasesTable(QTableView):
+    """Sortable table of all cases; activating a row asks to show that case in the drawings."""
+
+    case_activated = Signal(int)  # index into the wall's cases
+
+    def __init__(self, parent: QWidget | None = None) -> None:
+        super().__init__(parent)
+        self.setObjectName("casesTable")
+        self.cases_model = CasesModel(self)
+        self.proxy = QSortFilterProxyModel(self)
+        self.proxy.setSourceModel(self.cases_model)
+        self.proxy.setSortRole(SORT_ROLE)
+        self.setModel(self.proxy)
+        self.setSortingEnabled(True)
+        self.sortByColumn(-1, Qt.SortOrder.AscendingOrder)
+        self.setSelectionBehavior(QAbstractItemView.SelectionBehavior.SelectRows)
+        self.setSelectionMode(QAbstractItemView.SelectionMode.SingleSelection)
+        self.setEditTriggers(QAbstractItemView.EditTrigger.NoEditTriggers)
+        self.verticalHeader().hide()
+        self.verticalHeader().setDefaultSectionSize(20)
+        self.horizontalHeader().setSectionResizeMode(QHeaderView.ResizeMode.Interactive)
+        self.horizontalHeader().setStretchLastSection(True)
+        self.activated.connect(self._on_activated)
+        self.doubleClicked.connect(self._on_activated)
+
+    def set_result(self, result: WallResult, units: str) -> None:
+        if self.cases_model.set_result(result, units):
+            self.resizeColumnsToContents()  # measured once per shape, not per edit
+
+    def _on_activated(self, index: QModelIndex) -> None:
+        case_index = index.data(CASE_ROLE)
+        if case_index is not None:
+            self.case_activated.emit(int(case_index))

@@ -1,0 +1,343 @@
+"""The design map: every candidate footing width (across) and thickness (up) of the sizing grid.
+
+Passing candidates are filled, failing ones left pale, candidates narrower than the wall greyed. Each
+check's boundary is drawn where its ratio / required reaches 1 (from the engine's
+``check_normalized``), with its own dash pattern and name, so the map shows which check limits the
+size. The engine's chosen size is ringed, the current size marked with a cross. Hovering reads out
+the three ratios of a cell; clicking a passing cell adopts it (one undoable command).
+"""
+
+from __future__ import annotations
+
+import math
+
+import numpy as np
+import pyqtgraph as pg
+from PySide6.QtCore import QRectF, Qt, Signal
+from PySide6.QtWidgets import QGridLayout, QHBoxLayout, QLabel, QPushButton, QVBoxLayout, QWidget
+
+from engine.model import ALL_CHECKS
+from engine.sizing import SizingResult
+from engine.units import Kind
+
+from .. import commands
+from ..document import ProjectDocument, SizingEntry
+from ..style import ACCENT, ACCENT_LIGHT, CHECK_DASHES, CHECK_TONES, GRAPHITE, MUTED, PAPER, WARM, configure_pyqtgraph
+from .elevation import _pen
+from .fields import SHORT, trim, unit_factor
+
+NOT_ALLOWED, FAILS, PASSES = 0, 1, 2
+# Clip for drawing boundaries: "no demand" (inf) becomes a large finite number.
+_CLIP = 1.0e3
+
+
+def _rgb(hex_colour: str) -> list[int]:
+    h = hex_colour.lstrip("#")
+    return [int(h[i: i + 2], 16) for i in (0, 2, 4)]
+
+
+def boundary_lines(values: np.ndarray, widths: np.ndarray, thicknesses: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
+    """Where ``values`` (rows = thicknesses, cols = widths) crosses 1, as x/y arrays separated by NaN.
+
+    Marching squares (pyqtgraph's isocurve) in pixel-edge coordinates, mapped to widths and
+    thicknesses at the cell centres.
+    """
+    data = np.clip(np.nan_to_num(values, nan=0.0, posinf=_CLIP, neginf=0.0), 0.0, _CLIP)
+    if data.size == 0 or data.min() >= 1.0 or data.max() < 1.0 or min(data.shape) < 2:
+        return np.zeros(0), np.zeros(0)
+    dw = float(widths[1] - widths[0]) if widths.size > 1 else 1.0
+    dt = float(thicknesses[1] - thicknesses[0]) if thicknesses.size > 1 else 1.0
+    xs: list[float] = []
+    ys: list[float] = []
+    for line in pg.isocurve(data, 1.0, connected=True, extendToEdge=True):
+        for r, c in line:
+            xs.append(float(widths[0]) + (float(c) - 0.5) * dw)
+            ys.append(float(thicknesses[0]) + (float(r) - 0.5) * dt)
+        xs.append(math.nan)
+        ys.append(math.nan)
+    return np.array(xs), np.array(ys)
+
+
+class DesignMapView(QWidget):
+    """Map of the sizing grid of the selected wall."""
+
+    size_requested = Signal()
+    size_all_requested = Signal()
+
+    def __init__(self, document: ProjectDocument, parent: QWidget | None = None) -> None:
+        configure_pyqtgraph()
+        super().__init__(parent)
+        self.document = document
+        self.message = QLabel(self)
+        self.message.setWordWrap(True)
+        self.size_button = QPushButton("Size this footing")
+        self.size_button.setToolTip("Search the wall's sizing grid for the passing footing with the least B x D (Ctrl+M)")
+        self.size_all_button = QPushButton("Size all walls")
+        self.size_all_button.setToolTip("Size every wall of the project (Ctrl+Shift+M)")
+        self.adopt_button = QPushButton("Adopt ringed size")
+        self.adopt_button.setToolTip("Make the engine's chosen size this wall's footing (undoable)")
+        self.adopt_all_button = QPushButton("Adopt all chosen sizes")
+        self.adopt_all_button.setToolTip("Make each sized wall's chosen size its footing, in one undoable step")
+        buttons = QGridLayout()
+        buttons.setSpacing(3)
+        for k, b in enumerate((self.size_button, self.size_all_button, self.adopt_button, self.adopt_all_button)):
+            buttons.addWidget(b, k // 2, k % 2)
+
+        self.plot = pg.PlotWidget(self)
+        self.plot.setObjectName("designMap")
+        item = self.plot.getPlotItem()
+        item.setMenuEnabled(False)
+        item.hideButtons()
+        item.disableAutoRange()
+        item.setMouseEnabled(x=False, y=False)
+        for name in ("left", "bottom"):
+            axis = item.getAxis(name)
+            axis.enableAutoSIPrefix(False)
+            axis.setPen(_pen(MUTED))
+            axis.setTextPen(_pen(MUTED))
+        self.image = pg.ImageItem()
+        lut = np.array([_rgb("#dcd9d2"), _rgb(PAPER), _rgb(ACCENT_LIGHT)], dtype=np.ubyte)
+        self.image.setLookupTable(lut)
+        self.image.setLevels((0, 2))
+        item.addItem(self.image)
+        self.boundaries = []
+        self.boundary_labels = []
+        for k, check in enumerate(ALL_CHECKS):
+            dashes = CHECK_DASHES[k]
+            pen = _pen(CHECK_TONES[k], 2.0, Qt.PenStyle.CustomDashLine if dashes[1] else Qt.PenStyle.SolidLine)
+            if dashes[1]:
+                pen.setDashPattern(list(dashes))
+            curve = pg.PlotCurveItem(pen=pen, connect="finite")
+            curve.setZValue(3)
+            item.addItem(curve)
+            self.boundaries.append(curve)
+            label = pg.TextItem(check.value, color=CHECK_TONES[k], anchor=(0, 1))
+            label.setZValue(4)
+            item.addItem(label)
+            self.boundary_labels.append(label)
+        self.chosen = pg.ScatterPlotItem(size=18, symbol="o", pen=pg.mkPen(ACCENT, width=2.5), brush=pg.mkBrush(None))
+        self.current = pg.ScatterPlotItem(size=14, symbol="x", pen=pg.mkPen(GRAPHITE, width=1), brush=pg.mkBrush(GRAPHITE))
+        for it in (self.chosen, self.current):
+            it.setZValue(5)
+            item.addItem(it)
+        self.readout = QLabel("Hover over a cell to read its ratios; click a passing cell to adopt it.", self)
+        self.readout.setObjectName("hint")
+        self.legend = QLabel(
+            "Filled cells pass every check; grey cells are narrower than the wall.\n"
+            "Lines: where a check reaches its required ratio —\n"
+            "   ── overturning    – – sliding    ··· bearing\n"
+            "◯ the smallest passing size (least B × D)\n✕ the current size",
+            self,
+        )
+        self.legend.setObjectName("hint")
+        self.legend.setWordWrap(True)
+        self.readout.setWordWrap(True)
+        side = QVBoxLayout()
+        side.setSpacing(6)
+        side.addLayout(buttons)
+        side.addWidget(self.message)
+        side.addWidget(self.readout)
+        side.addStretch(1)
+        side.addWidget(self.legend)
+        side_box = QWidget(self)
+        side_box.setLayout(side)
+        side_box.setFixedWidth(330)
+        layout = QHBoxLayout(self)
+        layout.setContentsMargins(4, 4, 4, 4)
+        layout.setSpacing(6)
+        layout.addWidget(self.plot, 1)
+        layout.addWidget(side_box)
+
+        self.entry: SizingEntry | None = None
+        self.fresh = False
+        self.busy = False
+        self._grid_key: tuple | None = None
+        self._units = ""
+        self.size_button.clicked.connect(self.size_requested)
+        self.size_all_button.clicked.connect(self.size_all_requested)
+        self.adopt_button.clicked.connect(self.adopt_chosen)
+        self.adopt_all_button.clicked.connect(self.adopt_all)
+        self.plot.scene().sigMouseMoved.connect(self._on_mouse_moved)
+        self.plot.scene().sigMouseClicked.connect(self._on_mouse_clicked)
+
+    # ---- rendering -----------------------------------------------------------------------------
+
+    def _unit(self) -> tuple[str, float]:
+        unit = SHORT[1] if self.document.units == "SI" else SHORT[0]
+        return unit, unit_factor(unit, Kind.LENGTH)
+
+    def render(self) -> None:  # type: ignore[override]
+        doc = self.document
+        wall = doc.current_wall
+        entry, fresh = doc.sizing_for(wall)
+        self.entry, self.fresh = entry, fresh
+        unit, f = self._unit()
+        item = self.plot.getPlotItem()
+        if doc.units != self._units:
+            item.setLabel("bottom", f"footing width B ({unit})")
+            item.setLabel("left", f"footing thickness D ({unit})")
+            self._units = doc.units
+            self._grid_key = None
+        self.adopt_all_button.setEnabled(bool(self.adoptable_sizes()))
+        if entry is None:
+            self.image.clear()
+            for curve in self.boundaries:
+                curve.setData([], [])
+            for label in self.boundary_labels:
+                label.setText("")
+            self.chosen.setData([], [])
+            self.current.setData([], [])
+            self.adopt_button.setEnabled(False)
+            self.message.setText("Sizing…" if self.busy else f"Wall {wall.id} has not been sized yet. Press “Size this footing”.")
+            return
+        s = entry.result
+        widths, thicknesses = s.widths / f, s.thicknesses / f
+        state = np.where(s.allowed, np.where(s.passes, PASSES, FAILS), NOT_ALLOWED).astype(np.ubyte)
+        self.image.setImage(state, autoLevels=False, levels=(0, 2))
+        dw = float(widths[1] - widths[0]) if widths.size > 1 else 1.0
+        dt = float(thicknesses[1] - thicknesses[0]) if thicknesses.size > 1 else 1.0
+        rect = QRectF(float(widths[0]) - dw / 2, float(thicknesses[0]) - dt / 2, dw * widths.size, dt * thicknesses.size)
+        self.image.setRect(rect)
+        key = (rect.x(), rect.y(), rect.width(), rect.height())
+        if key != self._grid_key:
+            self._grid_key = key
+            item.setRange(xRange=(rect.left(), rect.right()), yRange=(rect.top(), rect.bottom()), padding=0.02)
+        for k, curve in enumerate(self.boundaries):
+            xs, ys = boundary_lines(s.check_normalized[k], widths, thicknesses)
+            curve.setData(xs, ys)
+            label = self.boundary_labels[k]
+            finite = np.isfinite(xs)
+            if finite.any():
+                idx = np.flatnonzero(finite)
+                mid = idx[len(idx) // 2]
+                label.setText(ALL_CHECKS[k].value)
+                label.setPos(float(xs[mid]), float(ys[mid]))
+            else:
+                label.setText("")
+        if s.feasible:
+            self.chosen.setData([s.width / f], [s.thickness / f])
+        else:
+            self.chosen.setData([], [])
+        self.current.setData([wall.footing.width / f], [wall.footing.thickness / f])
+        self.adopt_button.setEnabled(bool(s.feasible and fresh))
+        text = self._message(s, unit, f)
+        if not fresh:
+            text = ("Sizing again…  " if self.busy else "The inputs changed since this map was made; size again.  ") + text
+        self.message.setText(text)
+
+    def _message(self, s: SizingResult, unit: str, f: float) -> str:
+        if s.feasible:
+            head = f"Smallest passing footing: B {trim(s.width / f, 1)} × D {trim(s.thickness / f, 1)} {unit}"
+            why = s.message.removeprefix("smallest passing size: ")
+            return f"{head}. Why not smaller: {why}."
+        return "No candidate passes. " + s.message + ("; " + "; ".join(s.suggestions) if s.suggestions else "")
+
+    # ---- reading and adopting cells ------------------------------------------------------------
+
+    def cell_at(self, x: float, y: float) -> tuple[int, int] | None:
+        """(row, col) of the candidate under the point (display units), or None outside the grid."""
+        if self.entry is None:
+            return None
+        _unit, f = self._unit()
+        s = self.entry.result
+        widths, thicknesses = s.widths / f, s.thicknesses / f
+        dw = float(widths[1] - widths[0]) if widths.size > 1 else 1.0
+        dt = float(thicknesses[1] - thicknesses[0]) if thicknesses.size > 1 else 1.0
+        col = int(round((x - widths[0]) / dw))
+        row = int(round((y - thicknesses[0]) / dt))
+        if 0 <= col < widths.size and 0 <= row < thicknesses.size:
+            return row, col
+        return None
+
+    def cell_text(self, row: int, col: int) -> str:
+        assert self.entry is not None
+        s = self.entry.result
+        unit, f = self._unit()
+        required = self.document.project.criteria.required
+        parts = []
+        for k, check in enumerate(ALL_CHECKS):
+            value = float(s.check_normalized[k, row, col])
+            if math.isinf(value):
+                parts.append(f"{check.value} no demand")
+                continue
+            ratio = value * required.of(check)
+            parts.append(f"{check.value} {ratio:.2f} {'✓' if value >= 1.0 - 1e-9 else '✗'}")
+        if not s.allowed[row, col]:
+            verdict = "narrower than the wall it carries"
+        elif s.passes[row, col]:
+            verdict = "passes — click to adopt"
+        else:
+            verdict = f"fails ({s.governing_check(row, col).value} governs)"
+        return f"B {trim(s.widths[col] / f, 1)} × D {trim(s.thicknesses[row] / f, 1)} {unit}:  " + ",  ".join(parts) + f"  →  {verdict}"
+
+    def adopt_cell(self, row: int, col: int) -> str | None:
+        """Adopt the candidate (row, col) as the wall's footing; returns a refusal message, if any."""
+        entry = self.entry
+        if entry is None or not self.fresh:
+            return "size the footing again first: the inputs changed since this map was made"
+        s = entry.result
+        if not s.passes[row, col]:
+            return "that size does not pass every check; choose a filled cell"
+        doc = self.document
+        return doc.push(commands.adopt_size(doc, doc.current_index, float(s.widths[col]), float(s.thicknesses[row])))
+
+    def adopt_chosen(self) -> str | None:
+        entry = self.entry
+        if entry is None or not entry.result.feasible or not self.fresh:
+            return "nothing to adopt"
+        doc = self.document
+        s = entry.result
+        assert s.width is not None and s.thickness is not None
+        return doc.push(commands.adopt_size(doc, doc.current_index, s.width, s.thickness))
+
+    def adoptable_sizes(self) -> dict[str, tuple[float, float]]:
+        """Chosen sizes of walls whose sizing is current and differs from their footing."""
+        doc = self.document
+        sizes = {}
+        for wall in doc.project.walls:
+            entry, fresh = doc.sizing_for(wall)
+            if entry is None or not fresh or not entry.result.feasible:
+                continue
+            s = entry.result
+            assert s.width is not None and s.thickness is not None
+            if abs(s.width - wall.footing.width) > 1e-9 or abs(s.thickness - wall.footing.thickness) > 1e-9:
+                sizes[wall.id] = (s.width, s.thickness)
+        return sizes
+
+    def adopt_all(self) -> str | None:
+        sizes = self.adoptable_sizes()
+        if not sizes:
+            return "nothing to adopt"
+        doc = self.document
+        return doc.push(commands.adopt_sizes(doc, sizes))
+
+    def _view_point(self, scene_pos) -> tuple[float, float] | None:
+        vb = self.plot.getPlotItem().getViewBox()
+        if not vb.sceneBoundingRect().contains(scene_pos):
+            return None
+        p = vb.mapSceneToView(scene_pos)
+        return p.x(), p.y()
+
+    def _on_mouse_moved(self, scene_pos) -> None:
+        point = self._view_point(scene_pos)
+        cell = self.cell_at(*point) if point else None
+        if cell is None:
+            return
+        text = self.cell_text(*cell)
+        self.readout.setText(text)
+        self.plot.setToolTip(text)
+
+    def _on_mouse_clicked(self, event) -> None:
+        if event.button() != Qt.MouseButton.LeftButton:
+            return
+        point = self._view_point(event.scenePos())
+        cell = self.cell_at(*point) if point else None
+        if cell is None:
+            return
+        message = self.adopt_cell(*cell)
+        if message:
+            self.readout.setText(f"{self.cell_text(*cell)}  —  {message}")
+            self.readout.setStyleSheet(f"color: {WARM};")
+        else:
+            self.readout.setStyleSheet("")
+            self.readout.setText(f"Adopted {self.cell_text(*cell).split(':')[0]} (Ctrl+Z undoes it).")

@@ -1,0 +1,362 @@
+"""Input fields that take text with units, their definitions, and a collapsible section.
+
+A field shows its value in the project's display units ("18 in", "450 mm") and accepts any text of
+the right dimension ("600 mm", "2 ft 6 in", 2'-6", "1.5 kip"); a bare number is read in the field's
+display unit. Parsing is the engine's (:func:`engine.units.parse_quantity`); the raw document stores
+what the user typed (a bare number gets its unit written after it).
+"""
+
+from __future__ import annotations
+
+import math
+import re
+from collections.abc import Callable
+from dataclasses import dataclass
+from typing import Any
+
+from PySide6.QtCore import Qt, QTimer, Signal
+from PySide6.QtGui import QKeyEvent
+from PySide6.QtWidgets import QLabel, QLineEdit, QSizePolicy, QToolButton, QVBoxLayout, QWidget
+
+from engine.errors import InputError
+from engine.model import Project, Wall
+from engine.units import Kind, parse_quantity
+
+# Typing pauses this long before a valid entry is applied live (ms); Enter or leaving applies at once.
+LIVE_DELAY_MS = 350
+
+_BARE = re.compile(r"^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*$")
+_INTEGER = re.compile(r"^\s*[-+]?\d+\s*$")
+
+# Display units per kind of field: (US, SI).
+LONG = ("ft", "m")  # wall length, positions, heights, extensions
+SHORT = ("in", "mm")  # section dimensions: widths, thicknesses, cover
+FORCE = ("kip", "kN")
+LINE = ("plf", "kN/m")
+PRESSURE = ("psf", "kPa")
+DENSITY = ("pcf", "kN/m^3")
+GRADIENT = ("psf/ft", "kPa/m")
+
+
+@dataclass(frozen=True, slots=True)
+class FieldSpec:
+    """One input: where it lives in the raw document, how it is read and shown, and what it means.
+
+    Attributes:
+        path: the path below the field's scope (the current wall, or the project).
+        label: the words beside the field.
+        kind: the quantity kind (None for a plain number or text).
+        units: display units (US, SI) for a quantity field.
+        value: reads the current value from the parsed model (SI float, number or text).
+        tip: the tooltip: what the input is and where its rule comes from.
+        scope: "wall" or "project".
+        text: a free-text field (labels, names).
+        step: the arrow-key step of the field (m), from the wall's sizing bounds.
+    """
+
+    path: tuple[str, ...]
+    label: str
+    kind: Kind | None
+    units: tuple[str, str] | None
+    value: Callable[[Project, Wall], Any]
+    tip: str
+    scope: str = "wall"
+    text: bool = False
+    step: Callable[[Wall], float] | None = None
+
+    def unit(self, system: str) -> str:
+        assert self.units is not None
+        return self.units[1] if system == "SI" else self.units[0]
+
+
+def trim(value: float, decimals: int = 3) -> str:
+    """A number without trailing zeros ("18", "2.5", "0.583")."""
+    if math.isinf(value):
+        return "∞"
+    text = f"{value:.{decimals}f}"
+    if "." in text:
+        text = text.rstrip("0").rstrip(".")
+    return "0" if text in ("-0", "") else text
+
+
+def unit_factor(unit: str, kind: Kind) -> float:
+    """SI value of one ``unit`` (engine parse; cached there)."""
+    return parse_quantity(f"1 {unit}", kind)
+
+
+def show(value_si: float, kind: Kind, unit: str, decimals: int = 3) -> str:
+    """An SI value in ``unit``: "18 in", "2.5 ft", "520 plf"."""
+    return f"{trim(value_si / unit_factor(unit, kind), decimals)} {unit}"
+
+
+def display_text(spec: FieldSpec, project: Project, wall: Wall) -> str:
+    value = spec.value(project, wall)
+    if spec.text:
+        return str(value)
+    if spec.kind is None:
+        return trim(float(value), 4)
+    return show(float(value), spec.kind, spec.unit(project.units))
+
+
+def to_raw(spec: FieldSpec, text: str, system: str) -> Any:
+    """What the raw document stores for ``text`` typed into the field; raises InputError if unusable."""
+    text = " ".join(text.split())
+    if spec.text:
+        return text
+    if spec.kind is None:
+        return parse_number(text)
+    unit = spec.unit(system)
+    parse_quantity(text, spec.kind, default_unit=unit)  # refuses the wrong dimension or a typo
+    if _BARE.match(text):
+        return f"{text} {unit}"
+    return text
+
+
+def parse_number(text: str) -> float | int:
+    """A plain number (ratios, factors, S_DS)."""
+    try:
+        value = float(text)
+    except ValueError:
+        raise InputError("", f'expected a number such as "1.5", got "{text}"') from None
+    if not math.isfinite(value):
+        raise InputError("", f'expected a finite number, got "{text}"')
+    return int(value) if _INTEGER.match(text) else value
+
+
+class StepLineEdit(QLineEdit):
+    """A line edit whose Up / Down keys ask to step the value."""
+
+    stepped = Signal(int)
+
+    def keyPressEvent(self, event: QKeyEvent) -> None:  # noqa: N802 - Qt's name
+        if event.key() in (Qt.Key.Key_Up, Qt.Key.Key_Down):
+            self.stepped.emit(1 if event.key() == Qt.Key.Key_Up else -1)
+            return
+        super().keyPressEvent(event)
+
+
+class QuantityField(QWidget):
+    """A line edit with its error line. Emits ``commit_requested(text, live)``.
+
+    ``live`` commits come from a pause in typing and are made only when the text is valid; a final
+    commit (Enter, leaving the field) reports any error at the field.
+    """
+
+    commit_requested = Signal(str, bool)
+    step_requested = Signal(int)
+
+    def __init__(self, spec: FieldSpec, parent: QWidget | None = None) -> None:
+        super().__init__(parent)
+        self.spec = spec
+        self.session = 0
+        self.edit = StepLineEdit(self)
+        self.edit.setToolTip(spec.tip)
+        self.edit.setAccessibleName(spec.label)
+        self.edit.setObjectName("field_" + "_".join(spec.path))
+        self.error = QLabel(self)
+        self.error.setObjectName("fieldError")
+        self.error.setWordWrap(True)
+        self.error.hide()
+        layout = QVBoxLayout(self)
+        layout.setContentsMargins(0, 0, 0, 0)
+        layout.setSpacing(1)
+        layout.addWidget(self.edit)
+        layout.addWidget(self.error)
+        self.setSizePolicy(QSizePolicy.Policy.Expanding, QSizePolicy.Policy.Fixed)
+        self._shown = ""
+        self._timer = QTimer(self)
+        self._timer.setSingleShot(True)
+        self._timer.setInterval(LIVE_DELAY_MS)
+        self._timer.timeout.connect(self._on_pause)
+        self.edit.textEdited.connect(self._on_text_edited)
+        self.edit.editingFinished.connect(self._on_editing_finished)
+        self.edit.stepped.connect(self.step_requested)
+
+    @property
+    def shown_text(self) -> str:
+        return self._shown
+
+    @property
+    def invalid(self) -> bool:
+        return self.error.isVisible() or bool(self.edit.property("invalid"))
+
+    def set_display(self, text: str, force: bool = False) -> None:
+        """Show the model's value, unless the user is typing into the field or it holds an error."""
+        if not force and (self.edit.isModified() or self.invalid):
+            return
+        self._shown = text
+        if self.edit.text() != text:
+            self.edit.setText(text)
+            self.edit.setCursorPosition(0)
+        self.edit.setModified(False)
+
+    def set_error(self, message: str | None) -> None:
+        invalid = message is not None
+        if bool(self.edit.property("invalid")) != invalid:
+            self.edit.setProperty("invalid", invalid)
+            self.edit.style().unpolish(self.edit)
+            self.edit.style().polish(self.edit)
+        self.error.setText(message or "")
+        self.error.setVisible(invalid)
+        self.edit.setToolTip(self.spec.tip if not invalid else f"{message}\n\n{self.spec.tip}")
+
+    def reset(self) -> None:
+        """Drop any typing and error (another wall or project is shown)."""
+        self._timer.stop()
+        self.set_error(None)
+        self.edit.setModified(False)
+        self.session += 1
+
+    def _on_text_edited(self, _text: str) -> None:
+        self._timer.start()
+
+    def _on_pause(self) -> None:
+        if self.edit.text().strip() and self.edit.text() != self._shown:
+            self.commit_requested.emit(self.edit.text(), True)
+
+    def _on_editing_finished(self) -> None:
+        self._timer.stop()
+        if self.edit.text() != self._shown or self.invalid:
+            self.commit_requested.emit(self.edit.text(), False)
+        self.session += 1
+
+
+class Section(QWidget):
+    """A titled group that folds away with its title button."""
+
+    def __init__(self, title: str, content: QWidget, expanded: bool = True, parent: QWidget | None = None) -> None:
+        super().__init__(parent)
+        self.toggle = QToolButton(self)
+        self.toggle.setObjectName("sectionToggle")
+        self.toggle.setText(title)
+        self.toggle.setCheckable(True)
+        self.toggle.setChecked(expanded)
+        self.toggle.setToolButtonStyle(Qt.ToolButtonStyle.ToolButtonTextBesideIcon)
+        self.toggle.setArrowType(Qt.ArrowType.DownArrow if expanded else Qt.ArrowType.RightArrow)
+        self.toggle.setFocusPolicy(Qt.FocusPolicy.NoFocus)
+        self.content = content
+        layout = QVBoxLayout(self)
+        layout.setContentsMargins(0, 4, 0, 4)
+        layout.setSpacing(2)
+        layout.addWidget(self.toggle)
+        layout.addWidget(content)
+        content.setVisible(expanded)
+        self.toggle.toggled.connect(self._on_toggled)
+
+    def _on_toggled(self, expanded: bool) -> None:
+        self.toggle.setArrowType(Qt.ArrowType.DownArrow if expanded else Qt.ArrowType.RightArrow)
+        self.content.setVisible(expanded)
+
+
+# ---- the fields --------------------------------------------------------------------------------------
+
+_GEOMETRY_RULE = "Footing length L = extension at start + wall length + extension at end (Kernline project-file format, version 1)."
+
+
+def _wall_field(path: tuple[str, ...], label: str, kind: Kind | None, units: tuple[str, str] | None,
+                value: Callable[[Wall], Any], tip: str, **kw: Any) -> FieldSpec:
+    return FieldSpec(path, label, kind, units, lambda p, w: value(w), tip, **kw)
+
+
+def _project_field(path: tuple[str, ...], label: str, kind: Kind | None, units: tuple[str, str] | None,
+                   value: Callable[[Project], Any], tip: str, **kw: Any) -> FieldSpec:
+    return FieldSpec(path, label, kind, units, lambda p, w: value(p), tip, scope="project", **kw)
+
+
+WALL_FIELDS = (
+    _wall_field(("label",), "Label", None, None, lambda w: w.label, "A description of the wall (grid line, storey); printed in the schedule.", text=True),
+    _wall_field(("length",), "Wall length", Kind.LENGTH, LONG, lambda w: w.length,
+                "In-plane length of the shear wall. Loads are located from its start end. " + _GEOMETRY_RULE),
+    _wall_field(("thickness",), "Wall thickness", Kind.LENGTH, SHORT, lambda w: w.thickness,
+                "Thickness of the wall that sits on the footing (or on the stem). The footing may not be narrower than "
+                "what it carries (Kernline input rule)."),
+)
+
+STEM_FIELDS = (
+    _wall_field(("stem", "height"), "Stem height", Kind.LENGTH, SHORT, lambda w: w.stem.height,
+                "Height of a concrete stem wall between footing and wall; 0 means no stem. Its weight counts as dead load "
+                "at mid-length (self weight, Kernline mechanics)."),
+    _wall_field(("stem", "thickness"), "Stem thickness", Kind.LENGTH, SHORT, lambda w: w.stem.thickness,
+                "Thickness of the stem wall (used only when the stem height is above zero)."),
+)
+
+FOOTING_FIELDS = (
+    _wall_field(("footing", "width"), "Footing width B", Kind.LENGTH, SHORT, lambda w: w.footing.width,
+                "Width of the strip footing across the wall. Up/Down steps by the sizing step. Minimum widths for "
+                "light-frame walls: IBC 2018 Table 1809.7 (not checked here).", step=lambda w: w.sizing.width_step),
+    _wall_field(("footing", "thickness"), "Footing thickness D", Kind.LENGTH, SHORT, lambda w: w.footing.thickness,
+                "Depth of the footing. Adds self weight and raises the lateral arm to height + D (Kernline mechanics). "
+                "Minimum depths: ACI 318-19 13.3.1.2 (not checked here). Up/Down steps by the sizing step.",
+                step=lambda w: w.sizing.thickness_step),
+    _wall_field(("footing", "extension_start"), "Extension at start", Kind.LENGTH, LONG, lambda w: w.footing.extension_start,
+                "Footing beyond the wall's start end. " + _GEOMETRY_RULE),
+    _wall_field(("footing", "extension_end"), "Extension at end", Kind.LENGTH, LONG, lambda w: w.footing.extension_end,
+                "Footing beyond the wall's far end. " + _GEOMETRY_RULE),
+    _wall_field(("footing", "cover"), "Soil cover", Kind.LENGTH, SHORT, lambda w: w.footing.cover,
+                "Depth of soil over the top of the footing. Its weight over B minus the wall (or stem) thickness is dead "
+                "load; grade is this far above the footing top (Kernline mechanics)."),
+    _wall_field(("footing", "unit_weight"), "Concrete unit weight", Kind.UNIT_WEIGHT, DENSITY, lambda w: w.footing.unit_weight,
+                "Unit weight of the footing and stem concrete; 150 pcf (23.6 kN/m³) for normal-weight reinforced "
+                "concrete (common practice)."),
+)
+
+SIZING_FIELDS = tuple(
+    _wall_field(("sizing", key), label, Kind.LENGTH, SHORT, (lambda k: (lambda w: getattr(w.sizing, k)))(key),
+                "Bounds and step of the candidate grid that automatic sizing searches (inclusive). The chosen size is "
+                "the passing candidate with the least B x D (Kernline sizing rule).")
+    for key, label in (
+        ("width_min", "Width from"), ("width_max", "Width to"), ("width_step", "Width step"),
+        ("thickness_min", "Thickness from"), ("thickness_max", "Thickness to"), ("thickness_step", "Thickness step"),
+    )
+)
+
+SOIL_FIELDS = (
+    _project_field(("soil", "allowable_bearing"), "Allowable bearing", Kind.PRESSURE, PRESSURE, lambda p: p.soil.allowable_bearing,
+                   "Allowable soil bearing pressure from the geotechnical report (presumptive values: IBC 2018 Table 1806.2). "
+                   "Compared with the peak pressure q_max of each combination."),
+    _project_field(("soil", "friction"), "Friction coefficient", None, None, lambda p: p.soil.friction,
+                   "Coefficient of friction between footing and soil; resists sliding as friction x N while N > 0 "
+                   "(presumptive values: IBC 2018 Table 1806.2; the geotechnical report governs)."),
+    _project_field(("soil", "cohesion"), "Cohesion", Kind.PRESSURE, PRESSURE, lambda p: p.soil.cohesion,
+                   "Cohesion x contact area resists sliding, limited to half of N (after IBC 2018 1806.3.2)."),
+    _project_field(("soil", "passive"), "Passive pressure", Kind.PRESSURE_GRADIENT, GRADIENT, lambda p: p.soil.passive,
+                   "Lateral bearing pressure per depth below grade on the footing's end face (IBC 2018 Table 1806.2, "
+                   "'lateral bearing'; the geotechnical report governs)."),
+    _project_field(("soil", "passive_ignore"), "Passive ignored to", Kind.LENGTH, SHORT, lambda p: p.soil.passive_ignore,
+                   "Depth below grade within which passive resistance is ignored (common practice: the top 1 ft)."),
+    _project_field(("soil", "unit_weight"), "Soil unit weight", Kind.UNIT_WEIGHT, DENSITY, lambda p: p.soil.unit_weight,
+                   "Unit weight of the soil over the footing (dead load) and of the overburden for a net allowable "
+                   "(geotechnical report; 110 pcf is a common default)."),
+)
+
+CRITERIA_FIELDS = (
+    _project_field(("criteria", "required", "overturning"), "Required overturning ratio", None, None,
+                   lambda p: p.criteria.required.overturning,
+                   "Least resisting / overturning moment about the toe. 1.0 with ASCE 7-16 ASD combinations that carry "
+                   "0.6D; 1.5-2.0 with service loads (common practice; see the geotechnical report and local code)."),
+    _project_field(("criteria", "required", "sliding"), "Required sliding ratio", None, None, lambda p: p.criteria.required.sliding,
+                   "Least sliding resistance / shear. 1.0 with ASCE 7-16 ASD combinations; 1.5 with service loads "
+                   "(common practice)."),
+    _project_field(("criteria", "required", "bearing"), "Required bearing ratio", None, None, lambda p: p.criteria.required.bearing,
+                   "Least allowable / peak soil pressure; 1.0 when the allowable already carries the geotechnical factor "
+                   "of safety (common practice)."),
+    _project_field(("criteria", "sds"), "S_DS", None, None, lambda p: p.criteria.sds,
+                   "Design spectral acceleration at short periods (ASCE 7-16 11.4.5). Sets the vertical seismic effect "
+                   "Ev = 0.2 S_DS D (ASCE 7-16 Eq. 12.4-4a) in the seismic combinations."),
+    _project_field(("criteria", "bearing_increase"), "Allowable increase with W or E", None, None,
+                   lambda p: p.criteria.bearing_increase,
+                   "Factor on the allowable bearing in combinations with wind or seismic, where the geotechnical report "
+                   "permits one (IBC 2018 1806.1 allows 1/3 only with the alternative basic combinations; from memory). "
+                   "1.0 for none."),
+)
+
+PROJECT_FIELDS = tuple(
+    _project_field(("project", key), label, None, None, (lambda k: (lambda p: getattr(p.info, k)))(key), tip, text=True)
+    for key, label, tip in (
+        ("name", "Project", "Project name, shown in the title and the calculation package."),
+        ("number", "Number", "Job number."),
+        ("engineer", "Engineer", "Engineer of record or preparer."),
+        ("client", "Client", "Client."),
+        ("address", "Address", "Site address."),
+    )
+)

@@ -1,0 +1,675 @@
+"""The input forms: the selected wall (geometry, stem, footing, loads, sizing range) and the project
+(soil, criteria, combinations, title block). They render from document signals and write only
+through undoable commands.
+"""
+
+from __future__ import annotations
+
+from collections.abc import Sequence
+from typing import Any
+
+from PySide6.QtCore import Qt
+from PySide6.QtGui import QBrush, QColor
+from PySide6.QtWidgets import (
+    QAbstractItemView,
+    QCheckBox,
+    QComboBox,
+    QFormLayout,
+    QHBoxLayout,
+    QHeaderView,
+    QLabel,
+    QPushButton,
+    QStyledItemDelegate,
+    QTableWidget,
+    QTableWidgetItem,
+    QVBoxLayout,
+    QWidget,
+)
+
+from engine.combinations import combinations_of
+from engine.errors import InputError
+from engine.model import ALL_CHECKS, LateralLoad, LineLoad, LoadCase, PointLoad
+from engine.units import Kind, parse_quantity
+
+from .. import commands
+from ..document import ProjectDocument, get_at
+from ..style import WARM_LIGHT
+from .fields import (
+    CRITERIA_FIELDS,
+    FOOTING_FIELDS,
+    FORCE,
+    LINE,
+    LONG,
+    PROJECT_FIELDS,
+    SIZING_FIELDS,
+    SOIL_FIELDS,
+    STEM_FIELDS,
+    WALL_FIELDS,
+    FieldSpec,
+    QuantityField,
+    Section,
+    display_text,
+    parse_number,
+    show,
+    to_raw,
+    trim,
+)
+
+
+class FieldGroup:
+    """Binds a set of :class:`QuantityField` to the document: shows values, commits edits."""
+
+    def __init__(self, document: ProjectDocument) -> None:
+        self.document = document
+        self.fields: list[QuantityField] = []
+
+    def add(self, spec: FieldSpec, form: QFormLayout) -> QuantityField:
+        field = QuantityField(spec)
+        label = QLabel(spec.label)
+        label.setToolTip(spec.tip)
+        label.setBuddy(field.edit)
+        form.addRow(label, field)
+        field.commit_requested.connect(lambda text, live, f=field: self.commit(f, text, live))
+        field.step_requested.connect(lambda direction, f=field: self.step(f, direction))
+        self.fields.append(field)
+        return field
+
+    def full_path(self, spec: FieldSpec) -> tuple[Any, ...]:
+        return self.document.wall_path(*spec.path) if spec.scope == "wall" else spec.path
+
+    def refresh(self, force: bool = False) -> None:
+        doc = self.document
+        project, wall = doc.project, doc.current_wall
+        for field in self.fields:
+            if force:
+                field.reset()
+            field.set_display(display_text(field.spec, project, wall), force=force)
+
+    def field_at(self, path: Sequence[Any]) -> QuantityField | None:
+        for field in self.fields:
+            if self.full_path(field.spec) == tuple(path):
+                return field
+        return None
+
+    def commit(self, field: QuantityField, text: str, live: bool) -> bool:
+        """Turn the field's text into an edit; report a refusal at the field (not while typing)."""
+        doc = self.document
+        spec = field.spec
+        try:
+            value = to_raw(spec, text, doc.units)
+        except InputError as err:
+            if not live:
+                field.set_error(err.problem)
+            return False
+        path = self.full_path(spec)
+        if value == get_at(doc.raw, path):
+            field.set_error(None)
+            if not live:
+                field.set_display(display_text(spec, doc.project, doc.current_wall), force=True)
+            return True
+        message = doc.push(commands.SetField(doc, path, value, session=field.session, text=f"Set {spec.label.lower()}"), quiet=live)
+        if message is not None:
+            if not live:
+                field.set_error(message)
+            return False
+        field.set_error(None)
+        if not live:
+            field.set_display(display_text(spec, doc.project, doc.current_wall), force=True)
+        return True
+
+    def step(self, field: QuantityField, direction: int) -> None:
+        """Up / Down in a footing dimension: one sizing step."""
+        spec = field.spec
+        if spec.step is None or spec.kind is None:
+            return
+        doc = self.document
+        wall = doc.current_wall
+        value = float(spec.value(doc.project, wall)) + direction * spec.step(wall)
+        text = show(value, spec.kind, spec.unit(doc.units))
+        field.edit.setText(text)
+        if self.commit(field, text, live=False):
+            field.edit.setModified(False)
+
+
+def _form() -> tuple[QWidget, QFormLayout]:
+    box = QWidget()
+    form = QFormLayout(box)
+    form.setContentsMargins(8, 0, 0, 0)
+    form.setLabelAlignment(Qt.AlignmentFlag.AlignLeft)
+    form.setFieldGrowthPolicy(QFormLayout.FieldGrowthPolicy.AllNonFixedFieldsGrow)
+    form.setVerticalSpacing(4)
+    return box, form
+
+
+# ---- loads table -------------------------------------------------------------------------------------
+
+LOAD_COLUMNS = ("Type", "Case", "Value", "At / from / height", "To", "Label")
+LOAD_TIPS = (
+    "line: uniform load along the wall (from-to); point: a concentrated load; lateral: an in-plane shear (W or E only).",
+    "ASCE 7-16 load case symbol (section 2.2): D dead, L live, Lr roof live, S snow, R rain, W wind, E seismic.",
+    "Positive downward; a negative W line or point load is uplift. Lateral loads are magnitudes; the window checks "
+    "both directions (Kernline mechanics).",
+    "Line: where it starts; point: where it acts (both from the wall's start end); lateral: height above the top of "
+    "the footing (the arm about the base is height + D).",
+    "Line loads only: where the load ends (the whole wall when not given).",
+    "Your description, printed beside the load.",
+)
+KINDS = ("line", "point", "lateral")
+_ERROR_ROLE = Qt.ItemDataRole.UserRole + 7
+CASES = tuple(c.value for c in LoadCase)
+
+
+class _ChoiceDelegate(QStyledItemDelegate):
+    """A combo box editor with fixed choices for the Type and Case columns."""
+
+    def __init__(self, choices: Sequence[str], parent: QWidget | None = None) -> None:
+        super().__init__(parent)
+        self.choices = tuple(choices)
+
+    def createEditor(self, parent: QWidget, option: Any, index: Any) -> QWidget:  # noqa: N802 - Qt's name
+        box = QComboBox(parent)
+        box.addItems(self.choices)
+        box.activated.connect(lambda _i, b=box: self.commitData.emit(b))
+        return box
+
+    def setEditorData(self, editor: QWidget, index: Any) -> None:  # noqa: N802 - Qt's name
+        assert isinstance(editor, QComboBox)
+        editor.setCurrentText(str(index.data()))
+
+    def setModelData(self, editor: QWidget, model: Any, index: Any) -> None:  # noqa: N802 - Qt's name
+        assert isinstance(editor, QComboBox)
+        model.setData(index, editor.currentText())
+
+
+class LoadsEditor(QWidget):
+    """The current wall's loads as an editable table; each cell edit is one undoable command."""
+
+    def __init__(self, document: ProjectDocument, parent: QWidget | None = None) -> None:
+        super().__init__(parent)
+        self.document = document
+        self.table = QTableWidget(0, len(LOAD_COLUMNS), self)
+        self.table.setObjectName("loadsTable")
+        self.table.setHorizontalHeaderLabels(LOAD_COLUMNS)
+        for col, tip in enumerate(LOAD_TIPS):
+            self.table.horizontalHeaderItem(col).setToolTip(tip)
+        header = self.table.horizontalHeader()
+        header.setSectionResizeMode(QHeaderView.ResizeMode.ResizeToContents)
+        header.setSectionResizeMode(len(LOAD_COLUMNS) - 1, QHeaderView.ResizeMode.Stretch)
+        self.table.verticalHeader().setDefaultSectionSize(22)
+        self.table.setSelectionBehavior(QAbstractItemView.SelectionBehavior.SelectRows)
+        self.table.setSelectionMode(QAbstractItemView.SelectionMode.SingleSelection)
+        self.table.setEditTriggers(
+            QAbstractItemView.EditTrigger.DoubleClicked | QAbstractItemView.EditTrigger.EditKeyPressed
+            | QAbstractItemView.EditTrigger.AnyKeyPressed | QAbstractItemView.EditTrigger.SelectedClicked
+        )
+        self.table.setItemDelegateForColumn(0, _ChoiceDelegate(KINDS, self.table))
+        self.table.setItemDelegateForColumn(1, _ChoiceDelegate(CASES, self.table))
+        self.table.setMinimumHeight(150)
+        self.message = QLabel(self)
+        self.message.setObjectName("fieldError")
+        self.message.setWordWrap(True)
+        self.message.hide()
+        buttons = QHBoxLayout()
+        buttons.setSpacing(4)
+        self.add_buttons = {}
+        for kind in KINDS:
+            b = QPushButton(f"+ {kind}")
+            b.setToolTip(f"Add a {kind} load to this wall")
+            b.clicked.connect(lambda _c=False, k=kind: self._add(k))
+            buttons.addWidget(b)
+            self.add_buttons[kind] = b
+        self.remove_button = QPushButton("Delete")
+        self.remove_button.setToolTip("Delete the selected load")
+        self.up_button = QPushButton("↑")
+        self.up_button.setToolTip("Move the selected load up")
+        self.down_button = QPushButton("↓")
+        self.down_button.setToolTip("Move the selected load down")
+        for b in (self.remove_button, self.up_button, self.down_button):
+            buttons.addWidget(b)
+        buttons.addStretch(1)
+        self.remove_button.clicked.connect(self._remove)
+        self.up_button.clicked.connect(lambda: self._move(-1))
+        self.down_button.clicked.connect(lambda: self._move(1))
+        layout = QVBoxLayout(self)
+        layout.setContentsMargins(8, 0, 0, 0)
+        layout.addWidget(self.table)
+        layout.addWidget(self.message)
+        layout.addLayout(buttons)
+        self._refreshing = False
+        self._error_cell: tuple[int, int] | None = None
+        self.table.itemChanged.connect(self._on_item_changed)
+
+    # ---- rendering -----------------------------------------------------------------------------
+
+    def refresh(self, clear_message: bool = False) -> None:
+        doc = self.document
+        wall = doc.current_wall
+        units = doc.units
+        loads = wall.loads
+        if clear_message:
+            self._show_message(None)
+        self._refreshing = True
+        try:
+            if self.table.rowCount() != len(loads):
+                self.table.setRowCount(len(loads))
+            for row, load in enumerate(loads):
+                texts, editable = _load_row(load, units)
+                for col, text in enumerate(texts):
+                    item = self.table.item(row, col)
+                    if item is None:
+                        item = QTableWidgetItem()
+                        self.table.setItem(row, col, item)
+                    if item.text() != text:
+                        item.setText(text)
+                    flags = Qt.ItemFlag.ItemIsSelectable | Qt.ItemFlag.ItemIsEnabled
+                    if editable[col]:
+                        flags |= Qt.ItemFlag.ItemIsEditable
+                    if item.flags() != flags:
+                        item.setFlags(flags)
+                    error = self._error_cell == (row, col)
+                    if bool(item.data(_ERROR_ROLE)) != error:
+                        item.setData(_ERROR_ROLE, error)
+                        item.setBackground(QBrush(QColor(WARM_LIGHT)) if error else QBrush())
+        finally:
+            self._refreshing = False
+
+    def _show_message(self, text: str | None, cell: tuple[int, int] | None = None) -> None:
+        self._error_cell = cell
+        self.message.setText(text or "")
+        self.message.setVisible(bool(text))
+
+    # ---- editing -------------------------------------------------------------------------------
+
+    def _on_item_changed(self, item: QTableWidgetItem) -> None:
+        if self._refreshing:
+            return
+        row, col = item.row(), item.column()
+        message = self.edit_cell(row, col, item.text())
+        if message is not None:
+            self._show_message(f"Row {row + 1}, {LOAD_COLUMNS[col].lower()}: {message} (the previous value is kept)", (row, col))
+        else:
+            self._show_message(None)
+        self.refresh()
+
+    def edit_cell(self, row: int, col: int, text: str) -> str | None:
+        """Apply a cell edit as one command; return the refusal message, if any."""
+        doc = self.document
+        wi = doc.current_index
+        load = doc.current_wall.loads[row]
+        base = ("walls", wi, "loads", row)
+        text = " ".join(text.split())
+        if col == 0:
+            if text not in KINDS:
+                return f'expected one of {", ".join(KINDS)}'
+            if text == _kind_of(load):
+                return None
+            return doc.push(commands.change_load_type(doc, wi, row, text))
+        if col == 1:
+            if text == load.case.value:
+                return None
+            return doc.push(commands.SetField(doc, (*base, "case"), text, text="Set load case"))
+        if col == 5:
+            if text == load.label:
+                return None
+            return doc.push(commands.SetField(doc, (*base, "label"), text, text="Set load label"))
+        key, kind, units = _cell_key(load, col)
+        if key is None:
+            return None
+        if key == "height" and text.lower().startswith("h "):
+            text = text[2:].strip()  # the shown "h 21 ft", edited in place
+        unit = units[1] if doc.units == "SI" else units[0]
+        try:
+            parse_quantity(text, kind, default_unit=unit)
+        except InputError as err:
+            return err.problem
+        value = f"{text} {unit}" if _is_bare(text) else text
+        if value == get_at(doc.raw, (*base, key)):
+            return None
+        return doc.push(commands.SetField(doc, (*base, key), value, text=f"Set load {key}"))
+
+    def _selected_row(self) -> int | None:
+        rows = self.table.selectionModel().selectedRows()
+        return rows[0].row() if rows else (self.table.currentRow() if self.table.currentRow() >= 0 else None)
+
+    def _add(self, kind: str) -> None:
+        doc = self.document
+        if doc.push(commands.add_load(doc, doc.current_index, kind)) is None:
+            self.table.selectRow(self.table.rowCount() - 1)
+
+    def _remove(self) -> None:
+        row = self._selected_row()
+        if row is not None:
+            doc = self.document
+            doc.push(commands.remove_load(doc, doc.current_index, row))
+
+    def _move(self, step: int) -> None:
+        row = self._selected_row()
+        if row is None:
+            return
+        target = row + step
+        if 0 <= target < self.table.rowCount():
+            doc = self.document
+            if doc.push(commands.move_load(doc, doc.current_index, row, target)) is None:
+                self.table.selectRow(target)
+
+
+def _is_bare(text: str) -> bool:
+    try:
+        float(text)
+    except ValueError:
+        return False
+    return True
+
+
+def _kind_of(load: Any) -> str:
+    return "line" if isinstance(load, LineLoad) else "point" if isinstance(load, PointLoad) else "lateral"
+
+
+def _cell_key(load: Any, col: int) -> tuple[str | None, Kind, tuple[str, str]]:
+    if col == 2:
+        return "value", (Kind.LINE_LOAD if isinstance(load, LineLoad) else Kind.FORCE), (LINE if isinstance(load, LineLoad) else FORCE)
+    if col == 3:
+        key = "start" if isinstance(load, LineLoad) else "at" if isinstance(load, PointLoad) else "height"
+        return key, Kind.LENGTH, LONG
+    if col == 4 and isinstance(load, LineLoad):
+        return "end", Kind.LENGTH, LONG
+    return None, Kind.LENGTH, LONG
+
+
+def _load_row(load: Any, units: str) -> tuple[list[str], list[bool]]:
+    """The texts of a load's row, in display units, and which cells can be edited."""
+    long_unit = LONG[1] if units == "SI" else LONG[0]
+    if isinstance(load, LineLoad):
+        value = show(load.value, Kind.LINE_LOAD, LINE[1] if units == "SI" else LINE[0])
+        return (["line", load.case.value, value, show(load.start, Kind.LENGTH, long_unit), show(load.end, Kind.LENGTH, long_unit), load.label],
+                [True] * 6)
+    force_unit = FORCE[1] if units == "SI" else FORCE[0]
+    if isinstance(load, PointLoad):
+        return (["point", load.case.value, show(load.value, Kind.FORCE, force_unit), show(load.at, Kind.LENGTH, long_unit), "", load.label],
+                [True, True, True, True, False, True])
+    assert isinstance(load, LateralLoad)
+    return (["lateral", load.case.value, show(load.value, Kind.FORCE, force_unit), "h " + show(load.height, Kind.LENGTH, long_unit), "", load.label],
+            [True, True, True, True, False, True])
+
+
+# ---- combinations table ------------------------------------------------------------------------------
+
+COMBO_CASES = CASES
+COMBO_COLUMNS = ("Name", *COMBO_CASES, "OT", "SL", "BR")
+_CHECK_KEYS = tuple(c.value for c in ALL_CHECKS)
+
+
+class CombinationsEditor(QWidget):
+    """The combinations in force: the method's preset (read only) or the project's own list."""
+
+    def __init__(self, document: ProjectDocument, parent: QWidget | None = None) -> None:
+        super().__init__(parent)
+        self.document = document
+        self.custom = QCheckBox("Use our own list of combinations")
+        self.custom.setToolTip(
+            "Replace the method's preset (ASCE 7-16 2.4.1 with 2.4.5 for E, or the service-load list) by a list "
+            "edited here. Starts as a copy of the preset."
+        )
+        self.table = QTableWidget(0, len(COMBO_COLUMNS), self)
+        self.table.setObjectName("combinationsTable")
+        self.table.setHorizontalHeaderLabels(COMBO_COLUMNS)
+        self.table.horizontalHeaderItem(len(COMBO_COLUMNS) - 3).setToolTip("Checked for overturning")
+        self.table.horizontalHeaderItem(len(COMBO_COLUMNS) - 2).setToolTip("Checked for sliding")
+        self.table.horizontalHeaderItem(len(COMBO_COLUMNS) - 1).setToolTip("Checked for bearing")
+        header = self.table.horizontalHeader()
+        header.setSectionResizeMode(QHeaderView.ResizeMode.ResizeToContents)
+        header.setSectionResizeMode(0, QHeaderView.ResizeMode.Stretch)
+        self.table.verticalHeader().setDefaultSectionSize(20)
+        self.table.verticalHeader().hide()
+        self.table.setMinimumHeight(180)
+        self.message = QLabel(self)
+        self.message.setObjectName("fieldError")
+        self.message.setWordWrap(True)
+        self.message.hide()
+        self.add_button = QPushButton("+ combination")
+        self.remove_button = QPushButton("Delete")
+        buttons = QHBoxLayout()
+        buttons.addWidget(self.add_button)
+        buttons.addWidget(self.remove_button)
+        buttons.addStretch(1)
+        layout = QVBoxLayout(self)
+        layout.setContentsMargins(8, 0, 0, 0)
+        layout.addWidget(self.custom)
+        layout.addWidget(self.table)
+        layout.addWidget(self.message)
+        layout.addLayout(buttons)
+        self._refreshing = False
+        self._key: tuple | None = None
+        self.custom.toggled.connect(self._on_custom_toggled)
+        self.table.itemChanged.connect(self._on_item_changed)
+        self.add_button.clicked.connect(self._add)
+        self.remove_button.clicked.connect(self._remove)
+
+    def is_custom(self) -> bool:
+        return isinstance(get_at(self.document.raw, ("criteria", "combinations"), None), list)
+
+    def refresh(self) -> None:
+        doc = self.document
+        custom = self.is_custom()
+        key = (doc.project.criteria, custom)
+        if key == self._key:
+            return
+        self._key = key
+        combos = combinations_of(doc.project.criteria)
+        self._refreshing = True
+        try:
+            self.custom.setChecked(custom)
+            self.table.setRowCount(len(combos))
+            for row, combo in enumerate(combos):
+                cells = [combo.name] + [trim(combo.factor(LoadCase(c)), 4) if combo.factor(LoadCase(c)) != 0.0 else "" for c in COMBO_CASES]
+                for col, text in enumerate(cells):
+                    item = self.table.item(row, col) or QTableWidgetItem()
+                    if self.table.item(row, col) is None:
+                        self.table.setItem(row, col, item)
+                    item.setText(text)
+                    flags = Qt.ItemFlag.ItemIsEnabled | Qt.ItemFlag.ItemIsSelectable
+                    if custom:
+                        flags |= Qt.ItemFlag.ItemIsEditable
+                    item.setFlags(flags)
+                for k, check in enumerate(ALL_CHECKS):
+                    col = 1 + len(COMBO_CASES) + k
+                    item = self.table.item(row, col) or QTableWidgetItem()
+                    if self.table.item(row, col) is None:
+                        self.table.setItem(row, col, item)
+                    flags = Qt.ItemFlag.ItemIsEnabled | Qt.ItemFlag.ItemIsSelectable
+                    if custom:
+                        flags |= Qt.ItemFlag.ItemIsUserCheckable
+                    item.setFlags(flags)
+                    item.setCheckState(Qt.CheckState.Checked if check in combo.checks else Qt.CheckState.Unchecked)
+        finally:
+            self._refreshing = False
+        self.add_button.setEnabled(custom)
+        self.remove_button.setEnabled(custom)
+
+    def _preset_as_raw(self) -> list[dict[str, Any]]:
+        out = []
+        for combo in combinations_of(self.document.project.criteria):
+            out.append({
+                "name": combo.name,
+                "factors": {case.value: factor for case, factor in combo.factors},
+                "checks": [c.value for c in ALL_CHECKS if c in combo.checks],
+            })
+        return out
+
+    def _on_custom_toggled(self, on: bool) -> None:
+        if self._refreshing or on == self.is_custom():
+            return
+        doc = self.document
+        message = doc.push(commands.use_custom_combinations(doc, self._preset_as_raw() if on else None))
+        self._show(message)
+        self.refresh()
+
+    def _show(self, message: str | None) -> None:
+        self.message.setText(message or "")
+        self.message.setVisible(bool(message))
+
+    def _on_item_changed(self, item: QTableWidgetItem) -> None:
+        if self._refreshing or not self.is_custom():
+            return
+        message = self.edit_cell(item.row(), item.column(), item.text(), item.checkState() == Qt.CheckState.Checked)
+        self._show(f"Row {item.row() + 1}: {message} (the previous value is kept)" if message else None)
+        self.refresh()
+
+    def edit_cell(self, row: int, col: int, text: str, checked: bool = False) -> str | None:
+        doc = self.document
+        base = ("criteria", "combinations", row)
+        if col == 0:
+            return doc.push(commands.SetField(doc, (*base, "name"), text.strip(), text="Rename combination"))
+        if col <= len(COMBO_CASES):
+            case = COMBO_CASES[col - 1]
+            if not text.strip():
+                value: Any = commands.DELETE
+            else:
+                try:
+                    value = parse_number(text.strip())
+                except InputError as err:
+                    return err.problem
+            return doc.push(commands.SetField(doc, (*base, "factors", case), value, text=f"Set factor on {case}"))
+        key = _CHECK_KEYS[col - 1 - len(COMBO_CASES)]
+        checks = list(get_at(doc.raw, (*base, "checks"), list(_CHECK_KEYS)))
+        if checked and key not in checks:
+            checks.append(key)
+        elif not checked and key in checks:
+            checks.remove(key)
+        checks = [k for k in _CHECK_KEYS if k in checks]
+        return doc.push(commands.SetField(doc, (*base, "checks"), checks, text="Set checks of combination"))
+
+    def _add(self) -> None:
+        doc = self.document
+        n = len(get_at(doc.raw, ("criteria", "combinations"), []))
+        change = commands.InsertItem(("criteria", "combinations"), n, {"name": f"combination {n + 1}", "factors": {"D": 1.0}})
+        self._show(doc.push(commands.RawEdit(doc, "Add combination", [change], focus_path=("criteria", "combinations"))))
+        self.refresh()
+
+    def _remove(self) -> None:
+        row = self.table.currentRow()
+        doc = self.document
+        if row < 0:
+            return
+        change = commands.RemoveItem(("criteria", "combinations"), row)
+        self._show(doc.push(commands.RawEdit(doc, "Delete combination", [change], focus_path=("criteria", "combinations"))))
+        self.refresh()
+
+
+# ---- the two forms -----------------------------------------------------------------------------------
+
+
+class WallForm(QWidget):
+    """Inputs of the selected wall."""
+
+    def __init__(self, document: ProjectDocument, parent: QWidget | None = None) -> None:
+        super().__init__(parent)
+        self.document = document
+        self.group = FieldGroup(document)
+        self.title = QLabel(self)
+        self.title.setObjectName("sectionTitle")
+        layout = QVBoxLayout(self)
+        layout.setContentsMargins(0, 0, 0, 0)
+        layout.setSpacing(0)
+        layout.addWidget(self.title)
+        self.sections: dict[str, Section] = {}
+        for name, specs, expanded in (("Wall", WALL_FIELDS, True), ("Stem", STEM_FIELDS, False), ("Footing", FOOTING_FIELDS, True)):
+            box, form = _form()
+            for spec in specs:
+                self.group.add(spec, form)
+            self.sections[name] = Section(name, box, expanded)
+            layout.addWidget(self.sections[name])
+        self.loads = LoadsEditor(document)
+        self.sections["Loads"] = Section("Loads", self.loads, True)
+        layout.addWidget(self.sections["Loads"])
+        box, form = _form()
+        for spec in SIZING_FIELDS:
+            self.group.add(spec, form)
+        self.sections["Sizing range"] = Section("Sizing range", box, False)
+        layout.addWidget(self.sections["Sizing range"])
+
+    def refresh(self, force: bool = False) -> None:
+        wall = self.document.current_wall
+        self.title.setText(f"Wall {wall.id}" + (f" — {wall.label}" if wall.label else ""))
+        self.group.refresh(force)
+        self.loads.refresh(clear_message=force)
+
+    def focus_order(self) -> list[QWidget]:
+        return [f.edit for f in self.group.fields[: len(WALL_FIELDS) + len(STEM_FIELDS) + len(FOOTING_FIELDS)]] + [self.loads.table] + [
+            f.edit for f in self.group.fields[len(WALL_FIELDS) + len(STEM_FIELDS) + len(FOOTING_FIELDS):]
+        ]
+
+
+METHODS = (("ASCE 7-16 ASD combinations", "asce7-16-asd"), ("Service loads with factors of safety", "service-fs"))
+BASES = (("gross", "gross"), ("net of overburden", "net"))
+
+
+class ProjectForm(QWidget):
+    """Project-wide inputs: soil, design criteria and combinations, title block."""
+
+    def __init__(self, document: ProjectDocument, parent: QWidget | None = None) -> None:
+        super().__init__(parent)
+        self.document = document
+        self.group = FieldGroup(document)
+        layout = QVBoxLayout(self)
+        layout.setContentsMargins(0, 0, 0, 0)
+        layout.setSpacing(0)
+        self.sections: dict[str, Section] = {}
+
+        box, form = _form()
+        for spec in SOIL_FIELDS[:1]:
+            self.group.add(spec, form)
+        self.basis = QComboBox()
+        for text, value in BASES:
+            self.basis.addItem(text, value)
+        self.basis.setToolTip("Whether the allowable is a gross pressure or net of the overburden at the footing base "
+                              "(then q_max - soil weight x (cover + D) is compared); the geotechnical report says which.")
+        form.addRow("Allowable is", self.basis)
+        for spec in SOIL_FIELDS[1:]:
+            self.group.add(spec, form)
+        self.sections["Soil"] = Section("Soil (all walls)", box, True)
+        layout.addWidget(self.sections["Soil"])
+
+        box, form = _form()
+        self.method = QComboBox()
+        for text, value in METHODS:
+            self.method.addItem(text, value)
+        self.method.setToolTip("ASCE 7-16 ASD: section 2.4.1 combinations with 2.4.5 / 12.4.2.3 for E, required ratios 1.0. "
+                               "Service loads: unfactored combinations with factors of safety 2.0 / 1.5 / 1.0 (common practice).")
+        form.addRow("Method", self.method)
+        for spec in CRITERIA_FIELDS:
+            self.group.add(spec, form)
+        self.sections["Criteria"] = Section("Design criteria (all walls)", box, True)
+        layout.addWidget(self.sections["Criteria"])
+
+        self.combinations = CombinationsEditor(document)
+        self.sections["Combinations"] = Section("Load combinations", self.combinations, False)
+        layout.addWidget(self.sections["Combinations"])
+
+        box, form = _form()
+        for spec in PROJECT_FIELDS:
+            self.group.add(spec, form)
+        self.sections["Project"] = Section("Project", box, False)
+        layout.addWidget(self.sections["Project"])
+
+        self.method.activated.connect(lambda _i: self._set_choice(("criteria", "method"), self.method.currentData(), "Set method"))
+        self.basis.activated.connect(lambda _i: self._set_choice(("soil", "bearing_basis"), self.basis.currentData(), "Set bearing basis"))
+
+    def _set_choice(self, path: tuple[str, ...], value: str, text: str) -> None:
+        doc = self.document
+        if get_at(doc.raw, path, None) == value:
+            return
+        doc.push(commands.SetField(doc, path, value, text=text))
+        self.refresh()
+
+    def refresh(self, force: bool = False) -> None:
+        project = self.document.project
+        self.group.refresh(force)
+        self.method.setCurrentIndex(max(0, self.method.findData(project.criteria.method.value)))
+        self.basis.setCurrentIndex(max(0, self.basis.findData(project.soil.bearing_basis.value)))
+        self.combinations.refresh()
+
+    def focus_order(self) -> list[QWidget]:
+        fields = self.group.fields
+        return [fields[0].edit, self.basis, *[f.edit for f in fields[1: len(SOIL_FIELDS)]], self.method,
+                *[f.edit for f in fields[len(SOIL_FIELDS):]]]

@@ -1,0 +1,225 @@
+"""The soil pressure under the footing for one combination and direction, on the elevation's x scale.
+
+The ordinates come from :func:`engine.soil_pressure.pressure_diagram`, fed with the case's vertical
+load N and eccentricity e as :func:`engine.results.check_wall` found them; the allowable is the
+case's own (with any increase for W or E). Nothing is recomputed here. Pressure is drawn downward
+from the underside of the footing, as it acts on the soil.
+"""
+
+from __future__ import annotations
+
+import math
+
+import numpy as np
+import pyqtgraph as pg
+from PySide6.QtCore import Qt
+from PySide6.QtGui import QColor
+from PySide6.QtWidgets import QComboBox, QWidget
+
+from engine.model import ALL_CHECKS, Wall
+from engine.results import WallResult
+from engine.soil_pressure import PressureDiagram, pressure_diagram
+from engine.units import Kind
+
+from ..style import ACCENT, ACCENT_LIGHT, GRAPHITE, MUTED, WARM, configure_pyqtgraph
+from .elevation import AXIS_WIDTH, _pen
+from .fields import LONG, PRESSURE, trim, unit_factor
+
+
+def case_title(result: WallResult, index: int) -> str:
+    case = result.table.cases[index]
+    name = case.combination.name
+    return name if case.direction.value == "none" else f"{name} ({case.direction.value})"
+
+
+class CasePicker(QComboBox):
+    """Choose the case the drawings show: a governing case (default: bearing) or any other."""
+
+    def __init__(self, parent: QWidget | None = None) -> None:
+        super().__init__(parent)
+        self.setObjectName("casePicker")
+        self.setToolTip("The combination and direction drawn in the elevation and the pressure diagram. "
+                        "Governing: the case with the lowest ratio / required for that check.")
+        self.setSizeAdjustPolicy(QComboBox.SizeAdjustPolicy.AdjustToMinimumContentsLengthWithIcon)
+        self.setMinimumContentsLength(34)
+        self._key: tuple[str, ...] = ()
+
+    def fill(self, result: WallResult, choice: tuple) -> None:
+        """Offer the governing case of each check and every case; select ``choice``."""
+        governing_titles = tuple(case_title(result, result.governing[c].case_index) for c in ALL_CHECKS)
+        cases = tuple(case_title(result, i) for i in range(len(result.table.cases)))
+        key = governing_titles + ("|",) + cases
+        self.blockSignals(True)
+        try:
+            if key != self._key:
+                self._key = key
+                self.clear()
+                for check, title in zip(ALL_CHECKS, governing_titles, strict=True):
+                    self.addItem(f"Governing {check.value}: {title}", ("governing", check))
+                self.insertSeparator(self.count())
+                for title, case in zip(cases, result.table.cases, strict=True):
+                    self.addItem(title, ("case", case.combination.name, case.direction.value))
+            for i in range(self.count()):
+                if self.itemData(i) == choice:
+                    self.setCurrentIndex(i)
+                    break
+        finally:
+            self.blockSignals(False)
+
+    def choice(self) -> tuple:
+        return self.currentData()
+
+
+class PressurePlot(pg.PlotWidget):
+    """Soil pressure block, allowable line, kern limits, contact length and the resultant (▼)."""
+
+    def __init__(self, parent=None) -> None:
+        configure_pyqtgraph()
+        super().__init__(parent)
+        self.setObjectName("pressurePlot")
+        plot = self.getPlotItem()
+        plot.setMenuEnabled(False)
+        plot.hideButtons()
+        plot.disableAutoRange()
+        plot.setMouseEnabled(x=True, y=False)
+        plot.invertY(True)
+        for name in ("left", "bottom"):
+            axis = plot.getAxis(name)
+            axis.enableAutoSIPrefix(False)
+            axis.setPen(_pen(MUTED))
+            axis.setTextPen(_pen(MUTED))
+        plot.getAxis("left").setWidth(AXIS_WIDTH)
+        self.setMinimumHeight(120)
+
+        fill = QColor(ACCENT_LIGHT)
+        fill.setAlpha(220)
+        self.block = pg.PlotDataItem(pen=_pen(ACCENT, 1.6), fillLevel=0.0, brush=fill)
+        plot.addItem(self.block)
+        self.base = pg.PlotCurveItem(pen=_pen(GRAPHITE, 1.2))
+        plot.addItem(self.base)
+        self.allowable = pg.InfiniteLine(angle=0, movable=False, pen=_pen(WARM, 1.3, Qt.PenStyle.DashLine))
+        plot.addItem(self.allowable)
+        self.allowable_label = pg.TextItem(color=WARM, anchor=(0, 1))
+        plot.addItem(self.allowable_label)
+        self.kern = [pg.InfiniteLine(angle=90, movable=False, pen=_pen(MUTED, 1.0, Qt.PenStyle.DotLine)) for _ in range(2)]
+        for line in self.kern:
+            plot.addItem(line)
+        self.kern_labels = [pg.TextItem("kern", color=MUTED, anchor=(1.0, 1.0)), pg.TextItem("kern", color=MUTED, anchor=(0.0, 1.0))]
+        for label in self.kern_labels:
+            plot.addItem(label)
+        self.contact = pg.PlotCurveItem(pen=_pen(GRAPHITE, 1.2), connect="pairs")
+        plot.addItem(self.contact)
+        self.contact_label = pg.TextItem(color=GRAPHITE, anchor=(0.5, 0))
+        plot.addItem(self.contact_label)
+        self.end_labels = [pg.TextItem(color=GRAPHITE, anchor=(1, 0.5)), pg.TextItem(color=GRAPHITE, anchor=(0, 0.5))]
+        for label in self.end_labels:
+            plot.addItem(label)
+        self.resultant = pg.ScatterPlotItem(size=12, symbol="t", pen=pg.mkPen(None), brush=pg.mkBrush(GRAPHITE))
+        plot.addItem(self.resultant)
+        self.notice = pg.TextItem(color=WARM, anchor=(0.5, 0.5))
+        plot.addItem(self.notice)
+        self._units = ""
+        self._y_range: tuple[float, float] | None = None
+        self.diagram: PressureDiagram | None = None
+        self.shown_q: np.ndarray = np.zeros(0)
+        self.shown_allowable = 0.0
+
+    def render(self, wall: Wall, result: WallResult, index: int, units: str) -> PressureDiagram:  # type: ignore[override]
+        """Draw the pressure of case ``index`` of ``result``; returns the engine's diagram."""
+        plot = self.getPlotItem()
+        q_unit = PRESSURE[1] if units == "SI" else PRESSURE[0]
+        l_unit = LONG[1] if units == "SI" else LONG[0]
+        if units != self._units:
+            plot.setLabel("left", f"soil pressure ({q_unit})")
+            plot.setLabel("bottom", f"along the footing ({l_unit})")
+            self._units = units
+        fq = unit_factor(q_unit, Kind.PRESSURE)
+        fl = unit_factor(l_unit, Kind.LENGTH)
+        ev = result.evaluation
+        vertical = float(ev.vertical[index])
+        eccentricity = float(ev.eccentricity[index])
+        diagram = pressure_diagram(vertical, eccentricity, result.width, result.length)
+        self.diagram = diagram
+        allowable = float(ev.allowable[index]) / fq
+        length = result.length / fl
+
+        x = diagram.x / fl
+        q = diagram.q / fq
+        self.shown_q = q
+        self.shown_allowable = allowable
+        self.block.setData(x, q)
+        self.base.setData([0.0, length], [0.0, 0.0])
+        peak = float(np.max(q)) if diagram.stable else 0.0
+        top = _nice_ceiling(max(peak, allowable) * 1.18)
+        y_range = (-0.22 * top, top * 1.45)
+        if y_range != self._y_range:  # a new range re-ticks the axis: only when the nice ceiling moves
+            self._y_range = y_range
+            plot.setYRange(*y_range, padding=0.0)
+
+        self.allowable.setValue(allowable)
+        increased = result.table.wind_or_seismic[index] and result.table.criteria.bearing_increase != 1.0
+        self.allowable_label.setText(f"allowable {trim(allowable, 1)} {q_unit}" + (" (increased)" if increased else ""))
+        self.allowable_label.setPos(length * 1.01, allowable)
+        k1, k2 = diagram.kern
+        self.kern[0].setValue(k1 / fl)
+        self.kern[1].setValue(k2 / fl)
+        self.kern_labels[0].setPos(k1 / fl, -0.01 * top)
+        self.kern_labels[1].setPos(k2 / fl, -0.01 * top)
+        if diagram.stable:
+            self.notice.setText("")
+            a, b = diagram.contact_start / fl, diagram.contact_end / fl
+            y = top * 1.12
+            self.contact.setData([a, b, a, a, b, b], [y, y, y - 0.04 * top, y + 0.04 * top, y - 0.04 * top, y + 0.04 * top])
+            full = abs((b - a) - length) < 1e-9 * max(length, 1.0)
+            self.contact_label.setText(f"contact {trim(b - a, 2)} {l_unit}" + (" (full length)" if full else f" of {trim(length, 2)} {l_unit}"))
+            self.contact_label.setPos(0.5 * (a + b), y + 0.03 * top)
+            q_start, q_end = float(q[1]), float(q[2])
+            self.end_labels[0].setText(f"{trim(q_start, 0 if units == 'US' else 1)} {q_unit}")
+            self.end_labels[0].setPos(a, q_start)
+            self.end_labels[1].setText(f"{trim(q_end, 0 if units == 'US' else 1)} {q_unit}")
+            self.end_labels[1].setPos(b, q_end)
+            self.resultant.setData([diagram.resultant_x / fl], [0.0])
+        else:
+            self.contact.setData([], [])
+            self.contact_label.setText("")
+            for label in self.end_labels:
+                label.setText("")
+            self.resultant.setData([], [])
+            self.notice.setText("No equilibrium on the soil: the resultant falls outside the footing (N ≤ 0 or |e| ≥ L/2)")
+            self.notice.setPos(0.5 * length, 0.5 * top)
+        return diagram
+
+    @staticmethod
+    def caption(result: WallResult, index: int, units: str) -> str:
+        """One line under the picker: N, e and where it sits relative to the kern (formatted results)."""
+        q_unit = PRESSURE[1] if units == "SI" else PRESSURE[0]
+        l_unit = LONG[1] if units == "SI" else LONG[0]
+        ev = result.evaluation
+        fl = unit_factor(l_unit, Kind.LENGTH)
+        e = float(ev.eccentricity[index])
+        length = result.length
+        if not bool(ev.stable[index]):
+            where = "no equilibrium"
+        elif float(ev.contact_length[index]) >= length * (1.0 - 1e-9):
+            where = "inside the kern: full contact"
+        else:
+            where = "beyond the kern: partial contact"
+        bearing = result.cases[index].bearing
+        q_text = ""
+        if bearing is not None and math.isfinite(bearing.q_max):
+            q_text = f"  q_max {trim(bearing.q_max / unit_factor(q_unit, Kind.PRESSURE), 0 if units == 'US' else 1)} {q_unit};"
+        force_unit = "kip" if units == "US" else "kN"
+        n = float(ev.vertical[index]) / unit_factor(force_unit, Kind.FORCE)
+        e_text = trim(e / fl, 2) if math.isfinite(e) else "∞"
+        return f"N {trim(n, 2)} {force_unit};  e {e_text} {l_unit} ({where});{q_text}"
+
+
+def _nice_ceiling(value: float) -> float:
+    """The next of 1, 1.5, 2, 3, 4, 5, 6, 8, 10 x 10^n at or above ``value`` (1.0 for nothing)."""
+    if not math.isfinite(value) or value <= 0.0:
+        return 1.0
+    power = 10.0 ** math.floor(math.log10(value))
+    for step in (1.0, 1.5, 2.0, 3.0, 4.0, 5.0, 6.0, 8.0, 10.0):
+        if step * power >= value * (1.0 - 1e-12):
+            return step * power
+    return 10.0 * power

@@ -1,0 +1,84 @@
+"""The footing schedule of all walls (engine.schedule rows), with copy and CSV export."""
+
+from __future__ import annotations
+
+from PySide6.QtCore import Qt, Signal
+from PySide6.QtGui import QColor, QGuiApplication
+from PySide6.QtWidgets import (
+    QAbstractItemView,
+    QHBoxLayout,
+    QHeaderView,
+    QLabel,
+    QPushButton,
+    QTableWidget,
+    QTableWidgetItem,
+    QVBoxLayout,
+    QWidget,
+)
+
+from engine.schedule import schedule_headers, schedule_rows
+
+from ..document import ProjectDocument
+from ..style import WARM
+
+
+class ScheduleView(QWidget):
+    """All walls, one row each: id, label, sizes, governing ratios, result."""
+
+    export_requested = Signal()
+
+    def __init__(self, document: ProjectDocument, parent: QWidget | None = None) -> None:
+        super().__init__(parent)
+        self.document = document
+        self.table = QTableWidget(self)
+        self.table.setObjectName("scheduleTable")
+        self.table.setEditTriggers(QAbstractItemView.EditTrigger.NoEditTriggers)
+        self.table.setSelectionBehavior(QAbstractItemView.SelectionBehavior.SelectRows)
+        self.table.verticalHeader().hide()
+        self.table.verticalHeader().setDefaultSectionSize(20)
+        self.table.horizontalHeader().setSectionResizeMode(QHeaderView.ResizeMode.ResizeToContents)
+        self.copy_button = QPushButton("Copy")
+        self.copy_button.setToolTip("Copy the schedule (tab-separated, with headers) to paste into a spreadsheet")
+        self.export_button = QPushButton("Export CSV…")
+        self.export_button.setToolTip("Write the schedule as a CSV file")
+        note = QLabel("Sizes as entered; ratios are the governing case of each check.")
+        note.setObjectName("hint")
+        buttons = QHBoxLayout()
+        buttons.addWidget(note, 1)
+        buttons.addWidget(self.copy_button)
+        buttons.addWidget(self.export_button)
+        layout = QVBoxLayout(self)
+        layout.setContentsMargins(4, 4, 4, 4)
+        layout.addLayout(buttons)
+        layout.addWidget(self.table, 1)
+        self.copy_button.clicked.connect(self.copy)
+        self.export_button.clicked.connect(self.export_requested)
+        self.headers: list[str] = []
+        self.rows: list[list[str]] = []
+
+    def refresh(self) -> None:
+        doc = self.document
+        results = [doc.results[w.id] for w in doc.project.walls]
+        self.headers = schedule_headers(doc.units)
+        self.rows = schedule_rows(doc.project, results)
+        self.table.setColumnCount(len(self.headers))
+        self.table.setHorizontalHeaderLabels(self.headers)
+        self.table.setRowCount(len(self.rows))
+        for r, row in enumerate(self.rows):
+            for c, text in enumerate(row):
+                item = self.table.item(r, c)
+                if item is None:
+                    item = QTableWidgetItem()
+                    self.table.setItem(r, c, item)
+                item.setText(text)
+                item.setForeground(QColor(WARM) if text == "FAIL" else self.palette().text().color())
+                if c >= 2:
+                    item.setTextAlignment((Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter) if c < len(row) - 1 else Qt.AlignmentFlag.AlignCenter)
+
+    def tsv(self) -> str:
+        lines = ["\t".join(self.headers)] + ["\t".join(row) for row in self.rows]
+        return "\n".join(lines) + "\n"
+
+    def copy(self) -> None:
+        self.refresh()
+        QGuiApplication.clipboard().setText(self.tsv())

@@ -1,0 +1,91 @@
+"""Fixtures of the window tests: a real MainWindow on the demo project, isolated from user settings.
+
+Message boxes are replaced by recorders for every test (a modal box would block an offscreen run);
+a test that needs a particular answer sets ``dialogs.answer``.
+"""
+
+from __future__ import annotations
+
+import shutil
+from pathlib import Path
+
+import pytest
+from PySide6.QtCore import QSettings
+from PySide6.QtWidgets import QFileDialog, QMessageBox
+
+from engine.resources import resource_path
+
+
+class Dialogs:
+    """Records message boxes and file dialogs, and answers them."""
+
+    def __init__(self) -> None:
+        self.questions: list[str] = []
+        self.warnings: list[str] = []
+        self.abouts: list[str] = []
+        self.answer = QMessageBox.StandardButton.Discard
+        self.save_path: str = ""
+        self.open_path: str = ""
+
+    def question(self, _parent, title, text, *args, **kwargs):
+        self.questions.append(f"{title}: {text}")
+        return self.answer
+
+    def warning(self, _parent, title, text, *args, **kwargs):
+        self.warnings.append(f"{title}: {text}")
+        return QMessageBox.StandardButton.Ok
+
+    def about(self, _parent, title, text):
+        self.abouts.append(f"{title}: {text}")
+
+
+@pytest.fixture(autouse=True)
+def dialogs(monkeypatch: pytest.MonkeyPatch) -> Dialogs:
+    d = Dialogs()
+    monkeypatch.setattr(QMessageBox, "question", d.question)
+    monkeypatch.setattr(QMessageBox, "warning", d.warning)
+    monkeypatch.setattr(QMessageBox, "about", d.about)
+    monkeypatch.setattr(QFileDialog, "getSaveFileName", lambda *a, **k: (d.save_path, ""))
+    monkeypatch.setattr(QFileDialog, "getOpenFileName", lambda *a, **k: (d.open_path, ""))
+    return d
+
+
+@pytest.fixture
+def settings(tmp_path: Path) -> QSettings:
+    """A settings file of the test's own (never the user's)."""
+    return QSettings(str(tmp_path / "kernline-test-settings.ini"), QSettings.Format.IniFormat)
+
+
+@pytest.fixture
+def demo_file(tmp_path: Path) -> Path:
+    """A copy of the demo project in the test's folder."""
+    target = tmp_path / "clinic.kernline"
+    shutil.copyfile(resource_path("demo.kernline"), target)
+    return target
+
+
+@pytest.fixture
+def make_window(qtbot, tmp_path: Path, settings: QSettings):
+    """Build windows sharing the test's settings and recovery folder."""
+    from app.main_window import MainWindow
+
+    made = []
+
+    def make(path: str | None = None, demo: bool = True, **kwargs):
+        window = MainWindow(settings=settings, recovery_dir=tmp_path / "recovery", **kwargs)
+        qtbot.addWidget(window)
+        window.start(path, demo=demo and path is None)
+        window.show()
+        qtbot.waitExposed(window)
+        made.append(window)
+        return window
+
+    yield make
+    for window in made:
+        window.runner.wait()
+
+
+@pytest.fixture
+def window(make_window):
+    """The window with the demo project open."""
+    return make_window()

@@ -1,0 +1,44 @@
+"""The US / SI switch changes every displayed value and the diagram axes, and round-trips exactly."""
+
+from __future__ import annotations
+
+import pytest
+from window_helpers import demo_raw, field, select_wall
+
+
+def _texts(window) -> list[str]:
+    return [f.edit.text() for g in (window.wall_form.group, window.project_form.group) for f in g.fields]
+
+
+def test_switch_to_si_and_back(qtbot, window):
+    doc = window.document
+    select_wall(window, "C3")
+    us_texts = _texts(window)
+    us_verdict = window.verdict.texts()
+    model = doc.project.walls
+    window.si_action.trigger()
+    assert doc.units == "SI"
+    assert field(window, "footing", "width").edit.text() == "406.4 mm"  # 16 in
+    assert field(window, "length").edit.text() == "4.877 m"  # 16 ft
+    assert field(window, "soil", "allowable_bearing").edit.text() == "95.761 kPa"  # 2000 psf
+    assert "(m)" in window.drawings.elevation.getPlotItem().getAxis("bottom").labelText
+    assert "kPa" in window.drawings.pressure.getPlotItem().getAxis("left").labelText
+    assert window.drawings.pressure.shown_allowable == pytest.approx(95.76052, rel=1e-5)
+    assert "kN/m" in window.wall_form.loads.table.item(0, 2).text()
+    assert "m" in window.walls_view.tree.topLevelItem(0).text(1)
+    assert doc.project.walls == model  # the SI values inside do not change
+    assert window.verdict.texts() == us_verdict  # ratios do not depend on units
+    # a bare number now means millimetres
+    f = field(window, "footing", "width")
+    f.edit.setText("500")
+    f.edit.editingFinished.emit()
+    assert doc.raw["walls"][2]["footing"]["width"] == "500 mm"
+    doc.undo_stack.undo()
+    window.us_action.trigger()
+    assert doc.units == "US"
+    assert _texts(window) == us_texts
+    assert "(ft)" in window.drawings.elevation.getPlotItem().getAxis("bottom").labelText
+    assert doc.raw == demo_raw()
+    doc.undo_stack.undo()
+    doc.undo_stack.undo()
+    assert doc.undo_stack.index() == 0

@@ -1,0 +1,86 @@
+"""The walls list: add, duplicate, rename, delete and reorder, each one undoable command, and a
+pass/fail mark that reads without colour."""
+
+from __future__ import annotations
+
+from window_helpers import demo_raw, select_wall
+
+
+def _ids(window) -> list[str]:
+    return [w.id for w in window.document.project.walls]
+
+
+def _row_texts(window, row: int) -> list[str]:
+    item = window.walls_view.tree.topLevelItem(row)
+    return [item.text(c) for c in range(3)]
+
+
+def test_the_list_shows_size_and_a_textual_mark(window):
+    """C3 fails bearing in the demo: its row says ✗ ... NG; N1 passes: ✓ ... OK (engine verdicts)."""
+    ids = _ids(window)
+    for row, wall_id in enumerate(ids):
+        texts = _row_texts(window, row)
+        assert texts[0] == wall_id
+        result = window.document.results[wall_id]
+        assert texts[2].endswith("OK" if result.passes else "NG")
+        assert texts[2].startswith("✓" if result.passes else "✗")
+    assert _row_texts(window, ids.index("C3"))[2] == f"✗ {window.document.results['C3'].worst.normalized:.2f} NG"
+    assert _row_texts(window, 0)[1] == "1'-6\" × 1'-0\""
+
+
+def test_add_duplicate_rename_delete_reorder_and_undo_each(qtbot, window):
+    doc = window.document
+    window.walls_view.add()
+    assert _ids(window) == ["N1", "S2", "C3", "E4", "W1"]
+    assert doc.current_wall.id == "W1"
+    assert window.wall_form.title.text().startswith("Wall W1")
+
+    select_wall(window, "C3")
+    window.walls_view.duplicate()
+    assert _ids(window) == ["N1", "S2", "C3", "C3-2", "E4", "W1"]
+    assert doc.current_wall.loads == doc.project.walls[2].loads
+
+    item = window.walls_view.tree.topLevelItem(3)
+    item.setText(0, "C5")  # the inline edit of the id column
+    assert _ids(window) == ["N1", "S2", "C3", "C5", "E4", "W1"]
+
+    assert window.walls_view.rename(3, "N1") is not None  # a used id is refused
+    assert "used by another wall" in window.walls_view.message.text()
+    assert _ids(window)[3] == "C5"
+
+    window.walls_view.move(-1)
+    assert _ids(window) == ["N1", "S2", "C5", "C3", "E4", "W1"]
+    assert doc.current_wall.id == "C5"
+
+    window.walls_view.delete()
+    assert _ids(window) == ["N1", "S2", "C3", "E4", "W1"]
+
+    assert doc.undo_stack.count() == 5
+    for _ in range(5):
+        doc.undo_stack.undo()
+    assert doc.raw == demo_raw()
+    assert window.walls_view.tree.topLevelItemCount() == 4
+    for _ in range(5):
+        doc.undo_stack.redo()
+    assert _ids(window) == ["N1", "S2", "C3", "E4", "W1"]
+
+
+def test_the_last_wall_cannot_be_deleted(window):
+    doc = window.document
+    for _ in range(3):
+        window.walls_view.delete()
+    assert len(doc.project.walls) == 1
+    window.walls_view.delete()
+    assert len(doc.project.walls) == 1
+    assert "at least one wall" in window.walls_view.message.text()
+
+
+def test_selecting_a_wall_shows_its_inputs_and_drawings(qtbot, window):
+    """Clicking E4 in the list: the form shows its stem, the elevation draws its stem."""
+    tree = window.walls_view.tree
+    tree.setCurrentItem(tree.topLevelItem(3))
+    doc = window.document
+    assert doc.current_wall.id == "E4"
+    assert window.wall_form.group.field_at(("walls", 3, "stem", "height")).edit.text() == "30 in"
+    assert window.drawings.elevation.stem.isVisible()
+    assert window.verdict.headline.text().startswith("Wall E4")
