@@ -4,14 +4,19 @@ Layout (ours): the walls list on the left; the selected wall's inputs and the pr
 criteria in the middle; on the right the elevation above the soil pressure (one x scale), the verdict,
 and tabs for every case, the design map and the schedule. A caution line stays at the bottom.
 
-:func:`launch` is what ``kernline``, ``kernline open FILE`` and ``kernline demo`` call.
+:func:`launch` is what ``kernline``, ``kernline open FILE`` and ``kernline demo`` call. Started with
+neither a file nor the demo, the window shows a welcome panel in place of the editor until a project
+is open. File > Export calculation package writes the PDF on a worker (:class:`runner.PackageWriter`).
 """
 
 from __future__ import annotations
 
 import json
+import os
+import re
 import sys
 import time
+from collections.abc import Mapping
 from pathlib import Path
 from typing import Any
 
@@ -23,8 +28,10 @@ from PySide6.QtWidgets import (
     QLabel,
     QMainWindow,
     QMessageBox,
+    QProgressBar,
     QScrollArea,
     QSplitter,
+    QStackedWidget,
     QTabWidget,
     QVBoxLayout,
     QWidget,
@@ -38,7 +45,7 @@ from engine.units import format_length
 
 from . import commands
 from .document import ProjectDocument
-from .runner import SizingBatch, SizingRunner
+from .runner import PackageOutcome, PackageWriter, SizingBatch, SizingRunner
 from .style import STYLE_SHEET, configure_pyqtgraph
 from .views.cases import CasesTable
 from .views.design_map import DesignMapView
@@ -47,12 +54,31 @@ from .views.forms import ProjectForm, WallForm
 from .views.schedule import ScheduleView
 from .views.verdict import VerdictView
 from .views.walls import WallsView
+from .views.welcome import WelcomePanel
 
 AUTOSAVE_MS = 60_000
 RECENT_LIMIT = 8
 RECOVERY_NAME = "autosave.kernline-recovery"
 RECOVERY_FORMAT = "kernline-recovery"
-FILE_FILTER = f"Kernline project (*{EXTENSION});;All files (*)"
+FILE_FILTER = f"Kernline projects (*{EXTENSION});;All files (*)"
+PDF_FILTER = "PDF (*.pdf);;All files (*)"
+EXIT_AFTER_VARIABLE = "KERNLINE_EXIT_AFTER_MS"  # the frozen build's smoke check: quit this many ms after showing
+REFERENCES = "ASCE 7-16 (load combinations, section 2.4.1); IBC 2021 (sections 1605 and 1806); Das and Bowles (soil pressure under eccentric load)"
+
+
+def exit_after_ms(environ: Mapping[str, str] | None = None) -> int | None:
+    """The smoke hook's delay from ``KERNLINE_EXIT_AFTER_MS``: a positive whole number of ms, else None."""
+    text = (os.environ if environ is None else environ).get(EXIT_AFTER_VARIABLE, "").strip()
+    if not text.isdigit():
+        return None
+    value = int(text)
+    return value if value > 0 else None
+
+
+def package_file_name(project_name: str) -> str:
+    """A file name for the PDF from the project's name: characters file systems refuse become "-"."""
+    stem = re.sub(r'[\\/:*?"<>|\x00-\x1f]+', "-", project_name).strip(" .-") or "calculation-package"
+    return stem + ".pdf"
 
 
 def default_recovery_dir() -> Path:
@@ -70,6 +96,7 @@ class MainWindow(QMainWindow):
         self.recovery_dir = Path(recovery_dir) if recovery_dir is not None else default_recovery_dir()
         self.document = ProjectDocument(self)
         self.runner = SizingRunner(self)
+        self.package_writer = PackageWriter(self)
         self.setObjectName("mainWindow")
         self.setStyleSheet(STYLE_SHEET)
         self.resize(1480, 940)
@@ -141,15 +168,29 @@ class MainWindow(QMainWindow):
         self.caution = QLabel(CAUTION)
         self.caution.setObjectName("caution")
         self.caution.setWordWrap(True)
+        self.welcome = WelcomePanel()
+        self.stack = QStackedWidget()
+        self.stack.addWidget(main)
+        self.stack.addWidget(self.welcome)
+        self.stack.setCurrentWidget(main)
         centre = QWidget()
         centre.setObjectName("centre")
         layout = QVBoxLayout(centre)
         layout.setContentsMargins(0, 0, 0, 0)
         layout.setSpacing(0)
-        layout.addWidget(main, 1)
+        layout.addWidget(self.stack, 1)
         layout.addWidget(self.caution)
         self.setCentralWidget(centre)
         self.statusBar().setSizeGripEnabled(True)
+        self.busy_label = QLabel()
+        self.busy_bar = QProgressBar()
+        self.busy_bar.setRange(0, 0)  # no steps to count: a moving bar says "working"
+        self.busy_bar.setMaximumWidth(140)
+        self.busy_bar.setMaximumHeight(14)
+        self.busy_bar.setTextVisible(False)
+        for w in (self.busy_label, self.busy_bar):
+            self.statusBar().addPermanentWidget(w)
+            w.hide()
 
     def _action(self, text: str, slot: Any, shortcut: QKeySequence | str | None = None, tip: str = "") -> QAction:
         action = QAction(text, self)
@@ -169,6 +210,9 @@ class MainWindow(QMainWindow):
         self.save_action = self._action("&Save", self.save, Std.Save, "Save the project")
         self.save_as_action = self._action("Save &As…", self.save_as, Std.SaveAs, "Save the project under a new name")
         self.export_action = self._action("Export &schedule (CSV)…", self.export_schedule, None, "Write the footing schedule as CSV")
+        self.export_pdf_action = self._action(
+            "&Export calculation package (PDF)…", self.export_package, "Ctrl+E",
+            "Write the calculation package (design basis, every wall's checks, appendix) as a PDF")
         self.quit_action = self._action("&Quit", self.close, Std.Quit, "Close Kernline")
         self.undo_action = self.document.undo_stack.createUndoAction(self, "&Undo")
         self.undo_action.setShortcut(QKeySequence(Std.Undo))
@@ -199,7 +243,10 @@ class MainWindow(QMainWindow):
             file_menu.addAction(a)
         self.recent_menu = file_menu.addMenu("Open &Recent")
         file_menu.addSeparator()
-        for a in (self.save_action, self.save_as_action, self.export_action):
+        for a in (self.save_action, self.save_as_action):
+            file_menu.addAction(a)
+        file_menu.addSeparator()
+        for a in (self.export_pdf_action, self.export_action):
             file_menu.addAction(a)
         file_menu.addSeparator()
         file_menu.addAction(self.quit_action)
@@ -218,7 +265,7 @@ class MainWindow(QMainWindow):
         help_menu = bar.addMenu("&Help")
         help_menu.addAction(self.about_action)
 
-        tools = self.addToolBar("Main")
+        tools = self.toolbar = self.addToolBar("Main")
         tools.setObjectName("mainToolbar")
         tools.setMovable(False)
         tools.setToolButtonStyle(Qt.ToolButtonStyle.ToolButtonTextOnly)
@@ -265,6 +312,11 @@ class MainWindow(QMainWindow):
         self.design_map.size_requested.connect(self.size_current)
         self.design_map.size_all_requested.connect(self.size_all)
         self.schedule.export_requested.connect(self.export_schedule)
+        self.package_writer.finished.connect(self._on_package_written)
+        self.welcome.demo_requested.connect(self.open_demo)
+        self.welcome.new_requested.connect(self.new_project)
+        self.welcome.open_requested.connect(self.open_dialog)
+        self.welcome.recent_requested.connect(self._open_recent)
 
     def _set_tab_order(self) -> None:
         chain: list[QWidget] = [self.walls_view.tree, *self.wall_form.focus_order(), *self.project_form.focus_order(),
@@ -276,6 +328,7 @@ class MainWindow(QMainWindow):
 
     def _on_document_replaced(self) -> None:
         self._rendered_index = -1
+        self.show_editor()
         self.wall_form.refresh(force=True)
         self.project_form.refresh(force=True)
         self._set_tab_order()
@@ -426,15 +479,49 @@ class MainWindow(QMainWindow):
 
     # ---- files ---------------------------------------------------------------------------------
 
-    def start(self, path: str | None = None, demo: bool = False) -> None:
-        """What the window opens with: a recovered project, the file, the demo, or a new project."""
-        if self.offer_recovery():
+    def start(self, path: str | None = None, demo: bool = False, recover: bool = True) -> None:
+        """What the window opens with: a recovered project, the file, the demo, or else the welcome panel.
+
+        ``recover=False`` skips the offer to restore autosaved work (the smoke check must not wait on a question).
+        """
+        if recover and self.offer_recovery():
             return
         if path:
             if self.open_path(path, confirm=False):
                 return
         if demo:
             self.open_demo(confirm=False)
+            return
+        self.show_welcome()
+
+    # ---- welcome panel -------------------------------------------------------------------------
+
+    @property
+    def welcome_shown(self) -> bool:
+        return self.stack.currentWidget() is self.welcome
+
+    def show_welcome(self) -> None:
+        """Put the welcome panel in place of the editor (until a project is opened or started)."""
+        self.welcome.set_recent(self.recent_files())
+        self.stack.setCurrentWidget(self.welcome)
+        self.toolbar.hide()  # its buttons act on a project; the panel offers what there is to do
+        self._enable_project_actions(False)
+        self.welcome.demo_button.setFocus()
+
+    def show_editor(self) -> None:
+        if self.stack.currentWidget() is not self.main_splitter:
+            self.stack.setCurrentWidget(self.main_splitter)
+            self.toolbar.show()
+        self._enable_project_actions(True)
+
+    def _enable_project_actions(self, enabled: bool) -> None:
+        """Actions that act on an open project are off while the welcome panel stands in for it."""
+        for a in (self.save_action, self.save_as_action, self.export_action, self.export_pdf_action, self.size_action,
+                  self.size_all_action, self.add_wall_action, self.duplicate_action, self.rename_action,
+                  self.delete_wall_action, self.us_action, self.si_action):
+            a.setEnabled(enabled)
+        if enabled and self.package_writer.busy:
+            self.export_pdf_action.setEnabled(False)
 
     def confirm_discard(self) -> bool:
         """Ask before unsaved changes would be lost: True when it is fine to go on."""
@@ -493,7 +580,7 @@ class MainWindow(QMainWindow):
         path, _ = QFileDialog.getSaveFileName(self, "Save the project as", suggestion, FILE_FILTER)
         if not path:
             return False
-        if not Path(path).suffix:
+        if not Path(path).suffix:  # typed without an extension: the project file's own
             path += EXTENSION
         return self._save_to(Path(path))
 
@@ -522,6 +609,60 @@ class MainWindow(QMainWindow):
         self.statusBar().showMessage(f"Wrote the schedule to {path}", 5000)
         return True
 
+    # ---- calculation package -------------------------------------------------------------------
+
+    def invalid_inputs(self) -> list[str]:
+        """Labels of the fields that hold text the engine refused (the model keeps their last valid value)."""
+        fields = self.wall_form.group.fields + self.project_form.group.fields
+        return [f.spec.label for f in fields if f.invalid]
+
+    def export_package(self) -> bool:
+        """Ask where, then write the calculation package of the current model on a worker.
+
+        Returns True when writing has started; the outcome is reported when it ends.
+        """
+        doc = self.document
+        if self.package_writer.busy:
+            self.statusBar().showMessage("A calculation package is still being written.", 5000)
+            return False
+        name = package_file_name(doc.project.info.name.strip())
+        folder = doc.path.parent if doc.path else Path(self.settings.value("last_export_folder", "") or Path.home())
+        path, _ = QFileDialog.getSaveFileName(self, "Export the calculation package", str(folder / name), PDF_FILTER)
+        if not path:
+            return False
+        if not Path(path).suffix:
+            path += ".pdf"
+        target = Path(path)
+        # the model in force: an edit the engine refused never reached it, so it is the last valid one
+        self._export_invalid = self.invalid_inputs()
+        self.package_writer.write(doc.raw, doc.project, target)
+        self.export_pdf_action.setEnabled(False)
+        self._set_busy(f"Writing the calculation package to {target.name}…")
+        return True
+
+    _export_invalid: list[str] = []
+
+    def _set_busy(self, text: str | None) -> None:
+        self.busy_label.setText(text or "")
+        self.busy_label.setVisible(bool(text))
+        self.busy_bar.setVisible(bool(text))
+
+    def _on_package_written(self, outcome: PackageOutcome) -> None:
+        self._set_busy(None)
+        self.export_pdf_action.setEnabled(not self.welcome_shown)
+        if not outcome.ok:
+            self.statusBar().showMessage("The calculation package was not written.", 8000)
+            QMessageBox.warning(self, "Cannot write the calculation package", f"{outcome.path}\n\n{outcome.error}")
+            return
+        self.settings.setValue("last_export_folder", str(outcome.path.parent))
+        walls = f"{outcome.walls} wall" + ("s" if outcome.walls != 1 else "")
+        text = f"Wrote the calculation package ({walls}) to\n{outcome.path}\nin {outcome.seconds:.1f} s."
+        if self._export_invalid:
+            text += ("\n\nNot in the package: " + ", ".join(self._export_invalid) + " — the text typed there is not valid, "
+                     "so the package shows the last valid values.")
+        self.statusBar().showMessage(f"Wrote the calculation package to {outcome.path}", 8000)
+        QMessageBox.information(self, "Calculation package written", text)
+
     # ---- recent files --------------------------------------------------------------------------
 
     def recent_files(self) -> list[str]:
@@ -545,6 +686,8 @@ class MainWindow(QMainWindow):
             action.setToolTip(f)
             action.triggered.connect(lambda _c=False, p=f: self._open_recent(p))
         self.recent_menu.setEnabled(bool(files))
+        if hasattr(self, "welcome"):
+            self.welcome.set_recent(files)
 
     def _open_recent(self, path: str) -> None:
         if not Path(path).is_file():
@@ -620,9 +763,10 @@ class MainWindow(QMainWindow):
         QMessageBox.about(
             self, "About Kernline",
             f"<h3>Kernline {__version__}</h3>"
-            "<p>Global stability of concrete strip footings under shear walls: overturning, sliding and soil "
-            "bearing (with soil pressure beyond the kern) under ASCE 7-16 ASD load combinations in both lateral "
-            "directions, and automatic sizing on a grid of widths and thicknesses.</p>"
+            "<p>Kernline checks concrete strip footings under shear walls for overturning, sliding and soil bearing "
+            "(with soil pressure beyond the kern) under ASCE 7-16 ASD load combinations in both lateral directions, "
+            "and sizes them on a grid of widths and thicknesses.</p>"
+            f"<p><b>Basis.</b> {REFERENCES}.</p>"
             f"<p><b>Caution.</b> {CAUTION}</p>",
         )
 
@@ -632,16 +776,33 @@ class MainWindow(QMainWindow):
             return
         self.autosave_timer.stop()
         self.runner.wait()
+        self.package_writer.wait()
         self.remove_recovery()
         event.accept()
 
+    def quit_for_smoke_check(self) -> None:
+        """End the run with exit code 0 without questions (nothing is saved; an autosave is kept)."""
+        self.autosave_timer.stop()
+        self.runner.wait()
+        self.package_writer.wait()
+        self.hide()
+        QApplication.instance().exit(0)
+
 
 def launch(path: str | None = None, demo: bool = False) -> int:
-    """Create the application, show the window (with ``path`` or the demo) and run until it closes."""
+    """Create the application, show the window (with ``path``, the demo, or the welcome panel) and run until it closes.
+
+    When ``KERNLINE_EXIT_AFTER_MS`` holds a positive whole number, the run ends with exit code 0 that many
+    milliseconds after the window is shown, without the recovery question (the frozen build's smoke check);
+    any other value is ignored.
+    """
     app = QApplication.instance() or QApplication(sys.argv[:1])
     app.setOrganizationName("Kernline")
     app.setApplicationName("Kernline")
+    smoke_ms = exit_after_ms()
     window = MainWindow()
-    window.start(path, demo)
+    window.start(path, demo, recover=smoke_ms is None)
     window.show()
+    if smoke_ms is not None:
+        QTimer.singleShot(smoke_ms, window.quit_for_smoke_check)
     return int(app.exec())

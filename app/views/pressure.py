@@ -25,6 +25,8 @@ from ..style import ACCENT, ACCENT_LIGHT, GRAPHITE, MUTED, WARM, configure_pyqtg
 from .elevation import AXIS_WIDTH, _pen
 from .fields import LONG, PRESSURE, trim, unit_factor
 
+MIN_HEIGHT = 170  # px
+
 
 def case_title(result: WallResult, index: int) -> str:
     case = result.table.cases[index]
@@ -89,7 +91,9 @@ class PressurePlot(pg.PlotWidget):
             axis.setPen(_pen(MUTED))
             axis.setTextPen(_pen(MUTED))
         plot.getAxis("left").setWidth(AXIS_WIDTH)
-        self.setMinimumHeight(120)
+        # tall enough for the kern labels above the footing line and the contact bar below the
+        # block, also when the design map tab takes half of the column
+        self.setMinimumHeight(MIN_HEIGHT)
 
         fill = QColor(ACCENT_LIGHT)
         fill.setAlpha(220)
@@ -104,7 +108,8 @@ class PressurePlot(pg.PlotWidget):
         self.kern = [pg.InfiniteLine(angle=90, movable=False, pen=_pen(MUTED, 1.0, Qt.PenStyle.DotLine)) for _ in range(2)]
         for line in self.kern:
             plot.addItem(line)
-        self.kern_labels = [pg.TextItem("kern", color=MUTED, anchor=(1.0, 1.0)), pg.TextItem("kern", color=MUTED, anchor=(0.0, 1.0))]
+        # the labels hang from the top edge of the view (anchor at their top), so a short plot never clips them
+        self.kern_labels = [pg.TextItem("kern", color=MUTED, anchor=(1.0, 0.0)), pg.TextItem("kern", color=MUTED, anchor=(0.0, 0.0))]
         for label in self.kern_labels:
             plot.addItem(label)
         self.contact = pg.PlotCurveItem(pen=_pen(GRAPHITE, 1.2), connect="pairs")
@@ -163,8 +168,8 @@ class PressurePlot(pg.PlotWidget):
         k1, k2 = diagram.kern
         self.kern[0].setValue(k1 / fl)
         self.kern[1].setValue(k2 / fl)
-        self.kern_labels[0].setPos(k1 / fl, -0.01 * top)
-        self.kern_labels[1].setPos(k2 / fl, -0.01 * top)
+        self.kern_labels[0].setPos(k1 / fl, y_range[0])
+        self.kern_labels[1].setPos(k2 / fl, y_range[0])
         if diagram.stable:
             self.notice.setText("")
             a, b = diagram.contact_start / fl, diagram.contact_end / fl
