@@ -569,12 +569,19 @@ class MainWindow(QMainWindow):
         self.statusBar().showMessage(f"Opened {path}", 5000)
         return True
 
+    def flush_typing(self) -> None:
+        """Apply any field whose typing has not yet paused long enough to be applied."""
+        for field in self.wall_form.group.fields + self.project_form.group.fields:
+            field.flush()
+
     def save(self) -> bool:
+        self.flush_typing()
         if self.document.path is None:
             return self.save_as()
         return self._save_to(self.document.path)
 
     def save_as(self) -> bool:
+        self.flush_typing()
         doc = self.document
         suggestion = str(doc.path) if doc.path else (doc.project.info.name.strip() or "project") + EXTENSION
         path, _ = QFileDialog.getSaveFileName(self, "Save the project as", suggestion, FILE_FILTER)
@@ -621,6 +628,7 @@ class MainWindow(QMainWindow):
 
         Returns True when writing has started; the outcome is reported when it ends.
         """
+        self.flush_typing()
         doc = self.document
         if self.package_writer.busy:
             self.statusBar().showMessage("A calculation package is still being written.", 5000)

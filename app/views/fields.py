@@ -210,6 +210,12 @@ class QuantityField(QWidget):
     def _on_text_edited(self, _text: str) -> None:
         self._timer.start()
 
+    def flush(self) -> None:
+        """Apply typing still waiting for its pause now (before a save, an export or a sizing)."""
+        if self._timer.isActive():
+            self._timer.stop()
+            self._on_pause()
+
     def _on_pause(self) -> None:
         if self.edit.text().strip() and self.edit.text() != self._shown:
             self.commit_requested.emit(self.edit.text(), True)
