@@ -50,11 +50,14 @@ from .calc_package import (
     build_package,
 )
 from .errors import InputError
+from .resources import resource_path
 
 if TYPE_CHECKING:  # pragma: no cover
     from .model import Project
 
-DEJAVU_FOLDER = Path("/usr/share/fonts/truetype/dejavu")
+# DejaVu Sans ships in resources/fonts (Bitstream Vera licence, resources/fonts/LICENSE-DejaVu.txt),
+# so the package looks the same on every machine and in the frozen build.
+FONT_FOLDER = "fonts"
 INCH = 72.0
 SEAL_SIZE = 3.0 * INCH  # the empty square kept for the engineer's seal and signature
 BAND_HEIGHT = SEAL_SIZE + 12.0  # title block: the seal square plus its caption line
@@ -106,11 +109,13 @@ class _Fonts:
 
 
 @lru_cache(maxsize=4)
-def _fonts(folder: str = str(DEJAVU_FOLDER)) -> _Fonts:
-    """DejaVu Sans when present (it has every symbol the package prints), else Helvetica."""
+def _fonts(folder: str | None = None) -> _Fonts:
+    """DejaVu Sans from our resources (it has every symbol the package prints), else Helvetica."""
     from reportlab.pdfbase import pdfmetrics
     from reportlab.pdfbase.ttfonts import TTFont
 
+    if folder is None:
+        folder = str(resource_path(FONT_FOLDER))
     regular, bold = Path(folder) / "DejaVuSans.ttf", Path(folder) / "DejaVuSans-Bold.ttf"
     try:
         if not (regular.is_file() and bold.is_file()):
