@@ -18,6 +18,7 @@ import tempfile
 from collections.abc import Iterator
 from contextlib import contextmanager
 from dataclasses import dataclass
+from functools import lru_cache
 from pathlib import Path
 from typing import Any
 
@@ -316,6 +317,21 @@ def _wall(raw: Any, units: str) -> Wall:
     return Wall(id=wid, label=_text(obj, "label"), length=length, thickness=thickness, footing=footing, stem=stem, loads=tuple(loads), sizing=sizing)
 
 
+def _wall_cached(raw: Any, units: str) -> Wall:
+    """:func:`_wall`, remembered by the wall's JSON text: the window re-parses the whole project on
+    every edit, and usually only one wall has changed."""
+    try:
+        key = json.dumps(raw, sort_keys=True, allow_nan=False)
+    except (TypeError, ValueError):
+        return _wall(raw, units)
+    return _wall_from_text(key, units)
+
+
+@lru_cache(maxsize=1024)
+def _wall_from_text(key: str, units: str) -> Wall:
+    return _wall(json.loads(key), units)
+
+
 def parse_project(raw: Any) -> Project:
     """Validate a project document (parsed JSON) and build the model.
 
@@ -357,7 +373,7 @@ def parse_project(raw: Any) -> Project:
     walls = []
     for i, w in enumerate(walls_raw):
         with _scope(f"walls[{i}]"):
-            walls.append(_wall(w, units))
+            walls.append(_wall_cached(w, units))
     with _scope(""):
         return Project(info=info, units=units, criteria=criteria, soil=soil, walls=tuple(walls))
 
