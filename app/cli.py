@@ -110,7 +110,9 @@ def _window(path: str | None, demo: bool) -> int:
     try:
         from app.main_window import launch
     except ImportError as err:
-        print(f"kernline: the window cannot start here ({err}). The headless commands work: kernline check, size.", file=sys.stderr)
+        print(
+            f"kernline: the window cannot start here ({err}). The headless commands work: kernline check, size.", file=sys.stderr
+        )
         return EXIT_INTERNAL
     return launch(path=path, demo=demo)
 
@@ -162,7 +164,9 @@ def _size(path: str, as_json: bool, write: bool) -> int:
     else:
         print(size_table(project, sized, results))
     if write:
-        sizes = {s.wall_id: (s.width, s.thickness) for s in sized if s.feasible and s.width is not None and s.thickness is not None}
+        sizes = {
+            s.wall_id: (s.width, s.thickness) for s in sized if s.feasible and s.width is not None and s.thickness is not None
+        }
         save_project(path, with_footing_sizes(doc.raw, sizes, project.units))
         print(f"wrote {len(sizes)} footing size(s) to {path}", file=sys.stderr if as_json else sys.stdout)
     return EXIT_OK if all(s.feasible for s in sized) else EXIT_FAIL

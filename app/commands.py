@@ -144,8 +144,16 @@ class RawEdit(QUndoCommand):
         select_after, select_before: the wall index to select after redo / undo (None: keep).
     """
 
-    def __init__(self, document: ProjectDocument, text: str, changes: Sequence[Change], *, focus_path: RawPath = (),
-                 select_after: int | None = None, select_before: int | None = None) -> None:
+    def __init__(
+        self,
+        document: ProjectDocument,
+        text: str,
+        changes: Sequence[Change],
+        *,
+        focus_path: RawPath = (),
+        select_after: int | None = None,
+        select_before: int | None = None,
+    ) -> None:
         super().__init__(text)
         self.document = document
         self.changes = list(changes)
@@ -183,8 +191,9 @@ class SetField(RawEdit):
 
     MERGE_ID = 1001
 
-    def __init__(self, document: ProjectDocument, path: RawPath, value: Any, *, text: str | None = None,
-                 session: int | None = None) -> None:
+    def __init__(
+        self, document: ProjectDocument, path: RawPath, value: Any, *, text: str | None = None, session: int | None = None
+    ) -> None:
         label = text or f"Set {_field_words(path)}"
         super().__init__(document, label, [SetValue(path, value)], focus_path=path)
         self.path = tuple(path)
@@ -224,34 +233,64 @@ def add_wall(document: ProjectDocument) -> RawEdit:
 
     index = len(document.raw.get("walls", []))
     wall = wall_template(next_wall_id(document.raw), document.units)
-    return RawEdit(document, f"Add wall {wall['id']}", [InsertItem(("walls",), index, wall)], focus_path=("walls",),
-                   select_after=index, select_before=document.current_index)
+    return RawEdit(
+        document,
+        f"Add wall {wall['id']}",
+        [InsertItem(("walls",), index, wall)],
+        focus_path=("walls",),
+        select_after=index,
+        select_before=document.current_index,
+    )
 
 
 def duplicate_wall(document: ProjectDocument, index: int) -> RawEdit:
     source = copy.deepcopy(document.raw["walls"][index])
     source["id"] = unique_wall_id(document.raw, str(source.get("id", "W")))
-    return RawEdit(document, f"Duplicate wall as {source['id']}", [InsertItem(("walls",), index + 1, source)],
-                   focus_path=("walls",), select_after=index + 1, select_before=index)
+    return RawEdit(
+        document,
+        f"Duplicate wall as {source['id']}",
+        [InsertItem(("walls",), index + 1, source)],
+        focus_path=("walls",),
+        select_after=index + 1,
+        select_before=index,
+    )
 
 
 def remove_wall(document: ProjectDocument, index: int) -> RawEdit:
     wid = document.raw["walls"][index].get("id", "")
     count = len(document.raw["walls"])
-    return RawEdit(document, f"Delete wall {wid}", [RemoveItem(("walls",), index)], focus_path=("walls",),
-                   select_after=min(index, count - 2), select_before=index)
+    return RawEdit(
+        document,
+        f"Delete wall {wid}",
+        [RemoveItem(("walls",), index)],
+        focus_path=("walls",),
+        select_after=min(index, count - 2),
+        select_before=index,
+    )
 
 
 def rename_wall(document: ProjectDocument, index: int, new_id: str) -> RawEdit:
     old = document.raw["walls"][index].get("id", "")
-    return RawEdit(document, f"Rename wall {old} to {new_id}", [SetValue(("walls", index, "id"), new_id)],
-                   focus_path=("walls", index, "id"), select_after=index, select_before=index)
+    return RawEdit(
+        document,
+        f"Rename wall {old} to {new_id}",
+        [SetValue(("walls", index, "id"), new_id)],
+        focus_path=("walls", index, "id"),
+        select_after=index,
+        select_before=index,
+    )
 
 
 def move_wall(document: ProjectDocument, index: int, target: int) -> RawEdit:
     wid = document.raw["walls"][index].get("id", "")
-    return RawEdit(document, f"Move wall {wid}", [MoveItem(("walls",), index, target)], focus_path=("walls",),
-                   select_after=target, select_before=index)
+    return RawEdit(
+        document,
+        f"Move wall {wid}",
+        [MoveItem(("walls",), index, target)],
+        focus_path=("walls",),
+        select_after=target,
+        select_before=index,
+    )
 
 
 # ---- loads -------------------------------------------------------------------------------------------
@@ -265,21 +304,38 @@ def load_template(kind: str, units: str, case: str = "D") -> dict[str, Any]:
     if kind == "point":
         return {"type": "point", "case": case, "value": "0 kip" if us else "0 kN", "at": "0 ft" if us else "0 m", "label": ""}
     lateral_case = case if case in ("W", "E") else "W"
-    return {"type": "lateral", "case": lateral_case, "value": "0 kip" if us else "0 kN", "height": "10 ft" if us else "3 m", "label": ""}
+    return {
+        "type": "lateral",
+        "case": lateral_case,
+        "value": "0 kip" if us else "0 kN",
+        "height": "10 ft" if us else "3 m",
+        "label": "",
+    }
 
 
 def add_load(document: ProjectDocument, wall_index: int, kind: str = "line") -> RawEdit:
     loads = document.raw["walls"][wall_index].get("loads", [])
-    return RawEdit(document, "Add load", [InsertItem(("walls", wall_index, "loads"), len(loads), load_template(kind, document.units))],
-                   focus_path=("walls", wall_index, "loads"))
+    return RawEdit(
+        document,
+        "Add load",
+        [InsertItem(("walls", wall_index, "loads"), len(loads), load_template(kind, document.units))],
+        focus_path=("walls", wall_index, "loads"),
+    )
 
 
 def remove_load(document: ProjectDocument, wall_index: int, row: int) -> RawEdit:
-    return RawEdit(document, "Delete load", [RemoveItem(("walls", wall_index, "loads"), row)], focus_path=("walls", wall_index, "loads", row))
+    return RawEdit(
+        document, "Delete load", [RemoveItem(("walls", wall_index, "loads"), row)], focus_path=("walls", wall_index, "loads", row)
+    )
 
 
 def move_load(document: ProjectDocument, wall_index: int, row: int, target: int) -> RawEdit:
-    return RawEdit(document, "Move load", [MoveItem(("walls", wall_index, "loads"), row, target)], focus_path=("walls", wall_index, "loads", row))
+    return RawEdit(
+        document,
+        "Move load",
+        [MoveItem(("walls", wall_index, "loads"), row, target)],
+        focus_path=("walls", wall_index, "loads", row),
+    )
 
 
 def change_load_type(document: ProjectDocument, wall_index: int, row: int, kind: str) -> RawEdit:
@@ -290,8 +346,12 @@ def change_load_type(document: ProjectDocument, wall_index: int, row: int, kind:
     for key, value in old.items():  # keys Kernline does not know stay with the row
         if key not in ("type", "case", "value", "start", "end", "at", "height", "label", "reverses"):
             new[key] = value
-    return RawEdit(document, f"Make load a {kind} load", [SetValue(("walls", wall_index, "loads", row), new)],
-                   focus_path=("walls", wall_index, "loads", row, "type"))
+    return RawEdit(
+        document,
+        f"Make load a {kind} load",
+        [SetValue(("walls", wall_index, "loads", row), new)],
+        focus_path=("walls", wall_index, "loads", row, "type"),
+    )
 
 
 # ---- sizes, units, combinations ----------------------------------------------------------------------
@@ -303,9 +363,12 @@ def adopt_size(document: ProjectDocument, wall_index: int, width: float, thickne
     wid = document.raw["walls"][wall_index].get("id", "")
     base = ("walls", wall_index, "footing")
     return RawEdit(
-        document, f"Adopt footing {length_text(width, units)} x {length_text(thickness, units)} for {wid}",
+        document,
+        f"Adopt footing {length_text(width, units)} x {length_text(thickness, units)} for {wid}",
         [SetValue((*base, "width"), length_text(width, units)), SetValue((*base, "thickness"), length_text(thickness, units))],
-        focus_path=(*base, "width"), select_after=wall_index, select_before=document.current_index,
+        focus_path=(*base, "width"),
+        select_after=wall_index,
+        select_before=document.current_index,
     )
 
 

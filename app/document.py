@@ -81,22 +81,48 @@ def get_at(raw: Any, path: RawPath, default: Any = MISSING) -> Any:
 # engineer's own values; soil values echo the engine's defaults (see the project-file format).
 _WALL_TEMPLATE = {
     "US": {
-        "length": "10 ft", "thickness": "6 in",
-        "footing": {"width": "18 in", "thickness": "12 in", "extension_start": "0 ft", "extension_end": "0 ft",
-                    "cover": "12 in", "unit_weight": "150 pcf"},
+        "length": "10 ft",
+        "thickness": "6 in",
+        "footing": {
+            "width": "18 in",
+            "thickness": "12 in",
+            "extension_start": "0 ft",
+            "extension_end": "0 ft",
+            "cover": "12 in",
+            "unit_weight": "150 pcf",
+        },
         "stem": {"height": "0 in", "thickness": "8 in"},
         "loads": [{"type": "line", "case": "D", "value": "300 plf", "label": "dead"}],
-        "sizing": {"width_min": "12 in", "width_max": "8 ft", "width_step": "1 in",
-                   "thickness_min": "12 in", "thickness_max": "4 ft", "thickness_step": "1 in"},
+        "sizing": {
+            "width_min": "12 in",
+            "width_max": "8 ft",
+            "width_step": "1 in",
+            "thickness_min": "12 in",
+            "thickness_max": "4 ft",
+            "thickness_step": "1 in",
+        },
     },
     "SI": {
-        "length": "3 m", "thickness": "150 mm",
-        "footing": {"width": "450 mm", "thickness": "300 mm", "extension_start": "0 m", "extension_end": "0 m",
-                    "cover": "300 mm", "unit_weight": "23.6 kN/m^3"},
+        "length": "3 m",
+        "thickness": "150 mm",
+        "footing": {
+            "width": "450 mm",
+            "thickness": "300 mm",
+            "extension_start": "0 m",
+            "extension_end": "0 m",
+            "cover": "300 mm",
+            "unit_weight": "23.6 kN/m^3",
+        },
         "stem": {"height": "0 mm", "thickness": "200 mm"},
         "loads": [{"type": "line", "case": "D", "value": "4.4 kN/m", "label": "dead"}],
-        "sizing": {"width_min": "300 mm", "width_max": "2400 mm", "width_step": "25 mm",
-                   "thickness_min": "300 mm", "thickness_max": "1200 mm", "thickness_step": "25 mm"},
+        "sizing": {
+            "width_min": "300 mm",
+            "width_max": "2400 mm",
+            "width_step": "25 mm",
+            "thickness_min": "300 mm",
+            "thickness_max": "1200 mm",
+            "thickness_step": "25 mm",
+        },
     },
 }
 
@@ -110,14 +136,29 @@ def wall_template(wall_id: str, units: str) -> dict[str, Any]:
 def new_project_raw(units: str = "US") -> dict[str, Any]:
     """The raw document of File > New: one wall, the ASCE 7-16 ASD preset, default soil values."""
     soil = (
-        {"allowable_bearing": "2000 psf", "bearing_basis": "gross", "friction": 0.35, "cohesion": "0 psf",
-         "passive": "0 pcf", "passive_ignore": "12 in", "unit_weight": "110 pcf"}
-        if units != "SI" else
-        {"allowable_bearing": "95 kPa", "bearing_basis": "gross", "friction": 0.35, "cohesion": "0 kPa",
-         "passive": "0 kPa/m", "passive_ignore": "300 mm", "unit_weight": "17.3 kN/m^3"}
+        {
+            "allowable_bearing": "2000 psf",
+            "bearing_basis": "gross",
+            "friction": 0.35,
+            "cohesion": "0 psf",
+            "passive": "0 pcf",
+            "passive_ignore": "12 in",
+            "unit_weight": "110 pcf",
+        }
+        if units != "SI"
+        else {
+            "allowable_bearing": "95 kPa",
+            "bearing_basis": "gross",
+            "friction": 0.35,
+            "cohesion": "0 kPa",
+            "passive": "0 kPa/m",
+            "passive_ignore": "300 mm",
+            "unit_weight": "17.3 kN/m^3",
+        }
     )
     return {
-        "format": FORMAT, "version": VERSION,
+        "format": FORMAT,
+        "version": VERSION,
         "project": {"name": "Untitled project", "number": "", "engineer": "", "client": "", "address": "", "notes": ""},
         "units": units,
         "criteria": {"method": "asce7-16-asd", "sds": 0.0, "bearing_increase": 1.0},
@@ -198,8 +239,15 @@ class ProjectDocument(QObject):
 
     # ---- replacing the whole document ----------------------------------------------------------
 
-    def replace(self, raw: dict[str, Any], path: Path | None, *, project: Project | None = None,
-                demo: bool = False, recovered: bool = False) -> None:
+    def replace(
+        self,
+        raw: dict[str, Any],
+        path: Path | None,
+        *,
+        project: Project | None = None,
+        demo: bool = False,
+        recovered: bool = False,
+    ) -> None:
         """Make ``raw`` the open project (clears undo history, sizing and selection)."""
         project = project if project is not None else parse_project(raw)
         self._loaded_text = None
@@ -396,8 +444,11 @@ def _same_document(text: str, raw: dict[str, Any]) -> bool:
 
 
 _FRIENDLY = {
-    "footing.width": "footing width", "footing.thickness": "footing thickness", "length": "wall length",
-    "thickness": "wall thickness", "walls": "walls",
+    "footing.width": "footing width",
+    "footing.thickness": "footing thickness",
+    "length": "wall length",
+    "thickness": "wall thickness",
+    "walls": "walls",
 }
 
 
@@ -406,13 +457,22 @@ def readable(err: InputError) -> str:
     field = err.field
     if field.startswith("walls["):
         close = field.find("]")
-        field = field[close + 2:] if close >= 0 else field
+        field = field[close + 2 :] if close >= 0 else field
     field = field.replace("criteria.", "").replace("soil.", "soil ")
     name = _FRIENDLY.get(field, field.replace("_", " "))
     return f"{name}: {err.problem}" if name else err.problem
 
 
 __all__ = [
-    "GOVERNING_BEARING", "MISSING", "ProjectDocument", "SizingEntry", "get_at", "new_project_raw",
-    "next_wall_id", "path_text", "readable", "unique_wall_id", "wall_template",
+    "GOVERNING_BEARING",
+    "MISSING",
+    "ProjectDocument",
+    "SizingEntry",
+    "get_at",
+    "new_project_raw",
+    "next_wall_id",
+    "path_text",
+    "readable",
+    "unique_wall_id",
+    "wall_template",
 ]

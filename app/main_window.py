@@ -89,7 +89,9 @@ def default_recovery_dir() -> Path:
 class MainWindow(QMainWindow):
     """The one window. ``settings`` and ``recovery_dir`` can be given so tests never touch real ones."""
 
-    def __init__(self, settings: QSettings | None = None, recovery_dir: Path | None = None, autosave_ms: int = AUTOSAVE_MS) -> None:
+    def __init__(
+        self, settings: QSettings | None = None, recovery_dir: Path | None = None, autosave_ms: int = AUTOSAVE_MS
+    ) -> None:
         configure_pyqtgraph()
         super().__init__()
         self.settings = settings if settings is not None else QSettings("Kernline", "Kernline")
@@ -209,22 +211,35 @@ class MainWindow(QMainWindow):
         self.demo_action = self._action("Open the &demo project", self.open_demo, None, "Open the built-in demo project")
         self.save_action = self._action("&Save", self.save, Std.Save, "Save the project")
         self.save_as_action = self._action("Save &As…", self.save_as, Std.SaveAs, "Save the project under a new name")
-        self.export_action = self._action("Export &schedule (CSV)…", self.export_schedule, None, "Write the footing schedule as CSV")
+        self.export_action = self._action(
+            "Export &schedule (CSV)…", self.export_schedule, None, "Write the footing schedule as CSV"
+        )
         self.export_pdf_action = self._action(
-            "&Export calculation package (PDF)…", self.export_package, "Ctrl+E",
-            "Write the calculation package (design basis, every wall's checks, appendix) as a PDF")
+            "&Export calculation package (PDF)…",
+            self.export_package,
+            "Ctrl+E",
+            "Write the calculation package (design basis, every wall's checks, appendix) as a PDF",
+        )
         self.quit_action = self._action("&Quit", self.close, Std.Quit, "Close Kernline")
         self.undo_action = self.document.undo_stack.createUndoAction(self, "&Undo")
         self.undo_action.setShortcut(QKeySequence(Std.Undo))
         self.redo_action = self.document.undo_stack.createRedoAction(self, "&Redo")
         self.redo_action.setShortcuts([QKeySequence(Std.Redo), QKeySequence("Ctrl+Y")])
-        self.size_action = self._action("Size this &footing", self.size_current, "Ctrl+M", "Find the smallest passing footing of the selected wall")
-        self.size_all_action = self._action("Size &all walls", self.size_all, "Ctrl+Shift+M", "Find the smallest passing footing of every wall")
+        self.size_action = self._action(
+            "Size this &footing", self.size_current, "Ctrl+M", "Find the smallest passing footing of the selected wall"
+        )
+        self.size_all_action = self._action(
+            "Size &all walls", self.size_all, "Ctrl+Shift+M", "Find the smallest passing footing of every wall"
+        )
         self.add_wall_action = self._action("&Add wall", self.walls_view.add, "Ctrl+Shift+N", "Add a wall")
-        self.duplicate_action = self._action("&Duplicate wall", self.walls_view.duplicate, "Ctrl+D", "Duplicate the selected wall")
+        self.duplicate_action = self._action(
+            "&Duplicate wall", self.walls_view.duplicate, "Ctrl+D", "Duplicate the selected wall"
+        )
         self.rename_action = self._action("&Rename wall", self.walls_view.start_rename, "F2", "Rename the selected wall")
         self.delete_wall_action = self._action("D&elete wall", self.walls_view.delete, None, "Delete the selected wall")
-        self.about_action = self._action("&About Kernline", self.about, Std.HelpContents, "What Kernline is, and the caution that goes with it")
+        self.about_action = self._action(
+            "&About Kernline", self.about, Std.HelpContents, "What Kernline is, and the caution that goes with it"
+        )
 
         self.units_group = QActionGroup(self)
         self.units_group.setExclusive(True)
@@ -319,8 +334,13 @@ class MainWindow(QMainWindow):
         self.welcome.recent_requested.connect(self._open_recent)
 
     def _set_tab_order(self) -> None:
-        chain: list[QWidget] = [self.walls_view.tree, *self.wall_form.focus_order(), *self.project_form.focus_order(),
-                                self.drawings.picker, self.tabs]
+        chain: list[QWidget] = [
+            self.walls_view.tree,
+            *self.wall_form.focus_order(),
+            *self.project_form.focus_order(),
+            self.drawings.picker,
+            self.tabs,
+        ]
         for a, b in zip(chain, chain[1:], strict=False):
             QWidget.setTabOrder(a, b)
 
@@ -465,9 +485,15 @@ class MainWindow(QMainWindow):
             parts = []
             for e in entries:
                 s = e.result
-                parts.append(f"{e.wall.id} {format_length(s.width, units)} × {format_length(s.thickness, units)}" if s.feasible else f"{e.wall.id} no size passes")
+                parts.append(
+                    f"{e.wall.id} {format_length(s.width, units)} × {format_length(s.thickness, units)}"
+                    if s.feasible
+                    else f"{e.wall.id} no size passes"
+                )
             parts += [f"{wid}: {msg}" for wid, msg in batch.errors.items()]
-            self.statusBar().showMessage(f"Sized {len(entries)} walls in {batch.seconds * 1000:.0f} ms: " + "; ".join(parts), 15000)
+            self.statusBar().showMessage(
+                f"Sized {len(entries)} walls in {batch.seconds * 1000:.0f} ms: " + "; ".join(parts), 15000
+            )
         elif batch.errors:
             self.statusBar().showMessage("; ".join(batch.errors.values()), 15000)
         if self.tabs.currentWidget() is self.design_map:
@@ -516,9 +542,20 @@ class MainWindow(QMainWindow):
 
     def _enable_project_actions(self, enabled: bool) -> None:
         """Actions that act on an open project are off while the welcome panel stands in for it."""
-        for a in (self.save_action, self.save_as_action, self.export_action, self.export_pdf_action, self.size_action,
-                  self.size_all_action, self.add_wall_action, self.duplicate_action, self.rename_action,
-                  self.delete_wall_action, self.us_action, self.si_action):
+        for a in (
+            self.save_action,
+            self.save_as_action,
+            self.export_action,
+            self.export_pdf_action,
+            self.size_action,
+            self.size_all_action,
+            self.add_wall_action,
+            self.duplicate_action,
+            self.rename_action,
+            self.delete_wall_action,
+            self.us_action,
+            self.si_action,
+        ):
             a.setEnabled(enabled)
         if enabled and self.package_writer.busy:
             self.export_pdf_action.setEnabled(False)
@@ -528,7 +565,9 @@ class MainWindow(QMainWindow):
         if not self.document.dirty:
             return True
         answer = QMessageBox.question(
-            self, "Unsaved changes", f"Save the changes to {self.document.display_name} first?",
+            self,
+            "Unsaved changes",
+            f"Save the changes to {self.document.display_name} first?",
             QMessageBox.StandardButton.Save | QMessageBox.StandardButton.Discard | QMessageBox.StandardButton.Cancel,
             QMessageBox.StandardButton.Save,
         )
@@ -666,8 +705,10 @@ class MainWindow(QMainWindow):
         walls = f"{outcome.walls} wall" + ("s" if outcome.walls != 1 else "")
         text = f"Wrote the calculation package ({walls}) to\n{outcome.path}\nin {outcome.seconds:.1f} s."
         if self._export_invalid:
-            text += ("\n\nNot in the package: " + ", ".join(self._export_invalid) + " — the text typed there is not valid, "
-                     "so the package shows the last valid values.")
+            text += (
+                "\n\nNot in the package: " + ", ".join(self._export_invalid) + " — the text typed there is not valid, "
+                "so the package shows the last valid values."
+            )
         self.statusBar().showMessage(f"Wrote the calculation package to {outcome.path}", 8000)
         QMessageBox.information(self, "Calculation package written", text)
 
@@ -716,8 +757,14 @@ class MainWindow(QMainWindow):
         doc = self.document
         if not doc.dirty:
             return False
-        record = {"format": RECOVERY_FORMAT, "version": 1, "saved": time.strftime("%Y-%m-%d %H:%M:%S"),
-                  "path": str(doc.path) if doc.path else None, "demo": doc.is_demo, "project": doc.raw}
+        record = {
+            "format": RECOVERY_FORMAT,
+            "version": 1,
+            "saved": time.strftime("%Y-%m-%d %H:%M:%S"),
+            "path": str(doc.path) if doc.path else None,
+            "demo": doc.is_demo,
+            "project": doc.raw,
+        }
         try:
             self.recovery_dir.mkdir(parents=True, exist_ok=True)
             atomic_write_text(self.recovery_path, dumps_project(record))
@@ -748,9 +795,11 @@ class MainWindow(QMainWindow):
             return False
         name = record.get("path") or "an unsaved project"
         answer = QMessageBox.question(
-            self, "Restore unsaved work?",
+            self,
+            "Restore unsaved work?",
             f"Kernline did not close normally. Restore the changes to {name} autosaved at {record.get('saved', '?')}?",
-            QMessageBox.StandardButton.Yes | QMessageBox.StandardButton.No, QMessageBox.StandardButton.Yes,
+            QMessageBox.StandardButton.Yes | QMessageBox.StandardButton.No,
+            QMessageBox.StandardButton.Yes,
         )
         if answer != QMessageBox.StandardButton.Yes:
             self.remove_recovery()
@@ -769,7 +818,8 @@ class MainWindow(QMainWindow):
 
     def about(self) -> None:
         QMessageBox.about(
-            self, "About Kernline",
+            self,
+            "About Kernline",
             f"<h3>Kernline {__version__}</h3>"
             "<p>Kernline checks concrete strip footings under shear walls for overturning, sliding and soil bearing "
             "(with soil pressure beyond the kern) under ASCE 7-16 ASD load combinations in both lateral directions, "

@@ -20,7 +20,9 @@ from .model import BearingBasis
 ArrayLike = float | np.ndarray
 
 
-def compared_pressure(q_max: ArrayLike, basis: BearingBasis, soil_unit_weight: float, cover: float, thickness: ArrayLike) -> np.ndarray:
+def compared_pressure(
+    q_max: ArrayLike, basis: BearingBasis, soil_unit_weight: float, cover: float, thickness: ArrayLike
+) -> np.ndarray:
     """q_max for a gross allowable; q_max - gs (c + D) for a net allowable (Pa)."""
     if basis is BearingBasis.NET:
         return np.asarray(np.subtract(q_max, soil_unit_weight * np.add(cover, thickness)))

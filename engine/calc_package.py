@@ -520,13 +520,18 @@ def _cover(project: Project, reports: Sequence[WallReport], title: TitleBlock, c
         else f"This package covers all {len(reports)} wall(s) of the project: {ids}."
     )
     if n_fail:
-        verdict = Verdict(False, f"{n_fail} of {len(reports)} wall(s) FAIL on their current footing: {', '.join(failing)}. See the summary schedule and the wall sheets.")
+        verdict = Verdict(
+            False,
+            f"{n_fail} of {len(reports)} wall(s) FAIL on their current footing: {', '.join(failing)}. See the summary schedule and the wall sheets.",
+        )
     else:
         verdict = Verdict(True, f"All {len(reports)} wall(s) pass every check on their current footing.")
     blocks: list[Block] = [
         Heading("Calculation package"),
-        Para("Global stability of concrete strip footings under shear walls: overturning, sliding and soil bearing, "
-             "in every load combination and both directions of the lateral load."),
+        Para(
+            "Global stability of concrete strip footings under shear walls: overturning, sliding and soil bearing, "
+            "in every load combination and both directions of the lateral load."
+        ),
         Heading("Project information", 2),
         KeyValues(
             (
@@ -593,8 +598,10 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
         concrete = f"{fmt.unit_weight(unit_weights[0])} (every wall in this package)"
     else:
         concrete = "; ".join(f"{r.wall.id}: {fmt.unit_weight(r.wall.footing.unit_weight)}" for r in reports)
-    basis = "gross (compared with the peak pressure)" if soil.bearing_basis is BearingBasis.GROSS else (
-        "net (compared with the peak pressure less the overburden γ_{s}(c + D))"
+    basis = (
+        "gross (compared with the peak pressure)"
+        if soil.bearing_basis is BearingBasis.GROSS
+        else ("net (compared with the peak pressure less the overburden γ_{s}(c + D))")
     )
     blocks: list[Block] = [
         Heading("Design basis"),
@@ -627,7 +634,10 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
                 ("Passive pressure K, per depth", fmt.gradient(soil.passive)),
                 ("Passive ignored from grade to depth", fmt.length(soil.passive_ignore)),
                 (formula("Soil unit weight γ_{s}"), fmt.unit_weight(soil.unit_weight)),
-                ("Source of the soil values", plain(soil_report) if soil_report else "not stated in the project file: ________________________________"),
+                (
+                    "Source of the soil values",
+                    plain(soil_report) if soil_report else "not stated in the project file: ________________________________",
+                ),
             ),
             columns=1,
         ),
@@ -636,16 +646,24 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
         Heading("How the checks are made", 2),
         Bullets(
             (
-                formula("Overturning: moments about the toe (the footing end the lateral load pushes toward). "
-                        "Ratio M_{R} / M_{OT}; downward loads resist, uplift and lateral loads overturn; lateral loads act "
-                        "at their height above the top of the footing plus the footing thickness D."),
-                formula("Sliding: resistance R = friction μ N + cohesion min(c B a, 0.5 N) + passive on the footing's "
-                        "end face; ratio R / V (resisting over driving, Bowles)."),
-                formula("Soil bearing: rigid footing, linear soil pressure, no tension. Inside the kern (|e| ≤ L/6) "
-                        "q = N / (B L) (1 ± 6|e| / L); beyond it a triangular block of length a = 3 (L/2 − |e|) with "
-                        "q_{max} = 2N / (3B (L/2 − |e|)); |e| ≥ L/2 or N ≤ 0 has no equilibrium (fails). Ratio q_{a} / q_{max}."),
-                formula("Self weight of footing, stem and soil cover is dead load at the footing's mid-length, "
-                        "carried with the combination's factor on D."),
+                formula(
+                    "Overturning: moments about the toe (the footing end the lateral load pushes toward). "
+                    "Ratio M_{R} / M_{OT}; downward loads resist, uplift and lateral loads overturn; lateral loads act "
+                    "at their height above the top of the footing plus the footing thickness D."
+                ),
+                formula(
+                    "Sliding: resistance R = friction μ N + cohesion min(c B a, 0.5 N) + passive on the footing's "
+                    "end face; ratio R / V (resisting over driving, Bowles)."
+                ),
+                formula(
+                    "Soil bearing: rigid footing, linear soil pressure, no tension. Inside the kern (|e| ≤ L/6) "
+                    "q = N / (B L) (1 ± 6|e| / L); beyond it a triangular block of length a = 3 (L/2 − |e|) with "
+                    "q_{max} = 2N / (3B (L/2 − |e|)); |e| ≥ L/2 or N ≤ 0 has no equilibrium (fails). Ratio q_{a} / q_{max}."
+                ),
+                formula(
+                    "Self weight of footing, stem and soil cover is dead load at the footing's mid-length, "
+                    "carried with the combination's factor on D."
+                ),
                 "Every combination is checked in both directions of the lateral load; the case with the lowest "
                 "ratio / required governs each check.",
             )
@@ -679,14 +697,18 @@ def _references_and_notes(project: Project, fmt: _Fmt) -> Section:
         "in-plane shears at a height above the top of the footing.",
         "Coordinates: x runs along the footing from its start end (x = 0) to x = L = extension at start + wall "
         "length + extension at end. Direction + pushes toward x = L, direction − toward x = 0. Loads marked "
-        "\"reverses\" act at their mirror position about the wall's mid-length in direction −.",
+        '"reverses" act at their mirror position about the wall\'s mid-length in direction −.',
         "The footing is taken as rigid and the soil takes no tension. The soil pressure is checked along the "
         "footing's length; its width B carries the pressure uniformly.",
         "Passive resistance acts on the footing's end face of width B, from the deeper of the soil cover and the "
         "ignored depth down to the base.",
-        "Dimensions are shown in " + ("feet and inches to the nearest 1/4 in; forces in kip to two decimals; pressures in psf." if
-                                      project.units == "US" else "metres; forces in kN; pressures in kPa."),
-        "A ratio of \"no demand\" means the case produces no overturning moment, no shear or no pressure for that check.",
+        "Dimensions are shown in "
+        + (
+            "feet and inches to the nearest 1/4 in; forces in kip to two decimals; pressures in psf."
+            if project.units == "US"
+            else "metres; forces in kN; pressures in kPa."
+        ),
+        'A ratio of "no demand" means the case produces no overturning moment, no shear or no pressure for that check.',
     ]
     blocks: list[Block] = [
         Heading("References"),
@@ -741,8 +763,10 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
         rows.append(tuple(cells))
     blocks: list[Block] = [
         Heading("Summary schedule"),
-        Para("Footing size as drawn (width B × thickness D × length L) and, for each check, the governing ratio / required "
-             "ratio with the combination and direction that govern."),
+        Para(
+            "Footing size as drawn (width B × thickness D × length L) and, for each check, the governing ratio / required "
+            "ratio with the combination and direction that govern."
+        ),
         Table(
             ("Wall", "Label", "Footing B × D × L", "Overturning", "Sliding", "Bearing", "Result"),
             tuple(rows),
@@ -761,13 +785,21 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
             if s.feasible and s.width is not None and s.thickness is not None:
                 size = f"{fmt.length(s.width)} × {fmt.length(s.thickness)}"
                 same = _same_size(r.wall, s)
-                state = "current footing is this size" if same else ("current footing passes" if r.result.passes else "current footing FAILS")
+                state = (
+                    "current footing is this size"
+                    if same
+                    else ("current footing passes" if r.result.passes else "current footing FAILS")
+                )
             else:
                 size, state = "none in the bounds passes", "revise the bounds, loads or footing length"
             srows.append((plain(r.wall.id), size, f"{s.candidates:,}", state))
         blocks += [
             Heading("Smallest passing footing found by the program", 2),
-            Table(("Wall", "Smallest passing B × D", "Candidates checked", "Current footing"), tuple(srows), (0.12, 0.30, 0.20, 0.38)),
+            Table(
+                ("Wall", "Smallest passing B × D", "Candidates checked", "Current footing"),
+                tuple(srows),
+                (0.12, 0.30, 0.20, 0.38),
+            ),
         ]
     blocks.append(Para(CAUTION, "note"))
     return Section("schedule", "Summary schedule", "Summary schedule", tuple(blocks))
@@ -789,7 +821,12 @@ def _wall_section(project: Project, report: WallReport, fmt: _Fmt) -> Section:
     title = f"Wall {wall.id}" + (f": {_clean(wall.label)}" if wall.label.strip() else "")
     blocks: list[Block] = [Heading(plain(_clean(title))), _wall_verdict(result)]
     blocks.append(
-        DrawingRow((elevation := elevation_drawing(wall, fmt, 372.0, 236.0), section_drawing(wall, project, fmt, 140.0, max(elevation.height, 150.0))))
+        DrawingRow(
+            (
+                elevation := elevation_drawing(wall, fmt, 372.0, 236.0),
+                section_drawing(wall, project, fmt, 140.0, max(elevation.height, 150.0)),
+            )
+        )
     )
     blocks += _inputs(project, wall, result, fmt)
     blocks += _loads(wall, fmt)
@@ -809,8 +846,10 @@ def _wall_verdict(result: WallResult) -> Verdict:
     for check in ALL_CHECKS:
         g = result.governing[check]
         if not g.passes:
-            parts.append(f"{_CHECK_WORD[check]} (ratio {ratio_text(g.ratio, g.required, g.passes)} < {g.required:.2f} required, "
-                         f"{case_name(g.combination, g.direction)})")
+            parts.append(
+                f"{_CHECK_WORD[check]} (ratio {ratio_text(g.ratio, g.required, g.passes)} < {g.required:.2f} required, "
+                f"{case_name(g.combination, g.direction)})"
+            )
     return Verdict(False, f"Wall {result.wall_id} FAILS " + "; ".join(parts) + " on its current footing.")
 
 
@@ -825,7 +864,10 @@ def _inputs(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list
         ("Footing length L", fmt.length(result.length)),
         ("Soil cover c over the footing", fmt.length(f.cover)),
         (formula("Concrete γ_{c}"), fmt.unit_weight(f.unit_weight)),
-        ("Stem wall height × thickness", f"{fmt.length(wall.stem.height)} × {fmt.length(wall.stem.thickness)}" if wall.stem.present else "no stem"),
+        (
+            "Stem wall height × thickness",
+            f"{fmt.length(wall.stem.height)} × {fmt.length(wall.stem.thickness)}" if wall.stem.present else "no stem",
+        ),
         (formula("Soil γ_{s}"), fmt.unit_weight(project.soil.unit_weight)),
     ]
     return [Heading("Inputs", 2), KeyValues(tuple(pairs), columns=2)]
@@ -866,9 +908,14 @@ def _loads(wall: Wall, fmt: _Fmt) -> list[Block]:
             align="CLCRLRLL",
             font_size=7.0,
         ),
-        Para(formula("Resultant of a line load w from s_{1} to s_{2}: P = w (s_{2} − s_{1}) at its mid-point (Hibbeler 4.9). "
-                     "x on footing = extension at start + position; a reversing load acts at the position after \"−:\" "
-                     "in direction −."), "small"),
+        Para(
+            formula(
+                "Resultant of a line load w from s_{1} to s_{2}: P = w (s_{2} − s_{1}) at its mid-point (Hibbeler 4.9). "
+                'x on footing = extension at start + position; a reversing load acts at the position after "−:" '
+                "in direction −."
+            ),
+            "small",
+        ),
     ]
 
 
@@ -878,12 +925,15 @@ def _self_weight(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) ->
     L, B, D = fmt.length(result.length), fmt.length(result.width), fmt.length(result.thickness)
     eqs: list[Block] = [
         Heading("Self weight (dead load at the footing's mid-length)", 2),
-        Equation(formula("W_{f}"), formula("γ_{c} B D L"), f"{fmt.unit_weight(f.unit_weight)} × {B} × {D} × {L}", fmt.force(sw.footing)),
+        Equation(
+            formula("W_{f}"), formula("γ_{c} B D L"), f"{fmt.unit_weight(f.unit_weight)} × {B} × {D} × {L}", fmt.force(sw.footing)
+        ),
     ]
     if wall.stem.present:
         eqs.append(
             Equation(
-                formula("W_{stem}"), formula("γ_{c} t_{s} h_{s} L"),
+                formula("W_{stem}"),
+                formula("γ_{c} t_{s} h_{s} L"),
                 f"{fmt.unit_weight(f.unit_weight)} × {fmt.length(wall.stem.thickness)} × {fmt.length(wall.stem.height)} × {L}",
                 fmt.force(sw.stem),
             )
@@ -893,14 +943,19 @@ def _self_weight(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) ->
     t = "t_{s}" if wall.stem.present else "t_{w}"
     eqs.append(
         Equation(
-            formula("W_{soil}"), formula(f"γ_{{s}} c (B − {t}) L"),
+            formula("W_{soil}"),
+            formula(f"γ_{{s}} c (B − {t}) L"),
             f"{fmt.unit_weight(project.soil.unit_weight)} × {fmt.length(f.cover)} × ({B} − {fmt.length(wall.supported_thickness)}) × {L}",
             fmt.force(sw.soil),
         )
     )
     eqs.append(
-        Equation(formula("W"), formula("W_{f} + W_{stem} + W_{soil}"), f"{fmt.force(sw.footing)} + {fmt.force(sw.stem)} + {fmt.force(sw.soil)}",
-                 plain(fmt.force(sw.total), bold=True))
+        Equation(
+            formula("W"),
+            formula("W_{f} + W_{stem} + W_{soil}"),
+            f"{fmt.force(sw.footing)} + {fmt.force(sw.stem)} + {fmt.force(sw.soil)}",
+            plain(fmt.force(sw.total), bold=True),
+        )
     )
     return _lead(eqs, 2)
 
@@ -923,7 +978,13 @@ def _case_of(result: WallResult, g: Governing) -> tuple[CaseResult, LoadCombinat
 
 def _governing_heading(check: Check, g: Governing) -> list[Block]:
     head = Heading(f"{_CHECK_TITLE[check]}: governing case {case_name(g.combination, g.direction)}", 2)
-    return [head, Para(f"The case with the lowest ratio / required of all combinations and directions: {direction_words(g.direction)}.", "small")]
+    return [
+        head,
+        Para(
+            f"The case with the lowest ratio / required of all combinations and directions: {direction_words(g.direction)}.",
+            "small",
+        ),
+    ]
 
 
 def _lateral_terms(wall: Wall, combo: LoadCombination, direction: str, fmt: _Fmt, with_arm: bool) -> list[str]:
@@ -936,7 +997,9 @@ def _lateral_terms(wall: Wall, combo: LoadCombination, direction: str, fmt: _Fmt
         if f == 0.0:
             continue
         if with_arm:
-            terms.append(f"{factor_text(f)} × {fmt.force(h.force)} × ({fmt.length(h.height)} + {fmt.length(wall.footing.thickness)})")
+            terms.append(
+                f"{factor_text(f)} × {fmt.force(h.force)} × ({fmt.length(h.height)} + {fmt.length(wall.footing.thickness)})"
+            )
         else:
             terms.append(f"{factor_text(f)} × {fmt.force(h.force)}")
     return terms
@@ -963,7 +1026,11 @@ def _overturning(wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
     assert ot is not None
     toe_sign = float(result.table.toe_sign[i])
     L = fmt.length(result.length)
-    toe = f"toe at x = L = {L} (the end the load pushes toward)" if toe_sign > 0 else "toe at x = 0 (the end the load pushes toward)"
+    toe = (
+        f"toe at x = L = {L} (the end the load pushes toward)"
+        if toe_sign > 0
+        else "toe at x = 0 (the end the load pushes toward)"
+    )
     resisting, overturning = [], []
     for v in vertical_resultants(wall):
         f = combo.factor(v.case)
@@ -984,12 +1051,24 @@ def _overturning(wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
     blocks: list[Block] = _governing_heading(Check.OVERTURNING, g)
     blocks.append(Para(f"Moments about the {toe}. Arms of vertical loads are measured from the toe.", "small"))
     blocks += [
-        Equation(formula("M_{OT}"), formula("Σ f H (h + D) + Σ |f P| arm (uplift)" + (" + |f_{D}| W L/2" if f_d < 0 else "")),
-                 _join(lateral + overturning), fmt.moment(ot.moment)),
-        Equation(formula("M_{R}"), formula("Σ f P arm (downward loads)" + (" + f_{D} W L/2" if f_d > 0 else "")),
-                 _join(resisting), fmt.moment(ot.resisting)),
-        Equation(formula("ratio"), formula("M_{R} / M_{OT}"), f"{fmt.moment(ot.resisting)} / {fmt.moment(ot.moment)}",
-                 plain(ratio_text(ot.ratio, ot.required, ot.passes), bold=True)),
+        Equation(
+            formula("M_{OT}"),
+            formula("Σ f H (h + D) + Σ |f P| arm (uplift)" + (" + |f_{D}| W L/2" if f_d < 0 else "")),
+            _join(lateral + overturning),
+            fmt.moment(ot.moment),
+        ),
+        Equation(
+            formula("M_{R}"),
+            formula("Σ f P arm (downward loads)" + (" + f_{D} W L/2" if f_d > 0 else "")),
+            _join(resisting),
+            fmt.moment(ot.resisting),
+        ),
+        Equation(
+            formula("ratio"),
+            formula("M_{R} / M_{OT}"),
+            f"{fmt.moment(ot.resisting)} / {fmt.moment(ot.moment)}",
+            plain(ratio_text(ot.ratio, ot.required, ot.passes), bold=True),
+        ),
     ]
     blocks.append(_check_verdict(Check.OVERTURNING, ot.ratio, ot.required, ot.passes))
     return _lead(_tail(blocks, 2), 4)
@@ -1006,7 +1085,11 @@ def _check_verdict(check: Check, ratio: float, required: float, passes: bool, sy
 def _sliding(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
     g = result.governing[Check.SLIDING]
     if math.isinf(g.ratio):
-        return [Heading("Sliding", 2), Para("No case has a lateral shear: no demand."), Verdict(True, "Sliding passes: no demand.")]
+        return [
+            Heading("Sliding", 2),
+            Para("No case has a lateral shear: no demand."),
+            Verdict(True, "Sliding passes: no demand."),
+        ]
     case, combo, i, _ = _case_of(result, g)
     sl = case.sliding
     assert sl is not None
@@ -1016,9 +1099,16 @@ def _sliding(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
     c = fmt.length(wall.footing.cover)
     blocks: list[Block] = _governing_heading(Check.SLIDING, g)
     blocks.append(
-        Equation(formula("V"), formula("Σ f H"), _join(_lateral_terms(wall, combo, g.direction, fmt, with_arm=False)), fmt.force(sl.force))
+        Equation(
+            formula("V"),
+            formula("Σ f H"),
+            _join(_lateral_terms(wall, combo, g.direction, fmt, with_arm=False)),
+            fmt.force(sl.force),
+        )
     )
-    blocks.append(Equation(formula("N"), None, None, N, "vertical load on the soil in this case (see the bearing check for its build-up)"))
+    blocks.append(
+        Equation(formula("N"), None, None, N, "vertical load on the soil in this case (see the bearing check for its build-up)")
+    )
     if case.vertical > 0.0:
         blocks.append(Equation(formula("F_{μ}"), formula("μ N"), f"{soil.friction:g} × {N}", fmt.force(sl.friction), "friction"))
     else:
@@ -1026,8 +1116,13 @@ def _sliding(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
     if soil.cohesion > 0.0:
         a = fmt.length(float(result.evaluation.contact_length[i]))
         blocks.append(
-            Equation(formula("F_{c}"), formula("min(c B a, 0.5 N)"), f"min({fmt.pressure(soil.cohesion)} × {B} × {a}, 0.5 × {N})",
-                     fmt.force(sl.cohesion), "cohesion over the contact length a, capped (IBC 1806.3.2)")
+            Equation(
+                formula("F_{c}"),
+                formula("min(c B a, 0.5 N)"),
+                f"min({fmt.pressure(soil.cohesion)} × {B} × {a}, 0.5 × {N})",
+                fmt.force(sl.cohesion),
+                "cohesion over the contact length a, capped (IBC 1806.3.2)",
+            )
         )
     else:
         blocks.append(Equation(formula("F_{c}"), None, None, fmt.force(sl.cohesion), "no cohesion (c = 0)"))
@@ -1037,16 +1132,30 @@ def _sliding(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
         if sl.passive == 0.0:
             note = "the ignored depth reaches the base: no passive resistance"
         blocks.append(
-            Equation(formula("F_{p}"), formula("K B ((c + D)² − z_{0}²) / 2"),
-                     f"{fmt.gradient(soil.passive)} × {B} × (({c} + {D})² − max({c}, {z})²) / 2", fmt.force(sl.passive), formula(note))
+            Equation(
+                formula("F_{p}"),
+                formula("K B ((c + D)² − z_{0}²) / 2"),
+                f"{fmt.gradient(soil.passive)} × {B} × (({c} + {D})² − max({c}, {z})²) / 2",
+                fmt.force(sl.passive),
+                formula(note),
+            )
         )
     else:
         blocks.append(Equation(formula("F_{p}"), None, None, fmt.force(sl.passive), "no passive resistance (K = 0)"))
     blocks += [
-        Equation(formula("R"), formula("F_{μ} + F_{c} + F_{p}"), f"{fmt.force(sl.friction)} + {fmt.force(sl.cohesion)} + {fmt.force(sl.passive)}",
-                 fmt.force(sl.resistance), "friction and passive combined (IBC 1806.3.1)"),
-        Equation(formula("ratio"), formula("R / V"), f"{fmt.force(sl.resistance)} / {fmt.force(sl.force)}",
-                 plain(ratio_text(sl.ratio, sl.required, sl.passes), bold=True)),
+        Equation(
+            formula("R"),
+            formula("F_{μ} + F_{c} + F_{p}"),
+            f"{fmt.force(sl.friction)} + {fmt.force(sl.cohesion)} + {fmt.force(sl.passive)}",
+            fmt.force(sl.resistance),
+            "friction and passive combined (IBC 1806.3.1)",
+        ),
+        Equation(
+            formula("ratio"),
+            formula("R / V"),
+            f"{fmt.force(sl.resistance)} / {fmt.force(sl.force)}",
+            plain(ratio_text(sl.ratio, sl.required, sl.passes), bold=True),
+        ),
         _check_verdict(Check.SLIDING, sl.ratio, sl.required, sl.passes),
     ]
     return _lead(_tail(blocks, 2), 3)
@@ -1055,7 +1164,11 @@ def _sliding(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
 def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
     g = result.governing[Check.BEARING]
     if math.isinf(g.ratio):
-        return [Heading("Soil bearing", 2), Para("No case presses on the soil: no demand."), Verdict(True, "Bearing passes: no demand.")]
+        return [
+            Heading("Soil bearing", 2),
+            Para("No case presses on the soil: no demand."),
+            Verdict(True, "Bearing passes: no demand."),
+        ]
     case, combo, i, f_d = _case_of(result, g)
     br = case.bearing
     assert br is not None
@@ -1081,14 +1194,29 @@ def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
     blocks: list[Block] = _governing_heading(Check.BEARING, g)
     blocks += [
         Equation(formula("N"), formula("Σ f P + f_{D} W"), _join(n_terms), N),
-        Equation(formula("M"), formula("± Σ f H (h + D) + Σ f P (x − L/2)"), _join(m_terms), M,
-                 "about the footing's mid-length; + toward x = L; loads at mid-length add nothing"),
+        Equation(
+            formula("M"),
+            formula("± Σ f H (h + D) + Σ f P (x − L/2)"),
+            _join(m_terms),
+            M,
+            "about the footing's mid-length; + toward x = L; loads at mid-length add nothing",
+        ),
     ]
     if not br.stable:
         blocks += [
-            Equation(formula("e"), formula("M / N"), f"{M} / {N}", fmt.length(br.eccentricity) if math.isfinite(br.eccentricity) else "∞"),
-            Para(formula("N ≤ 0 or |e| ≥ L/2: the resultant falls outside the footing and the footing cannot be in "
-                         "equilibrium on the soil. It overturns; bearing fails."), "fail"),
+            Equation(
+                formula("e"),
+                formula("M / N"),
+                f"{M} / {N}",
+                fmt.length(br.eccentricity) if math.isfinite(br.eccentricity) else "∞",
+            ),
+            Para(
+                formula(
+                    "N ≤ 0 or |e| ≥ L/2: the resultant falls outside the footing and the footing cannot be in "
+                    "equilibrium on the soil. It overturns; bearing fails."
+                ),
+                "fail",
+            ),
             _check_verdict(Check.BEARING, br.ratio, br.required, br.passes),
         ]
         return _lead(blocks, 3)
@@ -1099,39 +1227,78 @@ def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
     blocks.append(Equation(formula("e"), formula("M / N"), f"{M} / {N}", fmt.length(br.eccentricity)))
     if not beyond:
         blocks += [
-            Equation(formula("|e|"), None, None, formula(f"{e_abs} ≤ L/6 = {fmt.length(kern_half)}", bold=True),
-                     "the resultant is inside the kern (middle third): the whole footing is in contact"),
-            Equation(formula("q_{max}"), formula("N / (B L) (1 + 6|e| / L)"), f"{N} / ({B} × {L}) × (1 + 6 × {e_abs} / {L})", fmt.pressure(br.q_max)),
-            Equation(formula("q_{min}"), formula("N / (B L) (1 − 6|e| / L)"), f"{N} / ({B} × {L}) × (1 − 6 × {e_abs} / {L})", fmt.pressure(br.q_min)),
+            Equation(
+                formula("|e|"),
+                None,
+                None,
+                formula(f"{e_abs} ≤ L/6 = {fmt.length(kern_half)}", bold=True),
+                "the resultant is inside the kern (middle third): the whole footing is in contact",
+            ),
+            Equation(
+                formula("q_{max}"),
+                formula("N / (B L) (1 + 6|e| / L)"),
+                f"{N} / ({B} × {L}) × (1 + 6 × {e_abs} / {L})",
+                fmt.pressure(br.q_max),
+            ),
+            Equation(
+                formula("q_{min}"),
+                formula("N / (B L) (1 − 6|e| / L)"),
+                f"{N} / ({B} × {L}) × (1 − 6 × {e_abs} / {L})",
+                fmt.pressure(br.q_min),
+            ),
         ]
     else:
         blocks += [
-            Equation(formula("|e|"), None, None, formula(f"{e_abs} > L/6 = {fmt.length(kern_half)}", bold=True),
-                     "the resultant is beyond the kern: only part of the footing is in contact and the pressure is a triangle"),
-            Equation(formula("a"), formula("3 (L/2 − |e|)"), f"3 × ({L}/2 − {e_abs})", fmt.length(br.contact_length), "contact length"),
-            Equation(formula("q_{max}"), formula("2N / (3B (L/2 − |e|))"), f"2 × {N} / (3 × {B} × ({L}/2 − {e_abs}))", fmt.pressure(br.q_max)),
+            Equation(
+                formula("|e|"),
+                None,
+                None,
+                formula(f"{e_abs} > L/6 = {fmt.length(kern_half)}", bold=True),
+                "the resultant is beyond the kern: only part of the footing is in contact and the pressure is a triangle",
+            ),
+            Equation(
+                formula("a"), formula("3 (L/2 − |e|)"), f"3 × ({L}/2 − {e_abs})", fmt.length(br.contact_length), "contact length"
+            ),
+            Equation(
+                formula("q_{max}"),
+                formula("2N / (3B (L/2 − |e|))"),
+                f"2 × {N} / (3 × {B} × ({L}/2 − {e_abs}))",
+                fmt.pressure(br.q_max),
+            ),
             Equation(formula("q_{min}"), None, None, fmt.pressure(br.q_min), "no tension beyond the contact length"),
         ]
     if soil.bearing_basis is BearingBasis.NET:
         blocks.append(
-            Equation(formula("q"), formula("q_{max} − γ_{s} (c + D)"),
-                     f"{fmt.pressure(br.q_max)} − {fmt.unit_weight(soil.unit_weight)} × ({fmt.length(wall.footing.cover)} + {fmt.length(result.thickness)})",
-                     fmt.pressure(br.pressure_compared), "net pressure, for a net allowable")
+            Equation(
+                formula("q"),
+                formula("q_{max} − γ_{s} (c + D)"),
+                f"{fmt.pressure(br.q_max)} − {fmt.unit_weight(soil.unit_weight)} × ({fmt.length(wall.footing.cover)} + {fmt.length(result.thickness)})",
+                fmt.pressure(br.pressure_compared),
+                "net pressure, for a net allowable",
+            )
         )
         q_symbol = "q"
     else:
         q_symbol = "q_{max}"
     if combo.has_wind_or_seismic and project.criteria.bearing_increase != 1.0:
         blocks.append(
-            Equation(formula("q_{a}"), formula("q_{a,report} × increase"),
-                     f"{fmt.pressure(soil.allowable_bearing)} × {factor_text(project.criteria.bearing_increase)}", fmt.pressure(br.allowable),
-                     "combination with W or E")
+            Equation(
+                formula("q_{a}"),
+                formula("q_{a,report} × increase"),
+                f"{fmt.pressure(soil.allowable_bearing)} × {factor_text(project.criteria.bearing_increase)}",
+                fmt.pressure(br.allowable),
+                "combination with W or E",
+            )
         )
     else:
         blocks.append(Equation(formula("q_{a}"), None, None, fmt.pressure(br.allowable), "allowable bearing pressure"))
     blocks += [
-        Equation(formula("ratio"), formula(f"q_{{a}} / {q_symbol}"), f"{fmt.pressure(br.allowable)} / {fmt.pressure(br.pressure_compared)}",
-                 plain(ratio_text(br.ratio, br.required, br.passes), bold=True)),
+        Equation(
+            formula("ratio"),
+            formula(f"q_{{a}} / {q_symbol}"),
+            f"{fmt.pressure(br.allowable)} / {fmt.pressure(br.pressure_compared)}",
+            plain(ratio_text(br.ratio, br.required, br.passes), bold=True),
+        ),
         _check_verdict(Check.BEARING, br.ratio, br.required, br.passes, f"q_{{a}} / {q_symbol}"),
     ]
     blocks.append(pressure_drawing(diagram, br.allowable, result, g, fmt, CONTENT_WIDTH, 150.0))
@@ -1147,7 +1314,15 @@ def _results_table(result: WallResult) -> list[Block]:
             rows.append((_CHECK_TITLE[check], "—", "no demand", f"{g.required:.2f}", "passes (no demand)"))
             continue
         verdict = "passes" if g.passes else "FAILS"
-        rows.append((_CHECK_TITLE[check], case_name(g.combination, g.direction), ratio_text(g.ratio, g.required, g.passes), f"{g.required:.2f}", verdict))
+        rows.append(
+            (
+                _CHECK_TITLE[check],
+                case_name(g.combination, g.direction),
+                ratio_text(g.ratio, g.required, g.passes),
+                f"{g.required:.2f}",
+                verdict,
+            )
+        )
         if not g.passes:
             fail_rows.append(k)
     final = "The wall passes every check." if result.passes else "The wall FAILS: the footing must be revised."
@@ -1155,8 +1330,13 @@ def _results_table(result: WallResult) -> list[Block]:
         Group(
             (
                 Heading("Results on the current footing", 2),
-                Table(("Check", "Governing case", "Ratio", "Required", "Result"), tuple(rows), (0.18, 0.42, 0.12, 0.12, 0.16),
-                      align="LLRRL", fail_rows=tuple(fail_rows)),
+                Table(
+                    ("Check", "Governing case", "Ratio", "Required", "Result"),
+                    tuple(rows),
+                    (0.18, 0.42, 0.12, 0.12, 0.16),
+                    align="LLRRL",
+                    fail_rows=tuple(fail_rows),
+                ),
                 Verdict(result.passes, final),
             )
         )
@@ -1189,7 +1369,9 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
     col = int(abs(s.widths - s.width).argmin())
     table_rows: list[tuple[Cell, ...]] = []
     fail_rows = []
-    for k, (name, r, c) in enumerate((("smallest passing", row, col), ("next narrower", row, col - 1), ("next thinner", row - 1, col))):
+    for k, (name, r, c) in enumerate(
+        (("smallest passing", row, col), ("next narrower", row, col - 1), ("next thinner", row - 1, col))
+    ):
         if r < 0 or c < 0:
             table_rows.append((name, "outside the bounds", "", "", "", "not a candidate"))
             continue
@@ -1207,26 +1389,43 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
         table_rows.append((name, f"{fmt.length(float(s.widths[c]))} × {fmt.length(float(s.thicknesses[r]))}", *values, verdict))
     blocks += [
         Para(formula(f"Smallest passing size: B × D = {fmt.length(s.width)} × {fmt.length(s.thickness)}.", bold=True)),
-        Table(("Candidate", "B × D", "Overturning", "Sliding", "Bearing", "Result"), tuple(table_rows),
-              (0.18, 0.22, 0.13, 0.13, 0.13, 0.21), align="LLRRRL", fail_rows=tuple(fail_rows)),
-        Para("Values are the lowest ratio / required over all cases (1.000 or more passes). Program's finding: " + s.message + ".", "small"),
+        Table(
+            ("Candidate", "B × D", "Overturning", "Sliding", "Bearing", "Result"),
+            tuple(table_rows),
+            (0.18, 0.22, 0.13, 0.13, 0.13, 0.21),
+            align="LLRRRL",
+            fail_rows=tuple(fail_rows),
+        ),
+        Para(
+            "Values are the lowest ratio / required over all cases (1.000 or more passes). Program's finding: " + s.message + ".",
+            "small",
+        ),
     ]
     if report.sized_result is not None:
         sr = report.sized_result
-        parts = [f"{_CHECK_WORD[c]} {ratio_text(sr.governing[c].ratio, sr.governing[c].required, sr.governing[c].passes)}" for c in ALL_CHECKS]
+        parts = [
+            f"{_CHECK_WORD[c]} {ratio_text(sr.governing[c].ratio, sr.governing[c].required, sr.governing[c].passes)}"
+            for c in ALL_CHECKS
+        ]
         blocks.append(Para("Governing ratios at the smallest passing size: " + ", ".join(parts) + ".", "small"))
     if _same_size(wall, s):
         blocks.append(Verdict(True, "The current footing is this smallest passing size."))
     elif report.result.passes:
         blocks.append(
-            Verdict(True, f"The current footing ({fmt.length(wall.footing.width)} × {fmt.length(wall.footing.thickness)}) is not this size; "
-                          "it passes as drawn.")
+            Verdict(
+                True,
+                f"The current footing ({fmt.length(wall.footing.width)} × {fmt.length(wall.footing.thickness)}) is not this size; "
+                "it passes as drawn.",
+            )
         )
     else:
         blocks.append(
-            Verdict(False, f"The current footing ({fmt.length(wall.footing.width)} × {fmt.length(wall.footing.thickness)}) FAILS; "
-                           f"revise it, for example to the smallest passing size {fmt.length(s.width)} × {fmt.length(s.thickness)}, "
-                           "as the engineer decides.")
+            Verdict(
+                False,
+                f"The current footing ({fmt.length(wall.footing.width)} × {fmt.length(wall.footing.thickness)}) FAILS; "
+                f"revise it, for example to the smallest passing size {fmt.length(s.width)} × {fmt.length(s.thickness)}, "
+                "as the engineer decides.",
+            )
         )
     return _lead(blocks, 2)
 
@@ -1271,9 +1470,21 @@ def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
             fail_rows.append(k)
     u = fmt.unit
     headers = (
-        "Combination", "Dir", f"N ({u(Kind.FORCE)})", f"V ({u(Kind.FORCE)})", f"M ({u(Kind.MOMENT)})", f"e ({u(Kind.LENGTH)})",
-        formula(f"M_{{OT}} ({u(Kind.MOMENT)})"), formula(f"M_{{R}} ({u(Kind.MOMENT)})"), "OT ratio", f"R ({u(Kind.FORCE)})", "SL ratio",
-        formula(f"q_{{max}} ({u(Kind.PRESSURE)})"), formula(f"q_{{a}} ({u(Kind.PRESSURE)})"), "BR ratio", "Result",
+        "Combination",
+        "Dir",
+        f"N ({u(Kind.FORCE)})",
+        f"V ({u(Kind.FORCE)})",
+        f"M ({u(Kind.MOMENT)})",
+        f"e ({u(Kind.LENGTH)})",
+        formula(f"M_{{OT}} ({u(Kind.MOMENT)})"),
+        formula(f"M_{{R}} ({u(Kind.MOMENT)})"),
+        "OT ratio",
+        f"R ({u(Kind.FORCE)})",
+        "SL ratio",
+        formula(f"q_{{max}} ({u(Kind.PRESSURE)})"),
+        formula(f"q_{{a}} ({u(Kind.PRESSURE)})"),
+        "BR ratio",
+        "Result",
     )
     widths = (0.17, 0.035, 0.06, 0.055, 0.065, 0.055, 0.065, 0.065, 0.055, 0.06, 0.055, 0.06, 0.055, 0.055, 0.065)
     total = sum(widths)
@@ -1286,9 +1497,21 @@ def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
             "— in a ratio column: no demand; n/a: the combination does not apply to that check.",
             "small",
         ),
-        Table(headers, tuple(rows), tuple(w / total for w in widths), align="LCRRRRRRRRRRRRL", font_size=6.0, fail_rows=tuple(fail_rows)),
+        Table(
+            headers,
+            tuple(rows),
+            tuple(w / total for w in widths),
+            align="LCRRRRRRRRRRRRL",
+            font_size=6.0,
+            fail_rows=tuple(fail_rows),
+        ),
     ]
-    return Section(f"appendix:{report.wall.id}", f"Appendix: all cases, wall {report.wall.id}", f"Appendix, wall {report.wall.id}", tuple(blocks))
+    return Section(
+        f"appendix:{report.wall.id}",
+        f"Appendix: all cases, wall {report.wall.id}",
+        f"Appendix, wall {report.wall.id}",
+        tuple(blocks),
+    )
 
 
 # ---------------------------------------------------------------------------------------------
@@ -1298,9 +1521,20 @@ def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
 # Drawing scales: (points per metre at 1:n, the printed name). US architectural and engineering
 # scales; SI ratios (common practice).
 _US_SCALES = (
-    (16, '3/4" = 1\'-0"'), (24, '1/2" = 1\'-0"'), (32, '3/8" = 1\'-0"'), (48, '1/4" = 1\'-0"'), (64, '3/16" = 1\'-0"'),
-    (96, '1/8" = 1\'-0"'), (128, '3/32" = 1\'-0"'), (192, '1/16" = 1\'-0"'), (240, "1\" = 20'-0\""), (384, '1/32" = 1\'-0"'),
-    (480, "1\" = 40'-0\""), (600, "1\" = 50'-0\""), (1200, "1\" = 100'-0\""), (2400, "1\" = 200'-0\""),
+    (16, '3/4" = 1\'-0"'),
+    (24, '1/2" = 1\'-0"'),
+    (32, '3/8" = 1\'-0"'),
+    (48, '1/4" = 1\'-0"'),
+    (64, '3/16" = 1\'-0"'),
+    (96, '1/8" = 1\'-0"'),
+    (128, '3/32" = 1\'-0"'),
+    (192, '1/16" = 1\'-0"'),
+    (240, '1" = 20\'-0"'),
+    (384, '1/32" = 1\'-0"'),
+    (480, '1" = 40\'-0"'),
+    (600, '1" = 50\'-0"'),
+    (1200, '1" = 100\'-0"'),
+    (2400, '1" = 200\'-0"'),
 )
 _SI_SCALES = tuple((n, f"1:{n}") for n in (10, 20, 25, 50, 75, 100, 150, 200, 250, 500, 1000, 2000))
 _POINTS_PER_METRE = 72.0 / 0.0254
@@ -1399,7 +1633,10 @@ def elevation_drawing(wall: Wall, fmt: _Fmt, width: float, height: float) -> Dra
         shapes.append(Label(xa - 4, y_band + 2, text, "end", 5.5, color="load"))
         y_band += 10.0
     if point_loads:
-        items = [(f.extension_start + p.at, f"{p.case.value} {fmt.force(p.value)}" + (" rev." if p.reverses else "")) for p in point_loads]
+        items = [
+            (f.extension_start + p.at, f"{p.case.value} {fmt.force(p.value)}" + (" rev." if p.reverses else ""))
+            for p in point_loads
+        ]
         for x, text in _group_loads(items):
             xx = X(x)
             shapes.append(Arrow(xx, y_band + 16, xx, top + 2, 0.7))
@@ -1408,7 +1645,11 @@ def elevation_drawing(wall: Wall, fmt: _Fmt, width: float, height: float) -> Dra
     shapes.append(Dimension(X(0), Y(-f.thickness), X(length), Y(-f.thickness), f"L = {fmt.length(length)}", offset=-18.0))
     if f.extension_start > 0 or f.extension_end > 0:
         if f.extension_start > 0:
-            shapes.append(Dimension(X(0), Y(-f.thickness), X(ws), Y(-f.thickness), fmt.length(f.extension_start), offset=-8.0, outside="start"))
+            shapes.append(
+                Dimension(
+                    X(0), Y(-f.thickness), X(ws), Y(-f.thickness), fmt.length(f.extension_start), offset=-8.0, outside="start"
+                )
+            )
         if f.extension_end > 0:
             shapes.append(Dimension(X(we), Y(-f.thickness), X(length), Y(-f.thickness), fmt.length(f.extension_end), offset=-8.0))
     wall_text = f"wall, {fmt.length(wall.length)} long"
@@ -1458,7 +1699,9 @@ def section_drawing(wall: Wall, project: Project, fmt: _Fmt, width: float, heigh
     return Drawing(width, height, tuple(shapes), f"Section across the footing, scale {scale_name}.")
 
 
-def pressure_drawing(diagram: PressureDiagram, allowable: float, result: WallResult, g: Governing, fmt: _Fmt, width: float, height: float) -> Drawing:
+def pressure_drawing(
+    diagram: PressureDiagram, allowable: float, result: WallResult, g: Governing, fmt: _Fmt, width: float, height: float
+) -> Drawing:
     """Soil pressure under the footing in the governing bearing case, with the allowable line."""
     length = result.length
     left, right, top, bottom = 70.0, 30.0, 48.0, 30.0
@@ -1494,29 +1737,81 @@ def pressure_drawing(diagram: PressureDiagram, allowable: float, result: WallRes
         x_peak = diagram.contact_start if peak_left else diagram.contact_end
         x_other = diagram.contact_end if peak_left else diagram.contact_start
         anchor_peak, anchor_other = ("start", "end") if peak_left else ("end", "start")
-        shapes.append(Label(X(x_peak), y_base - diagram.q_max * sy - 8, f"q_max = {fmt.pressure(diagram.q_max)}", anchor_peak, 6.0, bold=True))
+        shapes.append(
+            Label(
+                X(x_peak), y_base - diagram.q_max * sy - 8, f"q_max = {fmt.pressure(diagram.q_max)}", anchor_peak, 6.0, bold=True
+            )
+        )
         if diagram.q_min > 0:
-            shapes.append(Label(X(x_other), y_base - diagram.q_min * sy - 8, f"q_min = {fmt.pressure(diagram.q_min)}", anchor_other, 6.0))
+            shapes.append(
+                Label(X(x_other), y_base - diagram.q_min * sy - 8, f"q_min = {fmt.pressure(diagram.q_min)}", anchor_other, 6.0)
+            )
         if diagram.contact_end - diagram.contact_start < length * (1 - 1e-9):
             shapes.append(
-                Dimension(X(diagram.contact_start), y_base, X(diagram.contact_end), y_base,
-                          f"contact a = {fmt.length(diagram.contact_end - diagram.contact_start)}", offset=-(diagram.q_max * sy + 24))
+                Dimension(
+                    X(diagram.contact_start),
+                    y_base,
+                    X(diagram.contact_end),
+                    y_base,
+                    f"contact a = {fmt.length(diagram.contact_end - diagram.contact_start)}",
+                    offset=-(diagram.q_max * sy + 24),
+                )
             )
     else:
-        shapes.append(Label(width / 2, y_base - 30, "no equilibrium: the resultant is outside the footing", "middle", 7.0, bold=True, color="fail"))
+        shapes.append(
+            Label(
+                width / 2,
+                y_base - 30,
+                "no equilibrium: the resultant is outside the footing",
+                "middle",
+                7.0,
+                bold=True,
+                color="fail",
+            )
+        )
     ya = y_base - allowable * sy
     shapes.append(Line(X(0), ya, X(length), ya, 0.8, dash=True, color="allow"))
     shapes.append(Label(X(0) - 4, ya - 2, f"q_a = {fmt.pressure(allowable)}", "end", 6.0, color="allow"))
     shapes.append(Label(X(0) - 4, y_base + 2, "x = 0", "end", 5.5))
     shapes.append(Label(X(length) + 4, y_base + 2, "x = L", "start", 5.5))
-    caption = (f"Soil pressure in the governing bearing case {case_name(g.combination, g.direction)} "
-               "(pressures drawn downward to a uniform scale; dashed: allowable).")
+    caption = (
+        f"Soil pressure in the governing bearing case {case_name(g.combination, g.direction)} "
+        "(pressures drawn downward to a uniform scale; dashed: allowable)."
+    )
     return Drawing(width, height, tuple(shapes), caption)
 
 
 __all__ = [
-    "CONTENT_WIDTH", "Arrow", "Block", "Bullets", "Contents", "ContentsEntry", "Dimension", "Drawing", "DrawingRow", "Equation", "Group",
-    "Heading", "KeyValues", "Label", "Line", "Package", "Para", "Polygon", "Rect", "Run", "Section", "Table", "TitleBlock",
-    "Verdict", "WallReport", "build_package", "drawing_scale", "formula", "plain", "ratio_text", "select_walls",
+    "CONTENT_WIDTH",
+    "Arrow",
+    "Block",
+    "Bullets",
+    "Contents",
+    "ContentsEntry",
+    "Dimension",
+    "Drawing",
+    "DrawingRow",
+    "Equation",
+    "Group",
+    "Heading",
+    "KeyValues",
+    "Label",
+    "Line",
+    "Package",
+    "Para",
+    "Polygon",
+    "Rect",
+    "Run",
+    "Section",
+    "Table",
+    "TitleBlock",
+    "Verdict",
+    "WallReport",
+    "build_package",
+    "drawing_scale",
+    "formula",
+    "plain",
+    "ratio_text",
+    "select_walls",
     "wall_report",
 ]

@@ -88,7 +88,9 @@ def asce7_16_asd(sds: float) -> tuple[LoadCombination, ...]:
         _combo("D + 0.75L + 0.45W + 0.75Lr", D=1.0, L=COMPANION, W=wind_companion, Lr=COMPANION),
         _combo("D + 0.75L + 0.45W + 0.75S", D=1.0, L=COMPANION, W=wind_companion, S=COMPANION),
         _combo("D + 0.75L + 0.45W + 0.75R", D=1.0, L=COMPANION, W=wind_companion, R=COMPANION),
-        _combo(f"{_num(d_up_companion)}D + 0.75L + 0.525E + 0.75S", D=d_up_companion, L=COMPANION, E=seismic_companion, S=COMPANION),
+        _combo(
+            f"{_num(d_up_companion)}D + 0.75L + 0.525E + 0.75S", D=d_up_companion, L=COMPANION, E=seismic_companion, S=COMPANION
+        ),
         _combo("0.6D + 0.6W", D=COUNTERACTING_DEAD, W=ASD_WIND),
         _combo(f"{_num(d_down)}D + 0.7E", D=d_down, E=ASD_SEISMIC),
     )

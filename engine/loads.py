@@ -65,9 +65,7 @@ def vertical_resultants(wall: Wall) -> tuple[VerticalResultant, ...]:
 def lateral_resultants(wall: Wall) -> tuple[LateralResultant, ...]:
     """The wall's in-plane shears."""
     return tuple(
-        LateralResultant(load.case, load.value, load.height, load.label)
-        for load in wall.loads
-        if isinstance(load, LateralLoad)
+        LateralResultant(load.case, load.value, load.height, load.label) for load in wall.loads if isinstance(load, LateralLoad)
     )
 
 

@@ -260,7 +260,9 @@ class Wall:
         low, high = -self.footing.extension_start, self.length + self.footing.extension_end
         for i, load in enumerate(self.loads):
             if isinstance(load, LineLoad):
-                _require(low - 1e-9 <= load.start and load.end <= high + 1e-9, f"loads[{i}]", "the line load runs past the footing")
+                _require(
+                    low - 1e-9 <= load.start and load.end <= high + 1e-9, f"loads[{i}]", "the line load runs past the footing"
+                )
             elif isinstance(load, PointLoad):
                 _require(low - 1e-9 <= load.at <= high + 1e-9, f"loads[{i}].at", "the point load is off the footing")
 

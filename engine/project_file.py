@@ -75,7 +75,9 @@ def _show(value: Any) -> str:
     return text if len(text) <= 60 else text[:57] + "..."
 
 
-def _quantity(obj: dict[str, Any], key: str, kind: Kind, default: str | None, *, positive: bool = False, non_negative: bool = False) -> float:
+def _quantity(
+    obj: dict[str, Any], key: str, kind: Kind, default: str | None, *, positive: bool = False, non_negative: bool = False
+) -> float:
     """Parse obj[key] ("number unit") as ``kind``; missing -> default (or an error when None)."""
     if key not in obj:
         if default is None:
@@ -152,7 +154,7 @@ def _combination(raw: Any) -> LoadCombination:
     obj = _object(raw, "", required=True)
     name = _text(obj, "name")
     if not name.strip():
-        raise InputError("name", "is missing; give the combination a name such as \"0.6D + 0.6W\"")
+        raise InputError("name", 'is missing; give the combination a name such as "0.6D + 0.6W"')
     factors_raw = _object(obj.get("factors"), "factors", required=True)
     factors = []
     for key in factors_raw:
@@ -194,8 +196,11 @@ def _criteria(raw: Any) -> DesignCriteria:
             "sds", f"{sds:g} makes the counteracting dead-load factor 0.6 - 0.14 S_DS negative (ASCE 7-16 2.4.5); check the value"
         )
     return DesignCriteria(
-        method=method, required=required, sds=sds,
-        bearing_increase=_number(obj, "bearing_increase", 1.0, positive=True), custom_combinations=tuple(custom),
+        method=method,
+        required=required,
+        sds=sds,
+        bearing_increase=_number(obj, "bearing_increase", 1.0, positive=True),
+        custom_combinations=tuple(custom),
     )
 
 
@@ -224,17 +229,29 @@ def _load(raw: Any, wall_length: float) -> LineLoad | PointLoad | LateralLoad:
         if not end > start:
             if "end" in obj:
                 raise InputError("end", f'must be beyond start ("{obj.get("start", "0 ft")}"), got "{obj["end"]}"')
-            raise InputError("start", f'"{obj.get("start")}" is at or beyond the wall\'s end, where the load ends by default; give an "end"')
-        return LineLoad(case=case, value=_quantity(obj, "value", Kind.LINE_LOAD, None), start=start, end=end, label=label, reverses=reverses)
+            raise InputError(
+                "start", f'"{obj.get("start")}" is at or beyond the wall\'s end, where the load ends by default; give an "end"'
+            )
+        return LineLoad(
+            case=case, value=_quantity(obj, "value", Kind.LINE_LOAD, None), start=start, end=end, label=label, reverses=reverses
+        )
     if kind == "point":
         case = _case(obj)
         reverses = _reverses(obj, case, default=case.is_lateral_source)
-        return PointLoad(case=case, value=_quantity(obj, "value", Kind.FORCE, None), at=_quantity(obj, "at", Kind.LENGTH, None), label=label, reverses=reverses)
+        return PointLoad(
+            case=case,
+            value=_quantity(obj, "value", Kind.FORCE, None),
+            at=_quantity(obj, "at", Kind.LENGTH, None),
+            label=label,
+            reverses=reverses,
+        )
     if kind == "lateral":
         case = _case(obj, (LoadCase.W, LoadCase.E))
         return LateralLoad(
-            case=case, value=_quantity(obj, "value", Kind.FORCE, None, non_negative=True),
-            height=_quantity(obj, "height", Kind.LENGTH, None, non_negative=True), label=label,
+            case=case,
+            value=_quantity(obj, "value", Kind.FORCE, None, non_negative=True),
+            height=_quantity(obj, "height", Kind.LENGTH, None, non_negative=True),
+            label=label,
         )
     raise InputError("type", f'expected "line", "point" or "lateral", got {_show(kind)}')
 
@@ -293,14 +310,17 @@ def _wall(raw: Any, units: str) -> Wall:
             if isinstance(load, LineLoad) and (load.start < low - 1e-9 or load.end > high + 1e-9):
                 raise InputError("", "the line load runs past the ends of the footing")
             if isinstance(load, PointLoad) and not low - 1e-9 <= load.at <= high + 1e-9:
-                raise InputError("at", f"the point load is off the footing (it runs from {format_length(low, units)} to {format_length(high, units)} from the wall's start)")
+                raise InputError(
+                    "at",
+                    f"the point load is off the footing (it runs from {format_length(low, units)} to {format_length(high, units)} from the wall's start)",
+                )
             if not isinstance(load, LateralLoad) and load.reverses:
                 ends = (load.start, load.end) if isinstance(load, LineLoad) else (load.at, load.at)
                 mirrored = [length - x for x in ends]
                 if min(mirrored) < low - 1e-9 or max(mirrored) > high + 1e-9:
                     raise InputError(
                         "reverses",
-                        "in direction \"-\" this load acts at its mirror image about the wall's mid-length, which is off the "
+                        'in direction "-" this load acts at its mirror image about the wall\'s mid-length, which is off the '
                         'footing; extend the footing at that end or set "reverses": false',
                     )
         loads.append(load)
@@ -314,7 +334,16 @@ def _wall(raw: Any, units: str) -> Wall:
             thickness_max=_quantity(z, "thickness_max", Kind.LENGTH, "4 ft", positive=True),
             thickness_step=_quantity(z, "thickness_step", Kind.LENGTH, "1 in", positive=True),
         )
-    return Wall(id=wid, label=_text(obj, "label"), length=length, thickness=thickness, footing=footing, stem=stem, loads=tuple(loads), sizing=sizing)
+    return Wall(
+        id=wid,
+        label=_text(obj, "label"),
+        length=length,
+        thickness=thickness,
+        footing=footing,
+        stem=stem,
+        loads=tuple(loads),
+        sizing=sizing,
+    )
 
 
 def _wall_cached(raw: Any, units: str) -> Wall:
@@ -343,7 +372,9 @@ def parse_project(raw: Any) -> Project:
     if obj is None:
         raise FormatVersionError("", "this is not a Kernline project file (expected a JSON object)")
     if obj.get("format") != FORMAT:
-        raise FormatVersionError("format", f'this is not a Kernline project file (expected "{FORMAT}", got {_show(obj.get("format"))})')
+        raise FormatVersionError(
+            "format", f'this is not a Kernline project file (expected "{FORMAT}", got {_show(obj.get("format"))})'
+        )
     version = obj.get("version")
     if isinstance(version, bool) or not isinstance(version, int):
         raise FormatVersionError("version", f"expected a whole number, got {_show(version)}")
@@ -466,6 +497,16 @@ def with_footing_sizes(raw: dict[str, Any], sizes: dict[str, tuple[float, float]
 
 
 __all__ = [
-    "EXTENSION", "FORMAT", "VERSION", "ProjectDocument", "atomic_write_text", "dumps_project", "load_project",
-    "loads_project", "parse_project", "save_project", "with_footing_sizes", "Check",
+    "EXTENSION",
+    "FORMAT",
+    "VERSION",
+    "ProjectDocument",
+    "atomic_write_text",
+    "dumps_project",
+    "load_project",
+    "loads_project",
+    "parse_project",
+    "save_project",
+    "with_footing_sizes",
+    "Check",
 ]

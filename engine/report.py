@@ -75,8 +75,18 @@ _SUB_RISE = -0.22  # subscript baseline shift / text size
 
 # Characters the built-in Helvetica (WinAnsi) cannot show, and what prints instead.
 _ASCII_FALLBACK = {
-    "≥": ">=", "≤": "<=", "−": "-", "Σ": "sum ", "√": "sqrt", "∞": "inf", "γ": "g", "μ": "mu", "²": "^2", "³": "^3",
-    "→": "->", "±": "+/-",
+    "≥": ">=",
+    "≤": "<=",
+    "−": "-",
+    "Σ": "sum ",
+    "√": "sqrt",
+    "∞": "inf",
+    "γ": "g",
+    "μ": "mu",
+    "²": "^2",
+    "³": "^3",
+    "→": "->",
+    "±": "+/-",
 }
 
 _COLORS = {
@@ -363,8 +373,15 @@ def _flowable_classes() -> dict[str, type]:
     class RichText(Flowable):
         """Wrapped runs of text with an optional bullet, box and border; splits between lines."""
 
-        def __init__(self, lines: list[list[Span]], style: TextStyle, fonts: _Fonts, text: _Text,
-                     wrapped: list[_WrappedLine] | None = None, width: float = 0.0) -> None:
+        def __init__(
+            self,
+            lines: list[list[Span]],
+            style: TextStyle,
+            fonts: _Fonts,
+            text: _Text,
+            wrapped: list[_WrappedLine] | None = None,
+            width: float = 0.0,
+        ) -> None:
             super().__init__()
             self.lines, self.style, self.fonts, self.text = lines, style, fonts, text
             self._wrapped, self._wrapped_width = wrapped, width
@@ -394,9 +411,17 @@ def _flowable_classes() -> dict[str, type]:
             k = min(k, len(wrapped) - _MIN_LINES)  # no widow: at least two lines go on
             if k < _MIN_LINES or not self.style.splits:  # no orphan: at least two lines stay
                 return []
-            head = RichText(self.lines, replace(self.style, space_after=0.0), self.fonts, self.text, wrapped[:k], self._wrapped_width)
-            tail = RichText(self.lines, replace(self.style, space_before=0.0, bullet=""), self.fonts, self.text, wrapped[k:],
-                            self._wrapped_width)
+            head = RichText(
+                self.lines, replace(self.style, space_after=0.0), self.fonts, self.text, wrapped[:k], self._wrapped_width
+            )
+            tail = RichText(
+                self.lines,
+                replace(self.style, space_before=0.0, bullet=""),
+                self.fonts,
+                self.text,
+                wrapped[k:],
+                self._wrapped_width,
+            )
             return [head, tail]
 
         def draw(self) -> None:
@@ -423,7 +448,9 @@ def _flowable_classes() -> dict[str, type]:
         def __init__(self, drawing: Drawing, fonts: _Fonts, text: _Text) -> None:
             super().__init__()
             self.drawing, self.fonts, self.text = drawing, fonts, text
-            self.caption_lines = simpleSplit(text.glyphs(drawing.caption), fonts.regular, 6.5, drawing.width) if drawing.caption else []
+            self.caption_lines = (
+                simpleSplit(text.glyphs(drawing.caption), fonts.regular, 6.5, drawing.width) if drawing.caption else []
+            )
             self.width = drawing.width
             self.height = drawing.height + 8.0 * len(self.caption_lines) + (3 if self.caption_lines else 0)
 
@@ -789,8 +816,9 @@ class _Builder:
         n = (len(pairs) + cols - 1) // cols
         unit = CONTENT_WIDTH / cols
         widths = (unit * (0.42 if cols > 1 else 0.34), unit * (0.58 if cols > 1 else 0.66)) * cols
-        spec = GridSpec(widths, "L" * 2 * cols, 8.5, 10.5, header=False, ruled=False,
-                        label_columns=frozenset(2 * k for k in range(cols)))
+        spec = GridSpec(
+            widths, "L" * 2 * cols, 8.5, 10.5, header=False, ruled=False, label_columns=frozenset(2 * k for k in range(cols))
+        )
         rows = []
         for r in range(n):
             row: list[Any] = []
@@ -840,9 +868,17 @@ class _Builder:
         sketch = self.classes["Sketch"]
         cells = [sketch(d, self.fonts, self.text) for d in row.drawings]
         table = RLTable([cells], colWidths=[d.width + 5 for d in row.drawings])
-        table.setStyle(TableStyle([("VALIGN", (0, 0), (-1, -1), "TOP"), ("LEFTPADDING", (0, 0), (-1, -1), 0),
-                                   ("RIGHTPADDING", (0, 0), (-1, -1), 5), ("TOPPADDING", (0, 0), (-1, -1), 0),
-                                   ("BOTTOMPADDING", (0, 0), (-1, -1), 0)]))
+        table.setStyle(
+            TableStyle(
+                [
+                    ("VALIGN", (0, 0), (-1, -1), "TOP"),
+                    ("LEFTPADDING", (0, 0), (-1, -1), 0),
+                    ("RIGHTPADDING", (0, 0), (-1, -1), 5),
+                    ("TOPPADDING", (0, 0), (-1, -1), 0),
+                    ("BOTTOMPADDING", (0, 0), (-1, -1), 0),
+                ]
+            )
+        )
         table.hAlign = "LEFT"
         return table
 
@@ -1022,9 +1058,16 @@ def render_package(package: Package) -> bytes:
     page_w, page_h, fx, fy, fw, fh = _frame_geometry(package.units)
     buffer = io.BytesIO()
     doc = BaseDocTemplate(
-        buffer, pagesize=(page_w, page_h), leftMargin=fx, rightMargin=page_w - fx - fw, topMargin=MARGIN_TOP,
-        bottomMargin=fy, title=f"Calculation package: {package.title.project_name}", author=package.title.prepared_by,
-        subject="Strip footings under shear walls: overturning, sliding, soil bearing", creator=package.title.program,
+        buffer,
+        pagesize=(page_w, page_h),
+        leftMargin=fx,
+        rightMargin=page_w - fx - fw,
+        topMargin=MARGIN_TOP,
+        bottomMargin=fy,
+        title=f"Calculation package: {package.title.project_name}",
+        author=package.title.prepared_by,
+        subject="Strip footings under shear walls: overturning, sliding, soil bearing",
+        creator=package.title.program,
         invariant=1,
     )
     frame = Frame(fx, fy, fw, fh, leftPadding=0, rightPadding=0, topPadding=0, bottomPadding=0, id="body")
@@ -1075,7 +1118,9 @@ def render_report(project: Any, wall_ids: Sequence[str] | str | None = None, **o
     return render_package(package)
 
 
-def write_report(project: Any, output: str | os.PathLike[str], wall_ids: Sequence[str] | str | None = None, **options: Any) -> None:
+def write_report(
+    project: Any, output: str | os.PathLike[str], wall_ids: Sequence[str] | str | None = None, **options: Any
+) -> None:
     """Write the calculation package to ``output`` atomically (temp file in the same folder, fsync, rename).
 
     Raises:

@@ -187,19 +187,39 @@ def _case_results(table: CaseTable, ev: Evaluation) -> tuple[CaseResult, ...]:
             ot = OverturningResult(moment=m_o[i], resisting=m_r[i], ratio=r[0][i], required=req[0], passes=meets(r[0][i], req[0]))
         if applies[1][i]:
             sl = SlidingResult(
-                force=shear[i], resistance=fr[i] + co[i] + pa[i], friction=fr[i], cohesion=co[i], passive=pa[i],
-                ratio=r[1][i], required=req[1], passes=meets(r[1][i], req[1]),
+                force=shear[i],
+                resistance=fr[i] + co[i] + pa[i],
+                friction=fr[i],
+                cohesion=co[i],
+                passive=pa[i],
+                ratio=r[1][i],
+                required=req[1],
+                passes=meets(r[1][i], req[1]),
             )
         if applies[2][i]:
             br = BearingResult(
-                eccentricity=e[i], q_max=q_max[i], q_min=q_min[i], contact_length=contact[i],
-                pressure_compared=compared[i], allowable=allowable[i], stable=bool(stable[i]),
-                ratio=r[2][i], required=req[2], passes=meets(r[2][i], req[2]),
+                eccentricity=e[i],
+                q_max=q_max[i],
+                q_min=q_min[i],
+                contact_length=contact[i],
+                pressure_compared=compared[i],
+                allowable=allowable[i],
+                stable=bool(stable[i]),
+                ratio=r[2][i],
+                required=req[2],
+                passes=meets(r[2][i], req[2]),
             )
         out.append(
             CaseResult(
-                combination=case.combination.name, direction=case.direction.value, dead_factor=dead[i],
-                vertical=vertical[i], lateral=shear[i], moment=moment[i], overturning=ot, sliding=sl, bearing=br,
+                combination=case.combination.name,
+                direction=case.direction.value,
+                dead_factor=dead[i],
+                vertical=vertical[i],
+                lateral=shear[i],
+                moment=moment[i],
+                overturning=ot,
+                sliding=sl,
+                bearing=br,
             )
         )
     return tuple(out)
@@ -218,8 +238,13 @@ def governing_case(table: CaseTable, evaluation: Evaluation, check: Check) -> Go
     ratio = float(ratio_j[i]) if table.applies[j, i] else math.inf
     design: DesignCase = table.cases[i]
     return Governing(
-        check=check, ratio=ratio, required=required, combination=design.combination.name,
-        direction=design.direction.value, case_index=i, passes=meets(ratio, required),
+        check=check,
+        ratio=ratio,
+        required=required,
+        combination=design.combination.name,
+        direction=design.direction.value,
+        case_index=i,
+        passes=meets(ratio, required),
     )
 
 
@@ -230,10 +255,15 @@ def check_wall(project: Project, wall: Wall, table: CaseTable | None = None) -> 
     ev = evaluate(table, b, d)
     sw = self_weight(wall, project.soil, b, d)
     return WallResult(
-        wall_id=wall.id, width=b, thickness=d, length=wall.footing_length,
+        wall_id=wall.id,
+        width=b,
+        thickness=d,
+        length=wall.footing_length,
         self_weight=SelfWeight(footing=float(sw.footing), stem=float(sw.stem), soil=float(sw.soil)),
-        cases=CaseResults(table, ev), governing={check: governing_case(table, ev, check) for check in ALL_CHECKS},
-        table=table, evaluation=ev,
+        cases=CaseResults(table, ev),
+        governing={check: governing_case(table, ev, check) for check in ALL_CHECKS},
+        table=table,
+        evaluation=ev,
     )
 
 
@@ -251,14 +281,21 @@ def _check_json(result: CheckResult) -> dict[str, Any]:
         body: dict[str, Any] = {"moment": _num(result.moment), "resisting": _num(result.resisting)}
     elif isinstance(result, SlidingResult):
         body = {
-            "force": _num(result.force), "resistance": _num(result.resistance), "friction": _num(result.friction),
-            "cohesion": _num(result.cohesion), "passive": _num(result.passive),
+            "force": _num(result.force),
+            "resistance": _num(result.resistance),
+            "friction": _num(result.friction),
+            "cohesion": _num(result.cohesion),
+            "passive": _num(result.passive),
         }
     else:
         body = {
-            "eccentricity": _num(result.eccentricity), "q_max": _num(result.q_max), "q_min": _num(result.q_min),
-            "contact_length": _num(result.contact_length), "pressure_compared": _num(result.pressure_compared),
-            "allowable": _num(result.allowable), "stable": result.stable,
+            "eccentricity": _num(result.eccentricity),
+            "q_max": _num(result.q_max),
+            "q_min": _num(result.q_min),
+            "contact_length": _num(result.contact_length),
+            "pressure_compared": _num(result.pressure_compared),
+            "allowable": _num(result.allowable),
+            "stable": result.stable,
         }
     body.update(ratio=_num(result.ratio), required=result.required, passes=result.passes)
     return body
@@ -270,8 +307,11 @@ def wall_json(result: WallResult) -> dict[str, Any]:
     for check, g in result.governing.items():
         demand = not math.isinf(g.ratio)
         entry: dict[str, Any] = {
-            "ratio": _num(g.ratio), "required": g.required, "combination": g.combination if demand else None,
-            "direction": g.direction if demand else None, "passes": g.passes,
+            "ratio": _num(g.ratio),
+            "required": g.required,
+            "combination": g.combination if demand else None,
+            "direction": g.direction if demand else None,
+            "passes": g.passes,
         }
         if check is Check.BEARING:
             br = result.cases[g.case_index].bearing
@@ -279,7 +319,12 @@ def wall_json(result: WallResult) -> dict[str, Any]:
         governing[check.value] = entry
     cases = []
     for case in result.cases:
-        entry = {"combination": case.combination, "direction": case.direction, "vertical": _num(case.vertical), "lateral": _num(case.lateral)}
+        entry = {
+            "combination": case.combination,
+            "direction": case.direction,
+            "vertical": _num(case.vertical),
+            "lateral": _num(case.lateral),
+        }
         for check in ALL_CHECKS:
             r = case.of(check)
             if r is not None:
@@ -306,6 +351,17 @@ def results_json(results: tuple[WallResult, ...], sizing: dict[str, dict[str, An
 
 
 __all__ = [
-    "BearingResult", "CaseResult", "CheckResult", "Governing", "OverturningResult", "SlidingResult",
-    "WallResult", "check_project", "check_wall", "meets", "results_json", "wall_json", "Wall",
+    "BearingResult",
+    "CaseResult",
+    "CheckResult",
+    "Governing",
+    "OverturningResult",
+    "SlidingResult",
+    "WallResult",
+    "check_project",
+    "check_wall",
+    "meets",
+    "results_json",
+    "wall_json",
+    "Wall",
 ]

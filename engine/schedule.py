@@ -30,8 +30,12 @@ def schedule_rows(project: Project, results: Sequence[WallResult]) -> list[list[
     for r in results:
         wall = walls[r.wall_id]
         row = [
-            r.wall_id, wall.label, format_length(wall.length, project.units), format_length(r.width, project.units),
-            format_length(r.thickness, project.units), format_length(r.length, project.units),
+            r.wall_id,
+            wall.label,
+            format_length(wall.length, project.units),
+            format_length(r.width, project.units),
+            format_length(r.thickness, project.units),
+            format_length(r.length, project.units),
         ]
         for check in ALL_CHECKS:
             g = r.governing[check]

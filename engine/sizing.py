@@ -84,8 +84,12 @@ class SizingResult:
 
     def as_json(self) -> dict[str, object]:
         return {
-            "feasible": self.feasible, "width": self.width, "thickness": self.thickness,
-            "candidates": self.candidates, "message": self.message, "suggestions": list(self.suggestions),
+            "feasible": self.feasible,
+            "width": self.width,
+            "thickness": self.thickness,
+            "candidates": self.candidates,
+            "message": self.message,
+            "suggestions": list(self.suggestions),
         }
 
 
@@ -128,9 +132,18 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
         width, thickness = None, None
         message, suggestions = _diagnose(project, wall, table, widths, thicknesses, check_normalized, allowed)
     return SizingResult(
-        wall_id=wall.id, widths=widths, thicknesses=thicknesses, allowed=np.array(allowed), passes=passes,
-        governing=governing, normalized=normalized, check_normalized=check_normalized,
-        width=width, thickness=thickness, message=message, suggestions=suggestions,
+        wall_id=wall.id,
+        widths=widths,
+        thicknesses=thicknesses,
+        allowed=np.array(allowed),
+        passes=passes,
+        governing=governing,
+        normalized=normalized,
+        check_normalized=check_normalized,
+        width=width,
+        thickness=thickness,
+        message=message,
+        suggestions=suggestions,
     )
 
 
@@ -151,8 +164,13 @@ def _why_smallest(check_normalized: np.ndarray, passes: np.ndarray, allowed: np.
 
 
 def _diagnose(
-    project: Project, wall: Wall, table: CaseTable, widths: np.ndarray, thicknesses: np.ndarray,
-    check_normalized: np.ndarray, allowed: np.ndarray,
+    project: Project,
+    wall: Wall,
+    table: CaseTable,
+    widths: np.ndarray,
+    thicknesses: np.ndarray,
+    check_normalized: np.ndarray,
+    allowed: np.ndarray,
 ) -> tuple[str, tuple[str, ...]]:
     """Why nothing passes: the failing check at the largest size, by how much, and what would help."""
     last_r, last_c = thicknesses.size - 1, widths.size - 1
@@ -162,7 +180,8 @@ def _diagnose(
         return "even the widest candidate is narrower than the wall it carries", ("raise width_max above the wall thickness",)
     worst_check, worst = min(failing, key=lambda t: t[1]) if failing else (ALL_CHECKS[0], 1.0)
     described = ", ".join(
-        f"{c.value} has no equilibrium (the resultant falls beyond the footing's end)" if c is Check.BEARING and v == 0.0
+        f"{c.value} has no equilibrium (the resultant falls beyond the footing's end)"
+        if c is Check.BEARING and v == 0.0
         else f"{c.value} reaches {v:.0%} of its required ratio"
         for c, v in failing
     )
@@ -191,8 +210,11 @@ def _longer_probe(project: Project, wall: Wall, width: float, thickness: float, 
     """Normalized ratio of ``check`` with each end extended by LONGER_PROBE of the wall length."""
     extra = LONGER_PROBE * wall.length
     footing = replace(
-        wall.footing, width=float(width), thickness=float(thickness),
-        extension_start=wall.footing.extension_start + extra, extension_end=wall.footing.extension_end + extra,
+        wall.footing,
+        width=float(width),
+        thickness=float(thickness),
+        extension_start=wall.footing.extension_start + extra,
+        extension_end=wall.footing.extension_end + extra,
     )
     # loads keep their positions on the wall: moving the wall's start moves them with it
     longer = replace(wall, footing=footing)

@@ -64,13 +64,17 @@ _CASE_ORDER = tuple(LoadCase)
 
 
 @lru_cache(maxsize=128)
-def _case_layout(criteria: DesignCriteria, lateral_cases: frozenset[LoadCase]) -> tuple[tuple[DesignCase, ...], np.ndarray, np.ndarray, np.ndarray, np.ndarray]:
+def _case_layout(
+    criteria: DesignCriteria, lateral_cases: frozenset[LoadCase]
+) -> tuple[tuple[DesignCase, ...], np.ndarray, np.ndarray, np.ndarray, np.ndarray]:
     """The design cases of ``criteria`` and their factors (k x 7, LoadCase order), direction signs,
     W/E flags and check masks (3 x k). Cached: it depends on the criteria and on which lateral cases
     the wall has, not on the wall's loads."""
     cases = design_cases(combinations_of(criteria), lateral_cases)
     k = len(cases)
-    factors = np.array([[case.combination.factor(c) for c in _CASE_ORDER] for case in cases], dtype=float).reshape(k, len(_CASE_ORDER))
+    factors = np.array([[case.combination.factor(c) for c in _CASE_ORDER] for case in cases], dtype=float).reshape(
+        k, len(_CASE_ORDER)
+    )
     sign = np.array([case.direction.sign for case in cases], dtype=float)
     wind_or_seismic = np.array([case.combination.has_wind_or_seismic for case in cases], dtype=bool)
     applies = np.array([[check in case.combination.checks for case in cases] for check in ALL_CHECKS], dtype=bool).reshape(3, k)
@@ -226,7 +230,9 @@ def evaluate(table: CaseTable, width: float | np.ndarray, thickness: float | np.
 
     # Bearing: peak (or net peak) pressure against the allowable.
     compared = bearing.compared_pressure(pressure.q_max, soil.bearing_basis, soil.unit_weight, cover, d)
-    allowable = bearing.allowable_pressure(soil.allowable_bearing, table.criteria.bearing_increase, per_case(table.wind_or_seismic))
+    allowable = bearing.allowable_pressure(
+        soil.allowable_bearing, table.criteria.bearing_increase, per_case(table.wind_or_seismic)
+    )
     br_ratio = bearing.bearing_ratio(allowable, compared, pressure.stable)
     # A case that puts no load at all on the soil (N = 0, M = 0: e.g. a combination of a case the wall
     # does not have, on a weightless footing) is no demand, not a loss of equilibrium.

@@ -13,7 +13,7 @@ from .units import format_length
 
 
 def ratio_text(g: Governing) -> str:
-    """"1.37 >= 1.00 OK" style text of a governing ratio (no colour needed to read it)."""
+    """ "1.37 >= 1.00 OK" style text of a governing ratio (no colour needed to read it)."""
     if math.isinf(g.ratio):
         return "no demand"
     verdict = "OK" if g.passes else "NG"
@@ -64,7 +64,13 @@ def size_table(project: Project, sized: Sequence[SizingResult], results: Sequenc
     headers = ["Wall", "Sized B x D", "Candidates", *[c.value.capitalize() for c in ALL_CHECKS], "Why this size"]
     rows = []
     for s, r in zip(sized, results, strict=True):
-        size = f"{format_length(s.width, project.units)} x {format_length(s.thickness, project.units)}" if s.feasible else "none passes"
+        size = (
+            f"{format_length(s.width, project.units)} x {format_length(s.thickness, project.units)}"
+            if s.feasible
+            else "none passes"
+        )
         note = s.message if s.feasible else s.message + ". " + " ".join(s.suggestions)
-        rows.append([s.wall_id, size, str(s.candidates), *[ratio_text(r.governing[c]) if s.feasible else "" for c in ALL_CHECKS], note])
+        rows.append(
+            [s.wall_id, size, str(s.candidates), *[ratio_text(r.governing[c]) if s.feasible else "" for c in ALL_CHECKS], note]
+        )
     return f"{_table(headers, rows)}\n\n{CAUTION}"

@@ -45,9 +45,7 @@ class Kind(Enum):
 
     LENGTH = _KindInfo("a length", "[length]", "24 in", "m", "ft", "m", "ft", "m", 2, 3)
     FORCE = _KindInfo("a force", "[force]", "2 kip", "N", "kip", "kN", "kip", "kN", 2, 2)
-    LINE_LOAD = _KindInfo(
-        "a force per length", "[force] / [length]", "300 plf", "N/m", "plf", "kN/m", "plf", "kN/m", 0, 2
-    )
+    LINE_LOAD = _KindInfo("a force per length", "[force] / [length]", "300 plf", "N/m", "plf", "kN/m", "plf", "kN/m", 0, 2)
     PRESSURE = _KindInfo("a pressure", "[force] / [length] ** 2", "2000 psf", "Pa", "psf", "kPa", "psf", "kPa", 0, 1)
     UNIT_WEIGHT = _KindInfo(
         "a unit weight", "[force] / [length] ** 3", "150 pcf", "N/m**3", "pcf", "kN/m**3", "pcf", "kN/m³", 0, 2
@@ -122,27 +120,68 @@ _KIP = 1000.0 * _LBF
 # entry against pint. "lb" and "lbs" mean pound-force here, as they do on structural drawings.
 _COMMON_UNITS: dict[str, dict[str, float]] = {
     "[length]": {
-        "m": 1.0, "mm": 1e-3, "cm": 1e-2, "in": _INCH, "inch": _INCH, "inches": _INCH,
-        "ft": _FOOT, "foot": _FOOT, "feet": _FOOT,
+        "m": 1.0,
+        "mm": 1e-3,
+        "cm": 1e-2,
+        "in": _INCH,
+        "inch": _INCH,
+        "inches": _INCH,
+        "ft": _FOOT,
+        "foot": _FOOT,
+        "feet": _FOOT,
     },
     "[force]": {
-        "N": 1.0, "kN": 1e3, "MN": 1e6, "lbf": _LBF, "lb": _LBF, "lbs": _LBF, "kip": _KIP, "kips": _KIP,
+        "N": 1.0,
+        "kN": 1e3,
+        "MN": 1e6,
+        "lbf": _LBF,
+        "lb": _LBF,
+        "lbs": _LBF,
+        "kip": _KIP,
+        "kips": _KIP,
     },
     "[force] / [length]": {
-        "N/m": 1.0, "kN/m": 1e3, "plf": _LBF / _FOOT, "klf": _KIP / _FOOT, "lbf/ft": _LBF / _FOOT,
-        "lb/ft": _LBF / _FOOT, "kip/ft": _KIP / _FOOT,
+        "N/m": 1.0,
+        "kN/m": 1e3,
+        "plf": _LBF / _FOOT,
+        "klf": _KIP / _FOOT,
+        "lbf/ft": _LBF / _FOOT,
+        "lb/ft": _LBF / _FOOT,
+        "kip/ft": _KIP / _FOOT,
     },
     "[force] / [length] ** 2": {
-        "Pa": 1.0, "kPa": 1e3, "MPa": 1e6, "psf": _LBF / _FOOT**2, "ksf": _KIP / _FOOT**2,
-        "psi": _LBF / _INCH**2, "ksi": _KIP / _INCH**2, "kN/m^2": 1e3, "kN/m**2": 1e3, "kN/m²": 1e3,
+        "Pa": 1.0,
+        "kPa": 1e3,
+        "MPa": 1e6,
+        "psf": _LBF / _FOOT**2,
+        "ksf": _KIP / _FOOT**2,
+        "psi": _LBF / _INCH**2,
+        "ksi": _KIP / _INCH**2,
+        "kN/m^2": 1e3,
+        "kN/m**2": 1e3,
+        "kN/m²": 1e3,
     },
     "[force] / [length] ** 3": {
-        "N/m^3": 1.0, "N/m**3": 1.0, "kN/m^3": 1e3, "kN/m**3": 1e3, "kN/m³": 1e3, "pcf": _LBF / _FOOT**3,
-        "kcf": _KIP / _FOOT**3, "psf/ft": _LBF / _FOOT**3, "kPa/m": 1e3, "lbf/ft^3": _LBF / _FOOT**3,
+        "N/m^3": 1.0,
+        "N/m**3": 1.0,
+        "kN/m^3": 1e3,
+        "kN/m**3": 1e3,
+        "kN/m³": 1e3,
+        "pcf": _LBF / _FOOT**3,
+        "kcf": _KIP / _FOOT**3,
+        "psf/ft": _LBF / _FOOT**3,
+        "kPa/m": 1e3,
+        "lbf/ft^3": _LBF / _FOOT**3,
     },
     "[force] * [length]": {
-        "N*m": 1.0, "kN*m": 1e3, "kN·m": 1e3, "kip*ft": _KIP * _FOOT, "kip·ft": _KIP * _FOOT,
-        "lbf*ft": _LBF * _FOOT, "lb*ft": _LBF * _FOOT, "ft*kip": _KIP * _FOOT,
+        "N*m": 1.0,
+        "kN*m": 1e3,
+        "kN·m": 1e3,
+        "kip*ft": _KIP * _FOOT,
+        "kip·ft": _KIP * _FOOT,
+        "lbf*ft": _LBF * _FOOT,
+        "lb*ft": _LBF * _FOOT,
+        "ft*kip": _KIP * _FOOT,
     },
 }
 
@@ -235,7 +274,7 @@ def _feet_inches(body: str, kind: Kind) -> float | None:
 
 
 def _compound_length(body: str, kind: Kind) -> float | None:
-    """"2 ft 6 in", "1 m 250 mm" (unsigned parts): the sum of the parts."""
+    """ "2 ft 6 in", "1 m 250 mm" (unsigned parts): the sum of the parts."""
     parts = _COMPOUND_PART.findall(body)
     if len(parts) < 2 or "".join(f"{n}{u}" for n, u in parts) != re.sub(r"\s+", "", body):
         return None

@@ -35,8 +35,16 @@ class CasesModel(QStandardItemModel):
         q_unit = PRESSURE[0] if us else PRESSURE[1]
         f_q = unit_factor(q_unit, Kind.PRESSURE)
         headers = [
-            "Combination", "Dir.", f"N ({FORCE[0] if us else FORCE[1]})", f"V ({FORCE[0] if us else FORCE[1]})",
-            f"e ({LONG[0] if us else LONG[1]})", f"q max ({q_unit})", "Overturning", "Sliding", "Bearing", "Result",
+            "Combination",
+            "Dir.",
+            f"N ({FORCE[0] if us else FORCE[1]})",
+            f"V ({FORCE[0] if us else FORCE[1]})",
+            f"e ({LONG[0] if us else LONG[1]})",
+            f"q max ({q_unit})",
+            "Overturning",
+            "Sliding",
+            "Bearing",
+            "Result",
         ]
         ev = result.evaluation
         rows = []
@@ -44,11 +52,22 @@ class CasesModel(QStandardItemModel):
             e = float(ev.eccentricity[i])
             bearing = case.bearing
             q_max = bearing.q_max if bearing is not None else math.nan
-            texts = [case.combination, case.direction, trim(case.vertical / f_force, 2), trim(case.lateral / f_force, 2),
-                     trim(e / f_len, 3) if math.isfinite(e) else "∞",
-                     (trim(q_max / f_q, 0 if us else 1) if math.isfinite(q_max) else ("∞" if bearing is not None else "—"))]
-            keys: list[Any] = [case.combination, case.direction, case.vertical, case.lateral, e if math.isfinite(e) else math.inf,
-                               q_max if not math.isnan(q_max) else -1.0]
+            texts = [
+                case.combination,
+                case.direction,
+                trim(case.vertical / f_force, 2),
+                trim(case.lateral / f_force, 2),
+                trim(e / f_len, 3) if math.isfinite(e) else "∞",
+                (trim(q_max / f_q, 0 if us else 1) if math.isfinite(q_max) else ("∞" if bearing is not None else "—")),
+            ]
+            keys: list[Any] = [
+                case.combination,
+                case.direction,
+                case.vertical,
+                case.lateral,
+                e if math.isfinite(e) else math.inf,
+                q_max if not math.isnan(q_max) else -1.0,
+            ]
             ok = True
             for check in ALL_CHECKS:
                 r = case.of(check)
@@ -63,14 +82,18 @@ class CasesModel(QStandardItemModel):
             texts.append("OK" if ok else "NG")
             keys.append(int(ok))
             rows.append((texts, keys, ok, i))
-        reshaped = self.rowCount() != len(rows) or [self.headerData(c, Qt.Orientation.Horizontal) for c in range(self.columnCount())] != headers
+        reshaped = (
+            self.rowCount() != len(rows)
+            or [self.headerData(c, Qt.Orientation.Horizontal) for c in range(self.columnCount())] != headers
+        )
         if reshaped:
             self.clear()
             self.setColumnCount(len(headers))
             self.setHorizontalHeaderLabels(headers)
             for c in range(6, 9):
                 self.horizontalHeaderItem(c).setToolTip(
-                    "Ratio of capacity to demand for this case, with ✓ where it meets the required ratio; — where the check does not apply.")
+                    "Ratio of capacity to demand for this case, with ✓ where it meets the required ratio; — where the check does not apply."
+                )
             self.setRowCount(len(rows))
         # one dataChanged for the whole update instead of one per cell (the proxy re-sorts once)
         self.blockSignals(True)

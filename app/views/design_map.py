@@ -33,7 +33,7 @@ _CLIP = 1.0e3
 
 def _rgb(hex_colour: str) -> list[int]:
     h = hex_colour.lstrip("#")
-    return [int(h[i: i + 2], 16) for i in (0, 2, 4)]
+    return [int(h[i : i + 2], 16) for i in (0, 2, 4)]
 
 
 def boundary_lines(values: np.ndarray, widths: np.ndarray, thicknesses: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
@@ -268,7 +268,11 @@ class DesignMapView(QWidget):
             verdict = "passes — click to adopt"
         else:
             verdict = f"fails ({s.governing_check(row, col).value} governs)"
-        return f"B {trim(s.widths[col] / f, 1)} × D {trim(s.thicknesses[row] / f, 1)} {unit}:  " + ",  ".join(parts) + f"  →  {verdict}"
+        return (
+            f"B {trim(s.widths[col] / f, 1)} × D {trim(s.thicknesses[row] / f, 1)} {unit}:  "
+            + ",  ".join(parts)
+            + f"  →  {verdict}"
+        )
 
     def adopt_cell(self, row: int, col: int) -> str | None:
         """Adopt the candidate (row, col) as the wall's footing; returns a refusal message, if any."""

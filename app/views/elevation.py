@@ -192,7 +192,10 @@ class ElevationView(pg.PlotWidget):
             heavy_x += [start, end]
             heavy_y += [h, h]
             heads.append({"pos": (end, h), "symbol": "t3" if push_left else "t2"})
-            text = " · ".join(f"{ld.case.value} {_number(ld.value / force_factor)}" for ld in loads) + f" {force_unit} at {_number(h)} {long_unit}"
+            text = (
+                " · ".join(f"{ld.case.value} {_number(ld.value / force_factor)}" for ld in loads)
+                + f" {force_unit} at {_number(h)} {long_unit}"
+            )
             labels.append((start, h, text, (1, 0.5) if not push_left else (0, 0.5)))
 
         self.shafts.setData(np.array(shafts_x, dtype=float), np.array(shafts_y, dtype=float))
@@ -208,7 +211,7 @@ class ElevationView(pg.PlotWidget):
                 label.setPos(x, y)
             if not label.isVisible():
                 label.show()
-        for label in self.labels[len(labels):]:
+        for label in self.labels[len(labels) :]:
             if label.isVisible():
                 label.hide()
 

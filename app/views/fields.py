@@ -256,108 +256,266 @@ class Section(QWidget):
 
 # ---- the fields --------------------------------------------------------------------------------------
 
-_GEOMETRY_RULE = "Footing length L = extension at start + wall length + extension at end (Kernline project-file format, version 1)."
+_GEOMETRY_RULE = (
+    "Footing length L = extension at start + wall length + extension at end (Kernline project-file format, version 1)."
+)
 
 
-def _wall_field(path: tuple[str, ...], label: str, kind: Kind | None, units: tuple[str, str] | None,
-                value: Callable[[Wall], Any], tip: str, **kw: Any) -> FieldSpec:
+def _wall_field(
+    path: tuple[str, ...],
+    label: str,
+    kind: Kind | None,
+    units: tuple[str, str] | None,
+    value: Callable[[Wall], Any],
+    tip: str,
+    **kw: Any,
+) -> FieldSpec:
     return FieldSpec(path, label, kind, units, lambda p, w: value(w), tip, **kw)
 
 
-def _project_field(path: tuple[str, ...], label: str, kind: Kind | None, units: tuple[str, str] | None,
-                   value: Callable[[Project], Any], tip: str, **kw: Any) -> FieldSpec:
+def _project_field(
+    path: tuple[str, ...],
+    label: str,
+    kind: Kind | None,
+    units: tuple[str, str] | None,
+    value: Callable[[Project], Any],
+    tip: str,
+    **kw: Any,
+) -> FieldSpec:
     return FieldSpec(path, label, kind, units, lambda p, w: value(p), tip, scope="project", **kw)
 
 
 WALL_FIELDS = (
-    _wall_field(("label",), "Label", None, None, lambda w: w.label, "A description of the wall (grid line, storey); printed in the schedule.", text=True),
-    _wall_field(("length",), "Wall length", Kind.LENGTH, LONG, lambda w: w.length,
-                "In-plane length of the shear wall. Loads are located from its start end. " + _GEOMETRY_RULE),
-    _wall_field(("thickness",), "Wall thickness", Kind.LENGTH, SHORT, lambda w: w.thickness,
-                "Thickness of the wall that sits on the footing (or on the stem). The footing may not be narrower than "
-                "what it carries (Kernline input rule)."),
+    _wall_field(
+        ("label",),
+        "Label",
+        None,
+        None,
+        lambda w: w.label,
+        "A description of the wall (grid line, storey); printed in the schedule.",
+        text=True,
+    ),
+    _wall_field(
+        ("length",),
+        "Wall length",
+        Kind.LENGTH,
+        LONG,
+        lambda w: w.length,
+        "In-plane length of the shear wall. Loads are located from its start end. " + _GEOMETRY_RULE,
+    ),
+    _wall_field(
+        ("thickness",),
+        "Wall thickness",
+        Kind.LENGTH,
+        SHORT,
+        lambda w: w.thickness,
+        "Thickness of the wall that sits on the footing (or on the stem). The footing may not be narrower than "
+        "what it carries (Kernline input rule).",
+    ),
 )
 
 STEM_FIELDS = (
-    _wall_field(("stem", "height"), "Stem height", Kind.LENGTH, SHORT, lambda w: w.stem.height,
-                "Height of a concrete stem wall between footing and wall; 0 means no stem. Its weight counts as dead load "
-                "at mid-length (self weight, Kernline mechanics)."),
-    _wall_field(("stem", "thickness"), "Stem thickness", Kind.LENGTH, SHORT, lambda w: w.stem.thickness,
-                "Thickness of the stem wall (used only when the stem height is above zero)."),
+    _wall_field(
+        ("stem", "height"),
+        "Stem height",
+        Kind.LENGTH,
+        SHORT,
+        lambda w: w.stem.height,
+        "Height of a concrete stem wall between footing and wall; 0 means no stem. Its weight counts as dead load "
+        "at mid-length (self weight, Kernline mechanics).",
+    ),
+    _wall_field(
+        ("stem", "thickness"),
+        "Stem thickness",
+        Kind.LENGTH,
+        SHORT,
+        lambda w: w.stem.thickness,
+        "Thickness of the stem wall (used only when the stem height is above zero).",
+    ),
 )
 
 FOOTING_FIELDS = (
-    _wall_field(("footing", "width"), "Footing width B", Kind.LENGTH, SHORT, lambda w: w.footing.width,
-                "Width of the strip footing across the wall. Up/Down steps by the sizing step. Minimum widths for "
-                "light-frame walls: IBC 2018 Table 1809.7 (not checked here).", step=lambda w: w.sizing.width_step),
-    _wall_field(("footing", "thickness"), "Footing thickness D", Kind.LENGTH, SHORT, lambda w: w.footing.thickness,
-                "Depth of the footing. Adds self weight and raises the lateral arm to height + D (Kernline mechanics). "
-                "Minimum depths: ACI 318-19 13.3.1.2 (not checked here). Up/Down steps by the sizing step.",
-                step=lambda w: w.sizing.thickness_step),
-    _wall_field(("footing", "extension_start"), "Extension at start", Kind.LENGTH, LONG, lambda w: w.footing.extension_start,
-                "Footing beyond the wall's start end. " + _GEOMETRY_RULE),
-    _wall_field(("footing", "extension_end"), "Extension at end", Kind.LENGTH, LONG, lambda w: w.footing.extension_end,
-                "Footing beyond the wall's far end. " + _GEOMETRY_RULE),
-    _wall_field(("footing", "cover"), "Soil cover", Kind.LENGTH, SHORT, lambda w: w.footing.cover,
-                "Depth of soil over the top of the footing. Its weight over B minus the wall (or stem) thickness is dead "
-                "load; grade is this far above the footing top (Kernline mechanics)."),
-    _wall_field(("footing", "unit_weight"), "Concrete unit weight", Kind.UNIT_WEIGHT, DENSITY, lambda w: w.footing.unit_weight,
-                "Unit weight of the footing and stem concrete; 150 pcf (23.6 kN/m³) for normal-weight reinforced "
-                "concrete (common practice)."),
+    _wall_field(
+        ("footing", "width"),
+        "Footing width B",
+        Kind.LENGTH,
+        SHORT,
+        lambda w: w.footing.width,
+        "Width of the strip footing across the wall. Up/Down steps by the sizing step. Minimum widths for "
+        "light-frame walls: IBC 2018 Table 1809.7 (not checked here).",
+        step=lambda w: w.sizing.width_step,
+    ),
+    _wall_field(
+        ("footing", "thickness"),
+        "Footing thickness D",
+        Kind.LENGTH,
+        SHORT,
+        lambda w: w.footing.thickness,
+        "Depth of the footing. Adds self weight and raises the lateral arm to height + D (Kernline mechanics). "
+        "Minimum depths: ACI 318-19 13.3.1.2 (not checked here). Up/Down steps by the sizing step.",
+        step=lambda w: w.sizing.thickness_step,
+    ),
+    _wall_field(
+        ("footing", "extension_start"),
+        "Extension at start",
+        Kind.LENGTH,
+        LONG,
+        lambda w: w.footing.extension_start,
+        "Footing beyond the wall's start end. " + _GEOMETRY_RULE,
+    ),
+    _wall_field(
+        ("footing", "extension_end"),
+        "Extension at end",
+        Kind.LENGTH,
+        LONG,
+        lambda w: w.footing.extension_end,
+        "Footing beyond the wall's far end. " + _GEOMETRY_RULE,
+    ),
+    _wall_field(
+        ("footing", "cover"),
+        "Soil cover",
+        Kind.LENGTH,
+        SHORT,
+        lambda w: w.footing.cover,
+        "Depth of soil over the top of the footing. Its weight over B minus the wall (or stem) thickness is dead "
+        "load; grade is this far above the footing top (Kernline mechanics).",
+    ),
+    _wall_field(
+        ("footing", "unit_weight"),
+        "Concrete unit weight",
+        Kind.UNIT_WEIGHT,
+        DENSITY,
+        lambda w: w.footing.unit_weight,
+        "Unit weight of the footing and stem concrete; 150 pcf (23.6 kN/m³) for normal-weight reinforced "
+        "concrete (common practice).",
+    ),
 )
 
 SIZING_FIELDS = tuple(
-    _wall_field(("sizing", key), label, Kind.LENGTH, SHORT, (lambda k: (lambda w: getattr(w.sizing, k)))(key),
-                "Bounds and step of the candidate grid that automatic sizing searches (inclusive). The chosen size is "
-                "the passing candidate with the least B x D (Kernline sizing rule).")
+    _wall_field(
+        ("sizing", key),
+        label,
+        Kind.LENGTH,
+        SHORT,
+        (lambda k: lambda w: getattr(w.sizing, k))(key),
+        "Bounds and step of the candidate grid that automatic sizing searches (inclusive). The chosen size is "
+        "the passing candidate with the least B x D (Kernline sizing rule).",
+    )
     for key, label in (
-        ("width_min", "Width from"), ("width_max", "Width to"), ("width_step", "Width step"),
-        ("thickness_min", "Thickness from"), ("thickness_max", "Thickness to"), ("thickness_step", "Thickness step"),
+        ("width_min", "Width from"),
+        ("width_max", "Width to"),
+        ("width_step", "Width step"),
+        ("thickness_min", "Thickness from"),
+        ("thickness_max", "Thickness to"),
+        ("thickness_step", "Thickness step"),
     )
 )
 
 SOIL_FIELDS = (
-    _project_field(("soil", "allowable_bearing"), "Allowable bearing", Kind.PRESSURE, PRESSURE, lambda p: p.soil.allowable_bearing,
-                   "Allowable soil bearing pressure from the geotechnical report (presumptive values: IBC 2018 Table 1806.2). "
-                   "Compared with the peak pressure q_max of each combination."),
-    _project_field(("soil", "friction"), "Friction coefficient", None, None, lambda p: p.soil.friction,
-                   "Coefficient of friction between footing and soil; resists sliding as friction x N while N > 0 "
-                   "(presumptive values: IBC 2018 Table 1806.2; the geotechnical report governs)."),
-    _project_field(("soil", "cohesion"), "Cohesion", Kind.PRESSURE, PRESSURE, lambda p: p.soil.cohesion,
-                   "Cohesion x contact area resists sliding, limited to half of N (after IBC 2018 1806.3.2)."),
-    _project_field(("soil", "passive"), "Passive pressure", Kind.PRESSURE_GRADIENT, GRADIENT, lambda p: p.soil.passive,
-                   "Lateral bearing pressure per depth below grade on the footing's end face (IBC 2018 Table 1806.2, "
-                   "'lateral bearing'; the geotechnical report governs)."),
-    _project_field(("soil", "passive_ignore"), "Passive ignored to", Kind.LENGTH, SHORT, lambda p: p.soil.passive_ignore,
-                   "Depth below grade within which passive resistance is ignored (common practice: the top 1 ft)."),
-    _project_field(("soil", "unit_weight"), "Soil unit weight", Kind.UNIT_WEIGHT, DENSITY, lambda p: p.soil.unit_weight,
-                   "Unit weight of the soil over the footing (dead load) and of the overburden for a net allowable "
-                   "(geotechnical report; 110 pcf is a common default)."),
+    _project_field(
+        ("soil", "allowable_bearing"),
+        "Allowable bearing",
+        Kind.PRESSURE,
+        PRESSURE,
+        lambda p: p.soil.allowable_bearing,
+        "Allowable soil bearing pressure from the geotechnical report (presumptive values: IBC 2018 Table 1806.2). "
+        "Compared with the peak pressure q_max of each combination.",
+    ),
+    _project_field(
+        ("soil", "friction"),
+        "Friction coefficient",
+        None,
+        None,
+        lambda p: p.soil.friction,
+        "Coefficient of friction between footing and soil; resists sliding as friction x N while N > 0 "
+        "(presumptive values: IBC 2018 Table 1806.2; the geotechnical report governs).",
+    ),
+    _project_field(
+        ("soil", "cohesion"),
+        "Cohesion",
+        Kind.PRESSURE,
+        PRESSURE,
+        lambda p: p.soil.cohesion,
+        "Cohesion x contact area resists sliding, limited to half of N (after IBC 2018 1806.3.2).",
+    ),
+    _project_field(
+        ("soil", "passive"),
+        "Passive pressure",
+        Kind.PRESSURE_GRADIENT,
+        GRADIENT,
+        lambda p: p.soil.passive,
+        "Lateral bearing pressure per depth below grade on the footing's end face (IBC 2018 Table 1806.2, "
+        "'lateral bearing'; the geotechnical report governs).",
+    ),
+    _project_field(
+        ("soil", "passive_ignore"),
+        "Passive ignored to",
+        Kind.LENGTH,
+        SHORT,
+        lambda p: p.soil.passive_ignore,
+        "Depth below grade within which passive resistance is ignored (common practice: the top 1 ft).",
+    ),
+    _project_field(
+        ("soil", "unit_weight"),
+        "Soil unit weight",
+        Kind.UNIT_WEIGHT,
+        DENSITY,
+        lambda p: p.soil.unit_weight,
+        "Unit weight of the soil over the footing (dead load) and of the overburden for a net allowable "
+        "(geotechnical report; 110 pcf is a common default).",
+    ),
 )
 
 CRITERIA_FIELDS = (
-    _project_field(("criteria", "required", "overturning"), "Required overturning ratio", None, None,
-                   lambda p: p.criteria.required.overturning,
-                   "Least resisting / overturning moment about the toe. 1.0 with ASCE 7-16 ASD combinations that carry "
-                   "0.6D; 1.5-2.0 with service loads (common practice; see the geotechnical report and local code)."),
-    _project_field(("criteria", "required", "sliding"), "Required sliding ratio", None, None, lambda p: p.criteria.required.sliding,
-                   "Least sliding resistance / shear. 1.0 with ASCE 7-16 ASD combinations; 1.5 with service loads "
-                   "(common practice)."),
-    _project_field(("criteria", "required", "bearing"), "Required bearing ratio", None, None, lambda p: p.criteria.required.bearing,
-                   "Least allowable / peak soil pressure; 1.0 when the allowable already carries the geotechnical factor "
-                   "of safety (common practice)."),
-    _project_field(("criteria", "sds"), "S_DS", None, None, lambda p: p.criteria.sds,
-                   "Design spectral acceleration at short periods (ASCE 7-16 11.4.5). Sets the vertical seismic effect "
-                   "Ev = 0.2 S_DS D (ASCE 7-16 Eq. 12.4-4a) in the seismic combinations."),
-    _project_field(("criteria", "bearing_increase"), "Allowable increase with W or E", None, None,
-                   lambda p: p.criteria.bearing_increase,
-                   "Factor on the allowable bearing in combinations with wind or seismic, where the geotechnical report "
-                   "permits one (IBC 2018 1806.1 allows 1/3 only with the alternative basic combinations; from memory). "
-                   "1.0 for none."),
+    _project_field(
+        ("criteria", "required", "overturning"),
+        "Required overturning ratio",
+        None,
+        None,
+        lambda p: p.criteria.required.overturning,
+        "Least resisting / overturning moment about the toe. 1.0 with ASCE 7-16 ASD combinations that carry "
+        "0.6D; 1.5-2.0 with service loads (common practice; see the geotechnical report and local code).",
+    ),
+    _project_field(
+        ("criteria", "required", "sliding"),
+        "Required sliding ratio",
+        None,
+        None,
+        lambda p: p.criteria.required.sliding,
+        "Least sliding resistance / shear. 1.0 with ASCE 7-16 ASD combinations; 1.5 with service loads (common practice).",
+    ),
+    _project_field(
+        ("criteria", "required", "bearing"),
+        "Required bearing ratio",
+        None,
+        None,
+        lambda p: p.criteria.required.bearing,
+        "Least allowable / peak soil pressure; 1.0 when the allowable already carries the geotechnical factor "
+        "of safety (common practice).",
+    ),
+    _project_field(
+        ("criteria", "sds"),
+        "S_DS",
+        None,
+        None,
+        lambda p: p.criteria.sds,
+        "Design spectral acceleration at short periods (ASCE 7-16 11.4.5). Sets the vertical seismic effect "
+        "Ev = 0.2 S_DS D (ASCE 7-16 Eq. 12.4-4a) in the seismic combinations.",
+    ),
+    _project_field(
+        ("criteria", "bearing_increase"),
+        "Allowable increase with W or E",
+        None,
+        None,
+        lambda p: p.criteria.bearing_increase,
+        "Factor on the allowable bearing in combinations with wind or seismic, where the geotechnical report "
+        "permits one (IBC 2018 1806.1 allows 1/3 only with the alternative basic combinations; from memory). "
+        "1.0 for none.",
+    ),
 )
 
 PROJECT_FIELDS = tuple(
-    _project_field(("project", key), label, None, None, (lambda k: (lambda p: getattr(p.info, k)))(key), tip, text=True)
+    _project_field(("project", key), label, None, None, (lambda k: lambda p: getattr(p.info, k))(key), tip, text=True)
     for key, label, tip in (
         ("name", "Project", "Project name, shown in the title and the calculation package."),
         ("number", "Number", "Job number."),

@@ -107,7 +107,9 @@ class FieldGroup:
             if not live:
                 field.set_display(display_text(spec, doc.project, doc.current_wall), force=True)
             return True
-        message = doc.push(commands.SetField(doc, path, value, session=field.session, text=f"Set {spec.label.lower()}"), quiet=live)
+        message = doc.push(
+            commands.SetField(doc, path, value, session=field.session, text=f"Set {spec.label.lower()}"), quiet=live
+        )
         if message is not None:
             if not live:
                 field.set_error(message)
@@ -199,8 +201,10 @@ class LoadsEditor(QWidget):
         self.table.setSelectionBehavior(QAbstractItemView.SelectionBehavior.SelectRows)
         self.table.setSelectionMode(QAbstractItemView.SelectionMode.SingleSelection)
         self.table.setEditTriggers(
-            QAbstractItemView.EditTrigger.DoubleClicked | QAbstractItemView.EditTrigger.EditKeyPressed
-            | QAbstractItemView.EditTrigger.AnyKeyPressed | QAbstractItemView.EditTrigger.SelectedClicked
+            QAbstractItemView.EditTrigger.DoubleClicked
+            | QAbstractItemView.EditTrigger.EditKeyPressed
+            | QAbstractItemView.EditTrigger.AnyKeyPressed
+            | QAbstractItemView.EditTrigger.SelectedClicked
         )
         self.table.setItemDelegateForColumn(0, _ChoiceDelegate(KINDS, self.table))
         self.table.setItemDelegateForColumn(1, _ChoiceDelegate(CASES, self.table))
@@ -300,7 +304,7 @@ class LoadsEditor(QWidget):
         text = " ".join(text.split())
         if col == 0:
             if text not in KINDS:
-                return f'expected one of {", ".join(KINDS)}'
+                return f"expected one of {', '.join(KINDS)}"
             if text == _kind_of(load):
                 return None
             return doc.push(commands.change_load_type(doc, wi, row, text))
@@ -367,7 +371,11 @@ def _kind_of(load: Any) -> str:
 
 def _cell_key(load: Any, col: int) -> tuple[str | None, Kind, tuple[str, str]]:
     if col == 2:
-        return "value", (Kind.LINE_LOAD if isinstance(load, LineLoad) else Kind.FORCE), (LINE if isinstance(load, LineLoad) else FORCE)
+        return (
+            "value",
+            (Kind.LINE_LOAD if isinstance(load, LineLoad) else Kind.FORCE),
+            (LINE if isinstance(load, LineLoad) else FORCE),
+        )
     if col == 3:
         key = "start" if isinstance(load, LineLoad) else "at" if isinstance(load, PointLoad) else "height"
         return key, Kind.LENGTH, LONG
@@ -381,15 +389,42 @@ def _load_row(load: Any, units: str) -> tuple[list[str], list[bool]]:
     long_unit = LONG[1] if units == "SI" else LONG[0]
     if isinstance(load, LineLoad):
         value = show(load.value, Kind.LINE_LOAD, LINE[1] if units == "SI" else LINE[0])
-        return (["line", load.case.value, value, show(load.start, Kind.LENGTH, long_unit), show(load.end, Kind.LENGTH, long_unit), load.label],
-                [True] * 6)
+        return (
+            [
+                "line",
+                load.case.value,
+                value,
+                show(load.start, Kind.LENGTH, long_unit),
+                show(load.end, Kind.LENGTH, long_unit),
+                load.label,
+            ],
+            [True] * 6,
+        )
     force_unit = FORCE[1] if units == "SI" else FORCE[0]
     if isinstance(load, PointLoad):
-        return (["point", load.case.value, show(load.value, Kind.FORCE, force_unit), show(load.at, Kind.LENGTH, long_unit), "", load.label],
-                [True, True, True, True, False, True])
+        return (
+            [
+                "point",
+                load.case.value,
+                show(load.value, Kind.FORCE, force_unit),
+                show(load.at, Kind.LENGTH, long_unit),
+                "",
+                load.label,
+            ],
+            [True, True, True, True, False, True],
+        )
     assert isinstance(load, LateralLoad)
-    return (["lateral", load.case.value, show(load.value, Kind.FORCE, force_unit), "h " + show(load.height, Kind.LENGTH, long_unit), "", load.label],
-            [True, True, True, True, False, True])
+    return (
+        [
+            "lateral",
+            load.case.value,
+            show(load.value, Kind.FORCE, force_unit),
+            "h " + show(load.height, Kind.LENGTH, long_unit),
+            "",
+            load.label,
+        ],
+        [True, True, True, True, False, True],
+    )
 
 
 # ---- combinations table ------------------------------------------------------------------------------
@@ -461,7 +496,9 @@ class CombinationsEditor(QWidget):
             self.custom.setChecked(custom)
             self.table.setRowCount(len(combos))
             for row, combo in enumerate(combos):
-                cells = [combo.name] + [trim(combo.factor(LoadCase(c)), 4) if combo.factor(LoadCase(c)) != 0.0 else "" for c in COMBO_CASES]
+                cells = [combo.name] + [
+                    trim(combo.factor(LoadCase(c)), 4) if combo.factor(LoadCase(c)) != 0.0 else "" for c in COMBO_CASES
+                ]
                 for col, text in enumerate(cells):
                     item = self.table.item(row, col) or QTableWidgetItem()
                     if self.table.item(row, col) is None:
@@ -489,11 +526,13 @@ class CombinationsEditor(QWidget):
     def _preset_as_raw(self) -> list[dict[str, Any]]:
         out = []
         for combo in combinations_of(self.document.project.criteria):
-            out.append({
-                "name": combo.name,
-                "factors": {case.value: factor for case, factor in combo.factors},
-                "checks": [c.value for c in ALL_CHECKS if c in combo.checks],
-            })
+            out.append(
+                {
+                    "name": combo.name,
+                    "factors": {case.value: factor for case, factor in combo.factors},
+                    "checks": [c.value for c in ALL_CHECKS if c in combo.checks],
+                }
+            )
         return out
 
     def _on_custom_toggled(self, on: bool) -> None:
@@ -573,7 +612,11 @@ class WallForm(QWidget):
         layout.setSpacing(0)
         layout.addWidget(self.title)
         self.sections: dict[str, Section] = {}
-        for name, specs, expanded in (("Wall", WALL_FIELDS, True), ("Stem", STEM_FIELDS, False), ("Footing", FOOTING_FIELDS, True)):
+        for name, specs, expanded in (
+            ("Wall", WALL_FIELDS, True),
+            ("Stem", STEM_FIELDS, False),
+            ("Footing", FOOTING_FIELDS, True),
+        ):
             box, form = _form()
             for spec in specs:
                 self.group.add(spec, form)
@@ -595,9 +638,11 @@ class WallForm(QWidget):
         self.loads.refresh(clear_message=force)
 
     def focus_order(self) -> list[QWidget]:
-        return [f.edit for f in self.group.fields[: len(WALL_FIELDS) + len(STEM_FIELDS) + len(FOOTING_FIELDS)]] + [self.loads.table] + [
-            f.edit for f in self.group.fields[len(WALL_FIELDS) + len(STEM_FIELDS) + len(FOOTING_FIELDS):]
-        ]
+        return (
+            [f.edit for f in self.group.fields[: len(WALL_FIELDS) + len(STEM_FIELDS) + len(FOOTING_FIELDS)]]
+            + [self.loads.table]
+            + [f.edit for f in self.group.fields[len(WALL_FIELDS) + len(STEM_FIELDS) + len(FOOTING_FIELDS) :]]
+        )
 
 
 METHODS = (("ASCE 7-16 ASD combinations", "asce7-16-asd"), ("Service loads with factors of safety", "service-fs"))
@@ -622,8 +667,10 @@ class ProjectForm(QWidget):
         self.basis = QComboBox()
         for text, value in BASES:
             self.basis.addItem(text, value)
-        self.basis.setToolTip("Whether the allowable is a gross pressure or net of the overburden at the footing base "
-                              "(then q_max - soil weight x (cover + D) is compared); the geotechnical report says which.")
+        self.basis.setToolTip(
+            "Whether the allowable is a gross pressure or net of the overburden at the footing base "
+            "(then q_max - soil weight x (cover + D) is compared); the geotechnical report says which."
+        )
         form.addRow("Allowable is", self.basis)
         for spec in SOIL_FIELDS[1:]:
             self.group.add(spec, form)
@@ -634,8 +681,10 @@ class ProjectForm(QWidget):
         self.method = QComboBox()
         for text, value in METHODS:
             self.method.addItem(text, value)
-        self.method.setToolTip("ASCE 7-16 ASD: section 2.4.1 combinations with 2.4.5 / 12.4.2.3 for E, required ratios 1.0. "
-                               "Service loads: unfactored combinations with factors of safety 2.0 / 1.5 / 1.0 (common practice).")
+        self.method.setToolTip(
+            "ASCE 7-16 ASD: section 2.4.1 combinations with 2.4.5 / 12.4.2.3 for E, required ratios 1.0. "
+            "Service loads: unfactored combinations with factors of safety 2.0 / 1.5 / 1.0 (common practice)."
+        )
         form.addRow("Method", self.method)
         for spec in CRITERIA_FIELDS:
             self.group.add(spec, form)
@@ -652,8 +701,12 @@ class ProjectForm(QWidget):
         self.sections["Project"] = Section("Project", box, False)
         layout.addWidget(self.sections["Project"])
 
-        self.method.activated.connect(lambda _i: self._set_choice(("criteria", "method"), self.method.currentData(), "Set method"))
-        self.basis.activated.connect(lambda _i: self._set_choice(("soil", "bearing_basis"), self.basis.currentData(), "Set bearing basis"))
+        self.method.activated.connect(
+            lambda _i: self._set_choice(("criteria", "method"), self.method.currentData(), "Set method")
+        )
+        self.basis.activated.connect(
+            lambda _i: self._set_choice(("soil", "bearing_basis"), self.basis.currentData(), "Set bearing basis")
+        )
 
     def _set_choice(self, path: tuple[str, ...], value: str, text: str) -> None:
         doc = self.document
@@ -671,5 +724,10 @@ class ProjectForm(QWidget):
 
     def focus_order(self) -> list[QWidget]:
         fields = self.group.fields
-        return [fields[0].edit, self.basis, *[f.edit for f in fields[1: len(SOIL_FIELDS)]], self.method,
-                *[f.edit for f in fields[len(SOIL_FIELDS):]]]
+        return [
+            fields[0].edit,
+            self.basis,
+            *[f.edit for f in fields[1 : len(SOIL_FIELDS)]],
+            self.method,
+            *[f.edit for f in fields[len(SOIL_FIELDS) :]],
+        ]

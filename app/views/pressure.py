@@ -40,8 +40,10 @@ class CasePicker(QComboBox):
     def __init__(self, parent: QWidget | None = None) -> None:
         super().__init__(parent)
         self.setObjectName("casePicker")
-        self.setToolTip("The combination and direction drawn in the elevation and the pressure diagram. "
-                        "Governing: the case with the lowest ratio / required for that check.")
+        self.setToolTip(
+            "The combination and direction drawn in the elevation and the pressure diagram. "
+            "Governing: the case with the lowest ratio / required for that check."
+        )
         self.setSizeAdjustPolicy(QComboBox.SizeAdjustPolicy.AdjustToMinimumContentsLengthWithIcon)
         self.setMinimumContentsLength(34)
         self._key: tuple[str, ...] = ()
@@ -109,7 +111,10 @@ class PressurePlot(pg.PlotWidget):
         for line in self.kern:
             plot.addItem(line)
         # the labels hang from the top edge of the view (anchor at their top), so a short plot never clips them
-        self.kern_labels = [pg.TextItem("kern", color=MUTED, anchor=(1.0, 0.0)), pg.TextItem("kern", color=MUTED, anchor=(0.0, 0.0))]
+        self.kern_labels = [
+            pg.TextItem("kern", color=MUTED, anchor=(1.0, 0.0)),
+            pg.TextItem("kern", color=MUTED, anchor=(0.0, 0.0)),
+        ]
         for label in self.kern_labels:
             plot.addItem(label)
         self.contact = pg.PlotCurveItem(pen=_pen(GRAPHITE, 1.2), connect="pairs")
@@ -176,7 +181,9 @@ class PressurePlot(pg.PlotWidget):
             y = top * 1.12
             self.contact.setData([a, b, a, a, b, b], [y, y, y - 0.04 * top, y + 0.04 * top, y - 0.04 * top, y + 0.04 * top])
             full = abs((b - a) - length) < 1e-9 * max(length, 1.0)
-            self.contact_label.setText(f"contact {trim(b - a, 2)} {l_unit}" + (" (full length)" if full else f" of {trim(length, 2)} {l_unit}"))
+            self.contact_label.setText(
+                f"contact {trim(b - a, 2)} {l_unit}" + (" (full length)" if full else f" of {trim(length, 2)} {l_unit}")
+            )
             self.contact_label.setPos(0.5 * (a + b), y + 0.03 * top)
             q_start, q_end = float(q[1]), float(q[2])
             self.end_labels[0].setText(f"{trim(q_start, 0 if units == 'US' else 1)} {q_unit}")

@@ -73,7 +73,11 @@ class ScheduleView(QWidget):
                 item.setText(text)
                 item.setForeground(QColor(WARM) if text == "FAIL" else self.palette().text().color())
                 if c >= 2:
-                    item.setTextAlignment((Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter) if c < len(row) - 1 else Qt.AlignmentFlag.AlignCenter)
+                    item.setTextAlignment(
+                        (Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter)
+                        if c < len(row) - 1
+                        else Qt.AlignmentFlag.AlignCenter
+                    )
 
     def tsv(self) -> str:
         lines = ["\t".join(self.headers)] + ["\t".join(row) for row in self.rows]

@@ -54,9 +54,12 @@ class WallsView(QWidget):
         grid = QHBoxLayout()
         grid.setSpacing(3)
         for key, text, tip in (
-            ("add", "Add", "Add a wall (Ctrl+Shift+N)"), ("duplicate", "Duplicate", "Duplicate the selected wall (Ctrl+D)"),
-            ("rename", "Rename", "Rename the selected wall (F2)"), ("delete", "Delete", "Delete the selected wall"),
-            ("up", "↑", "Move the wall up the list"), ("down", "↓", "Move the wall down the list"),
+            ("add", "Add", "Add a wall (Ctrl+Shift+N)"),
+            ("duplicate", "Duplicate", "Duplicate the selected wall (Ctrl+D)"),
+            ("rename", "Rename", "Rename the selected wall (F2)"),
+            ("delete", "Delete", "Delete the selected wall"),
+            ("up", "↑", "Move the wall up the list"),
+            ("down", "↓", "Move the wall down the list"),
         ):
             b = QPushButton(text)
             b.setToolTip(tip)
@@ -114,14 +117,19 @@ class WallsView(QWidget):
                 if math.isinf(worst.ratio):
                     worst_text = "no demand"
                 else:
-                    worst_text = f"{OK_MARK if result.passes else NG_MARK} {worst.normalized:.2f} {'OK' if result.passes else 'NG'}"
+                    worst_text = (
+                        f"{OK_MARK if result.passes else NG_MARK} {worst.normalized:.2f} {'OK' if result.passes else 'NG'}"
+                    )
                 for col, text in enumerate((wall.id, size, worst_text)):
                     if item.text(col) != text:
                         item.setText(col, text)
                 tone = QColor(GRAPHITE if result.passes else WARM)
                 if item.foreground(2).color() != tone:
                     item.setForeground(2, tone)
-                for col, tip in ((0, wall.label or wall.id), (2, f"worst: {worst.check.value}, ratio {worst.ratio:.2f} vs required {worst.required:.2f}")):
+                for col, tip in (
+                    (0, wall.label or wall.id),
+                    (2, f"worst: {worst.check.value}, ratio {worst.ratio:.2f} vs required {worst.required:.2f}"),
+                ):
                     if item.toolTip(col) != tip:
                         item.setToolTip(col, tip)
             current = self.tree.topLevelItem(doc.current_index)

@@ -61,14 +61,19 @@ class WelcomePanel(QWidget):
         title_row.addWidget(title)
         title_row.addWidget(version, 0, Qt.AlignmentFlag.AlignBottom)
         title_row.addStretch(1)
-        lead = QLabel("Checks concrete strip footings under shear walls for overturning, sliding and soil bearing "
-                      "under ASCE 7-16 load combinations, and finds the smallest footing that passes.")
+        lead = QLabel(
+            "Checks concrete strip footings under shear walls for overturning, sliding and soil bearing "
+            "under ASCE 7-16 load combinations, and finds the smallest footing that passes."
+        )
         lead.setObjectName("welcomeLead")
         lead.setWordWrap(True)
 
         entries = (
-            self._action("Open the demo project", "A two-storey clinic with four walls; one of them fails bearing until it is sized.",
-                         primary=True),
+            self._action(
+                "Open the demo project",
+                "A two-storey clinic with four walls; one of them fails bearing until it is sized.",
+                primary=True,
+            ),
             self._action("New project", "One wall with starting values, to be replaced with your own."),
             self._action("Open a project file…", "A .kernline file saved earlier."),
         )

@@ -56,7 +56,7 @@ def test_a_load_typed_in_the_table_reaches_the_elevation_and_the_verdict(qtbot, 
 
 
 def test_text_with_any_unit_is_accepted(qtbot, window):
-    """"600 mm" in a US project is stored as typed and shown in inches (600 / 25.4 = 23.622 in)."""
+    """ "600 mm" in a US project is stored as typed and shown in inches (600 / 25.4 = 23.622 in)."""
     doc = window.document
     f = field(window, "footing", "width")
     type_into(qtbot, f, "600 mm")
@@ -149,7 +149,9 @@ def test_project_wide_fields_and_choices_recheck_every_wall(qtbot, window):
     raw["soil"]["allowable_bearing"] = "1500 psf"
     for wall in doc.project.walls:
         _p, _w, expected = engine_answer(raw, wall.id)
-        assert doc.results[wall.id].governing[Check.BEARING].ratio == pytest.approx(expected.governing[Check.BEARING].ratio, rel=1e-12)
+        assert doc.results[wall.id].governing[Check.BEARING].ratio == pytest.approx(
+            expected.governing[Check.BEARING].ratio, rel=1e-12
+        )
     form = window.project_form
     form.method.setCurrentIndex(form.method.findData("service-fs"))
     form.method.activated.emit(form.method.currentIndex())
@@ -174,7 +176,7 @@ def test_custom_combinations_are_editable_as_a_table(qtbot, window):
 
 
 def test_a_bad_load_cell_is_refused_and_marked(qtbot, window):
-    """"lots" in a value cell: message under the table, the cell marked, the load unchanged."""
+    """ "lots" in a value cell: message under the table, the cell marked, the load unchanged."""
     from app.views.forms import _ERROR_ROLE
 
     doc = window.document

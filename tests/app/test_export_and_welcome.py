@@ -214,9 +214,18 @@ def test_about_box_gives_version_purpose_caution_and_references(window, dialogs)
 # ---- smoke hook of launch() --------------------------------------------------------------------------
 
 
-@pytest.mark.parametrize(("value", "expected"), [
-    ("250", 250), (" 40 ", 40), ("0", None), ("-5", None), ("1.5", None), ("soon", None), ("", None),
-])
+@pytest.mark.parametrize(
+    ("value", "expected"),
+    [
+        ("250", 250),
+        (" 40 ", 40),
+        ("0", None),
+        ("-5", None),
+        ("1.5", None),
+        ("soon", None),
+        ("", None),
+    ],
+)
 def test_exit_after_accepts_only_a_positive_whole_number(value, expected):
     assert exit_after_ms({EXIT_AFTER_VARIABLE: value}) == expected
     assert exit_after_ms({}) is None
@@ -225,8 +234,14 @@ def test_exit_after_accepts_only_a_positive_whole_number(value, expected):
 @pytest.mark.parametrize("arguments", ["demo=True", ""])
 def test_launch_quits_with_code_zero_when_asked_by_the_environment(tmp_path, arguments):
     """The frozen build's check: ``launch()`` returns 0 on its own (demo, and the welcome panel)."""
-    env = dict(os.environ, QT_QPA_PLATFORM="offscreen", HOME=str(tmp_path), XDG_CONFIG_HOME=str(tmp_path / "config"),
-               XDG_DATA_HOME=str(tmp_path / "data"), **{EXIT_AFTER_VARIABLE: "200"})
+    env = dict(
+        os.environ,
+        QT_QPA_PLATFORM="offscreen",
+        HOME=str(tmp_path),
+        XDG_CONFIG_HOME=str(tmp_path / "config"),
+        XDG_DATA_HOME=str(tmp_path / "data"),
+        **{EXIT_AFTER_VARIABLE: "200"},
+    )
     code = f"from app.main_window import launch; import sys; sys.exit(launch({arguments}))"
     done = subprocess.run([sys.executable, "-c", code], cwd=ROOT, env=env, timeout=60, capture_output=True, text=True)
     assert done.returncode == 0, done.stderr

@@ -42,16 +42,27 @@ def main() -> None:
     wall = project.walls[0]
     n_cases = len(check_wall(project, wall).cases)
     med, p95 = median_time(lambda: check_wall(project, wall), 3000)
-    print(f"check one wall ({n_cases} cases), governing ratios: median {med * 1e3:.3f} ms, p95 {p95 * 1e3:.3f} ms (target < 1 ms)")
+    print(
+        f"check one wall ({n_cases} cases), governing ratios: median {med * 1e3:.3f} ms, p95 {p95 * 1e3:.3f} ms (target < 1 ms)"
+    )
     med, p95 = median_time(lambda: check_wall(project, wall).cases[0], 2000)
     print(f"check one wall with every case record built:    median {med * 1e3:.3f} ms, p95 {p95 * 1e3:.3f} ms")
 
-    bounds = SizingBounds(width_min=12 * INCH, width_max=107 * INCH, width_step=INCH, thickness_min=12 * INCH, thickness_max=59 * INCH, thickness_step=INCH)
+    bounds = SizingBounds(
+        width_min=12 * INCH,
+        width_max=107 * INCH,
+        width_step=INCH,
+        thickness_min=12 * INCH,
+        thickness_max=59 * INCH,
+        thickness_step=INCH,
+    )
     big = replace(wall, sizing=bounds)
     widths, thicknesses = candidate_grid(big)
     assert (widths.size, thicknesses.size) == (96, 48)
     med, p95 = median_time(lambda: size_footing(project, big), 60)
-    print(f"size one wall on a {widths.size} x {thicknesses.size} grid ({n_cases} cases): median {med * 1e3:.2f} ms, p95 {p95 * 1e3:.2f} ms (target < 20 ms)")
+    print(
+        f"size one wall on a {widths.size} x {thicknesses.size} grid ({n_cases} cases): median {med * 1e3:.2f} ms, p95 {p95 * 1e3:.2f} ms (target < 20 ms)"
+    )
 
     with tempfile.TemporaryDirectory() as tmp:
         demo = str(resource_path("demo.kernline"))
@@ -60,7 +71,9 @@ def main() -> None:
             t = time.perf_counter()
             subprocess.run([sys.executable, "-m", "app.cli", "check", demo], capture_output=True, check=False)
             runs.append(time.perf_counter() - t)
-        print(f"kernline check demo, start to exit: median {statistics.median(runs):.3f} s, min {min(runs):.3f} s (target < 0.5 s)")
+        print(
+            f"kernline check demo, start to exit: median {statistics.median(runs):.3f} s, min {min(runs):.3f} s (target < 0.5 s)"
+        )
 
         raw = json.loads(resource_path("demo.kernline").read_text(encoding="utf-8"))
         walls = []
@@ -75,7 +88,9 @@ def main() -> None:
         t = time.perf_counter()
         subprocess.run([sys.executable, "-m", "app.cli", "size", str(path)], capture_output=True, check=False)
         elapsed = time.perf_counter() - t
-        print(f"kernline size, 1,000 walls (demo walls repeated, grids of 1,800-3,145 candidates): {elapsed:.2f} s ({elapsed:.2f} ms per wall)")
+        print(
+            f"kernline size, 1,000 walls (demo walls repeated, grids of 1,800-3,145 candidates): {elapsed:.2f} s ({elapsed:.2f} ms per wall)"
+        )
 
 
 if __name__ == "__main__":

@@ -60,8 +60,12 @@ def main() -> None:
         fresh = []
         for _ in range(runs):
             t = time.perf_counter()
-            subprocess.run([sys.executable, "-m", "app.cli", "report", str(project_file), "-o", str(out)],
-                           check=True, env=env, capture_output=True)
+            subprocess.run(
+                [sys.executable, "-m", "app.cli", "report", str(project_file), "-o", str(out)],
+                check=True,
+                env=env,
+                capture_output=True,
+            )
             fresh.append(time.perf_counter() - t)
 
         from engine.report import write_report
@@ -81,10 +85,14 @@ def main() -> None:
         data = out.read_bytes()
         pages = len(PdfReader(io.BytesIO(data)).pages)
     print(f"{WALLS}-wall package: {pages} pages, {len(data) / 1024:.0f} KiB")
-    print(f"kernline report, fresh process: median {statistics.median(fresh):.2f} s over {runs} run(s) "
-          f"(min {min(fresh):.2f} s, max {max(fresh):.2f} s)")
-    print(f"write_report, warm process:     median {statistics.median(warm):.2f} s "
-          f"(CPU {statistics.median(cpu):.2f} s; min {min(warm):.2f} s, max {max(warm):.2f} s)")
+    print(
+        f"kernline report, fresh process: median {statistics.median(fresh):.2f} s over {runs} run(s) "
+        f"(min {min(fresh):.2f} s, max {max(fresh):.2f} s)"
+    )
+    print(
+        f"write_report, warm process:     median {statistics.median(warm):.2f} s "
+        f"(CPU {statistics.median(cpu):.2f} s; min {min(warm):.2f} s, max {max(warm):.2f} s)"
+    )
     print(f"machine: {os.cpu_count()} CPU(s); load average {os.getloadavg()[0]:.2f}")
 
 

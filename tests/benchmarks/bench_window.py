@@ -59,7 +59,9 @@ def cold_starts(count: int) -> list[float]:
     env = dict(os.environ, QT_QPA_PLATFORM="offscreen")
     for _ in range(count):
         start = time.perf_counter()
-        child = subprocess.Popen([sys.executable, "-c", code], stdout=subprocess.PIPE, stderr=subprocess.DEVNULL, text=True, env=env)
+        child = subprocess.Popen(
+            [sys.executable, "-c", code], stdout=subprocess.PIPE, stderr=subprocess.DEVNULL, text=True, env=env
+        )
         assert child.stdout is not None
         line = child.stdout.readline()
         shown = time.perf_counter()
@@ -124,13 +126,19 @@ def main(argv: list[str]) -> int:
     print(f"machine: {os.cpu_count()} cores, Python {sys.version.split()[0]}, QT_QPA_PLATFORM={os.environ['QT_QPA_PLATFORM']}")
     updated, painted = edit_latency(args.edits)
     ms = 1000.0
-    print(f"edit to updated views ({len(updated)} edits): median {statistics.median(updated) * ms:.1f} ms, "
-          f"p95 {percentile(updated, 0.95) * ms:.1f} ms")
-    print(f"edit to painted window ({len(painted)} edits): median {statistics.median(painted) * ms:.1f} ms, "
-          f"p95 {percentile(painted, 0.95) * ms:.1f} ms   (target: median < 30 ms)")
+    print(
+        f"edit to updated views ({len(updated)} edits): median {statistics.median(updated) * ms:.1f} ms, "
+        f"p95 {percentile(updated, 0.95) * ms:.1f} ms"
+    )
+    print(
+        f"edit to painted window ({len(painted)} edits): median {statistics.median(painted) * ms:.1f} ms, "
+        f"p95 {percentile(painted, 0.95) * ms:.1f} ms   (target: median < 30 ms)"
+    )
     starts = cold_starts(args.starts)
-    print(f"cold start to shown window ({len(starts)} runs): median {statistics.median(starts):.2f} s, "
-          f"min {min(starts):.2f} s, max {max(starts):.2f} s   (target < 2 s)")
+    print(
+        f"cold start to shown window ({len(starts)} runs): median {statistics.median(starts):.2f} s, "
+        f"min {min(starts):.2f} s, max {max(starts):.2f} s   (target < 2 s)"
+    )
     return 0
 
 

@@ -62,8 +62,11 @@ def main(argv: list[str]) -> int:
         shot("failing-wall.png")
         window.size_current()
         _wait(app, lambda: not window.runner.busy())
-        window.design_map.readout.setText(window.design_map.cell_text(*window.design_map.cell_at(
-            doc.current_wall.footing.width / 0.0254, doc.current_wall.footing.thickness / 0.0254)))
+        window.design_map.readout.setText(
+            window.design_map.cell_text(
+                *window.design_map.cell_at(doc.current_wall.footing.width / 0.0254, doc.current_wall.footing.thickness / 0.0254)
+            )
+        )
         shot("design-map.png")
         window.set_units("SI")
         _wait(app, lambda: not window.runner.busy())

@@ -177,7 +177,10 @@ def test_si_project_prints_si_units_on_a4(demo_document) -> None:
     text = package.text_of("Wall N1")
     result = check_wall(project, project.walls[0])
     br = result.cases[result.governing[Check.BEARING].case_index].bearing
-    assert f"qmax = {format_quantity(br.q_max, Kind.PRESSURE, 'SI')}" in text or f"= {format_quantity(br.q_max, Kind.PRESSURE, 'SI')}" in text
+    assert (
+        f"qmax = {format_quantity(br.q_max, Kind.PRESSURE, 'SI')}" in text
+        or f"= {format_quantity(br.q_max, Kind.PRESSURE, 'SI')}" in text
+    )
     assert " kN" in text and " kPa" in text and "psf" not in text and " kip" not in text
     box = PdfReader(io.BytesIO(package.pdf)).pages[0].mediabox
     assert (round(float(box.width)), round(float(box.height))) == (595, 842)
@@ -245,13 +248,21 @@ def test_command_line_report(tmp_path: Path) -> None:
     demo = resource_path("demo.kernline")
     out = tmp_path / "c3.pdf"
     env = dict(os.environ, QT_QPA_PLATFORM="offscreen")
-    done = subprocess.run([sys.executable, "-m", "app.cli", "report", str(demo), "-o", str(out), "--walls", "C3"],
-                          capture_output=True, text=True, env=env)
+    done = subprocess.run(
+        [sys.executable, "-m", "app.cli", "report", str(demo), "-o", str(out), "--walls", "C3"],
+        capture_output=True,
+        text=True,
+        env=env,
+    )
     assert done.returncode == 0, done.stderr
     texts = page_texts(out.read_bytes())
     assert any("Sheet subject Wall C3 " in t for t in texts)
     assert not any("Sheet subject Wall N1 " in t for t in texts)
-    bad = subprocess.run([sys.executable, "-m", "app.cli", "report", str(demo), "-o", str(out), "--walls", "Q7"],
-                         capture_output=True, text=True, env=env)
+    bad = subprocess.run(
+        [sys.executable, "-m", "app.cli", "report", str(demo), "-o", str(out), "--walls", "Q7"],
+        capture_output=True,
+        text=True,
+        env=env,
+    )
     assert bad.returncode == 2
     assert "Q7" in bad.stderr and "Traceback" not in bad.stderr

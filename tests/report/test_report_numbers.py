@@ -111,7 +111,9 @@ def test_sliding_equations(demo: RenderedPackage, results, wall_id: str, demo_do
     assert f"Fμ = μ N = {mu:g} × {force(case.vertical)} = {force(sl.friction)}" in text
     assert f"Fc = {force(sl.cohesion)}" in text
     assert f"= {force(sl.passive)}" in text
-    assert f"R = Fμ + Fc + Fp = {force(sl.friction)} + {force(sl.cohesion)} + {force(sl.passive)} = {force(sl.resistance)}" in text
+    assert (
+        f"R = Fμ + Fc + Fp = {force(sl.friction)} + {force(sl.cohesion)} + {force(sl.passive)} = {force(sl.resistance)}" in text
+    )
     assert f"ratio = R / V = {force(sl.resistance)} / {force(sl.force)} = {ratio(sl.ratio)}" in text
 
 
@@ -194,7 +196,10 @@ def test_sizing_section(demo: RenderedPackage, demo_document, wall_id: str) -> N
     s = size_footing(project, wall)
     text = demo.text_of(f"Wall {wall_id}")
     z = wall.sizing
-    assert f"widths B from {format_length(z.width_min, US)} to {format_length(z.width_max, US)} in steps of {format_length(z.width_step, US)}" in text
+    assert (
+        f"widths B from {format_length(z.width_min, US)} to {format_length(z.width_max, US)} in steps of {format_length(z.width_step, US)}"
+        in text
+    )
     assert f"{s.candidates:,} candidates" in text
     assert f"Smallest passing size: B × D = {format_length(s.width, US)} × {format_length(s.thickness, US)}." in text
     assert s.message in text
@@ -226,11 +231,21 @@ def _appendix_row(case, governing: bool) -> str:
     ot, sl, br = case.overturning, case.sliding, case.bearing
     failing = [n for n, x in (("OT", ot), ("SL", sl), ("BR", br)) if x is not None and not x.passes]
     cells = [
-        case.combination + (" *" if governing else ""), {"+": "+", "-": "−", "none": "—"}[case.direction],
-        num(case.vertical, Kind.FORCE), num(case.lateral, Kind.FORCE), num(case.moment, Kind.MOMENT),
-        num(br.eccentricity, Kind.LENGTH), num(ot.moment, Kind.MOMENT), num(ot.resisting, Kind.MOMENT), shown(ot),
-        num(sl.resistance, Kind.FORCE), shown(sl), num(br.q_max, Kind.PRESSURE), num(br.allowable, Kind.PRESSURE),
-        shown(br), "ok" if not failing else "fails " + "/".join(failing),
+        case.combination + (" *" if governing else ""),
+        {"+": "+", "-": "−", "none": "—"}[case.direction],
+        num(case.vertical, Kind.FORCE),
+        num(case.lateral, Kind.FORCE),
+        num(case.moment, Kind.MOMENT),
+        num(br.eccentricity, Kind.LENGTH),
+        num(ot.moment, Kind.MOMENT),
+        num(ot.resisting, Kind.MOMENT),
+        shown(ot),
+        num(sl.resistance, Kind.FORCE),
+        shown(sl),
+        num(br.q_max, Kind.PRESSURE),
+        num(br.allowable, Kind.PRESSURE),
+        shown(br),
+        "ok" if not failing else "fails " + "/".join(failing),
     ]
     return " ".join(cells)
 

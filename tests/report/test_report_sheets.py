@@ -48,8 +48,13 @@ def test_subjects_follow_the_sections(demo: RenderedPackage, demo_document) -> N
     ordered = list(dict.fromkeys(subjects))
     ids = [w.id for w in demo_document.project.walls]
     assert ordered == [
-        "Project information", "Design basis", "References and notes", "Cautions", "Summary schedule",
-        *[f"Wall {i}" for i in ids], *[f"Appendix, wall {i}" for i in ids],
+        "Project information",
+        "Design basis",
+        "References and notes",
+        "Cautions",
+        "Summary schedule",
+        *[f"Wall {i}" for i in ids],
+        *[f"Appendix, wall {i}" for i in ids],
     ]
     # each subject's sheets are consecutive
     for subject in ordered:
@@ -97,8 +102,16 @@ def test_design_basis_lists_the_combinations_and_soil_source(demo: RenderedPacka
 def test_references_cite_the_code_sections_and_textbooks(demo: RenderedPackage) -> None:
     """ASCE 7-16 2.4.1 and 12.4.2.3, IBC 2021 1605 and 1806, and the textbook basis are cited."""
     refs = demo.text_of("References and notes")
-    for expected in ("ASCE/SEI 7-16", "2.4.1", "12.4.2.3", "International Building Code 2021", "1605", "1806",
-                     "Principles of Foundation Engineering", "Foundation Analysis and Design"):
+    for expected in (
+        "ASCE/SEI 7-16",
+        "2.4.1",
+        "12.4.2.3",
+        "International Building Code 2021",
+        "1605",
+        "1806",
+        "Principles of Foundation Engineering",
+        "Foundation Analysis and Design",
+    ):
         assert expected in refs, expected
 
 

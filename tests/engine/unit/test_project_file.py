@@ -86,7 +86,11 @@ def test_seismic_and_wind_point_loads_reverse_by_default():
 @pytest.mark.parametrize(
     ("mutate", "field", "words"),
     [
-        (lambda r: r["walls"][0]["footing"].__setitem__("width", "24"), "walls[0].footing.width", 'expected a length such as "24 in", got "24"'),
+        (
+            lambda r: r["walls"][0]["footing"].__setitem__("width", "24"),
+            "walls[0].footing.width",
+            'expected a length such as "24 in", got "24"',
+        ),
         (lambda r: r["walls"][0]["footing"].pop("thickness"), "walls[0].footing.thickness", "is missing"),
         (lambda r: r["walls"][0].__setitem__("length", "20 kip"), "walls[0].length", "expected a length"),
         (lambda r: r["walls"][0].__setitem__("length", "-2 ft"), "walls[0].length", "greater than zero"),
@@ -102,7 +106,11 @@ def test_seismic_and_wind_point_loads_reverse_by_default():
         (lambda r: r.__setitem__("walls", []), "walls", "is empty"),
         (lambda r: r.pop("walls"), "walls", "is missing"),
         (lambda r: r["walls"][0]["footing"].__setitem__("width", "4 in"), "walls[0].footing.width", "narrower than the wall"),
-        (lambda r: r["walls"][0].__setitem__("stem", {"height": "2 ft", "thickness": "24 in"}), "walls[0].footing.width", "narrower than the stem"),
+        (
+            lambda r: r["walls"][0].__setitem__("stem", {"height": "2 ft", "thickness": "24 in"}),
+            "walls[0].footing.width",
+            "narrower than the stem",
+        ),
         (lambda r: r["walls"][0]["loads"][1].__setitem__("at", "30 ft"), "walls[0].loads[1].at", "off the footing"),
         (lambda r: r["walls"][0]["loads"][0].__setitem__("end", "25 ft"), "walls[0].loads[0]", "runs past"),
         (lambda r: r["walls"][0]["loads"][0].__setitem__("reverses", True), "walls[0].loads[0].reverses", "only W and E"),
@@ -110,18 +118,37 @@ def test_seismic_and_wind_point_loads_reverse_by_default():
         (lambda r: r.__setitem__("criteria", {"method": "lrfd"}), "criteria.method", '"asce7-16-asd"'),
         (lambda r: r.__setitem__("criteria", {"required": {"bearing": 0}}), "criteria.required.bearing", "greater than zero"),
         (lambda r: r.__setitem__("criteria", {"combinations": []}), "criteria.combinations", "is empty"),
-        (lambda r: r.__setitem__("criteria", {"combinations": [{"name": "x", "factors": {"Z": 1}}]}), "criteria.combinations[0].factors.Z", "unknown load case"),
+        (
+            lambda r: r.__setitem__("criteria", {"combinations": [{"name": "x", "factors": {"Z": 1}}]}),
+            "criteria.combinations[0].factors.Z",
+            "unknown load case",
+        ),
         (lambda r: r.__setitem__("walls", [r["walls"][0], copy.deepcopy(r["walls"][0])]), "walls[1].id", "used by another wall"),
-        (lambda r: r["walls"][0].__setitem__("sizing", {"width_min": "3 ft", "width_max": "2 ft"}), "walls[0].sizing.width_max", "width_min"),
+        (
+            lambda r: r["walls"][0].__setitem__("sizing", {"width_min": "3 ft", "width_max": "2 ft"}),
+            "walls[0].sizing.width_max",
+            "width_min",
+        ),
         (lambda r: r.__setitem__("criteria", {"method": ["x"]}), "criteria.method", "expected one of"),
         (lambda r: r.__setitem__("soil", {"bearing_basis": {"a": 1}}), "soil.bearing_basis", "expected one of"),
         (lambda r: r["walls"][0]["loads"][0].__setitem__("case", ["D"]), "walls[0].loads[0].case", "unknown load case"),
-        (lambda r: r.__setitem__("criteria", {"combinations": [{"name": "x", "factors": {"D": 1}, "checks": [["a"]]}]}), "criteria.combinations[0].checks[0]", "expected"),
+        (
+            lambda r: r.__setitem__("criteria", {"combinations": [{"name": "x", "factors": {"D": 1}, "checks": [["a"]]}]}),
+            "criteria.combinations[0].checks[0]",
+            "expected",
+        ),
         (lambda r: r.__setitem__("soil", {"friction": 10**400}), "soil.friction", "far too large"),
         (lambda r: r.__setitem__("criteria", {"sds": 5}), "criteria.sds", "negative"),
-        (lambda r: r["walls"][0]["loads"][0].__setitem__("start", "25 ft"), "walls[0].loads[0].start", "give an \"end\""),
-        (lambda r: r["walls"][0]["loads"].append({"type": "point", "case": "W", "value": "-3 kip", "at": "-1 ft"}) or r["walls"][0]["footing"].__setitem__("extension_start", "1 ft"), "walls[0].loads[3].reverses", "mirror image"),
-        (lambda r: r["walls"][0]["footing"].__setitem__("width", "-18\""), "walls[0].footing.width", "greater than zero"),
+        (lambda r: r["walls"][0]["loads"][0].__setitem__("start", "25 ft"), "walls[0].loads[0].start", 'give an "end"'),
+        (
+            lambda r: (
+                r["walls"][0]["loads"].append({"type": "point", "case": "W", "value": "-3 kip", "at": "-1 ft"})
+                or r["walls"][0]["footing"].__setitem__("extension_start", "1 ft")
+            ),
+            "walls[0].loads[3].reverses",
+            "mirror image",
+        ),
+        (lambda r: r["walls"][0]["footing"].__setitem__("width", '-18"'), "walls[0].footing.width", "greater than zero"),
     ],
 )
 def test_bad_input_names_the_field_and_the_problem(mutate, field, words):

@@ -129,7 +129,10 @@ def test_next_narrower_candidate_below_the_wall_is_named_as_such():
 def test_no_equilibrium_at_the_largest_size_is_said_in_words():
     """When the resultant stays beyond the footing's end, the diagnosis says so and what helps."""
     p = project(
-        loads=[{"type": "line", "case": "D", "value": "50 plf"}, {"type": "lateral", "case": "W", "value": "60 kip", "height": "30 ft"}],
+        loads=[
+            {"type": "line", "case": "D", "value": "50 plf"},
+            {"type": "lateral", "case": "W", "value": "60 kip", "height": "30 ft"},
+        ],
         sizing={"width_max": "24 in", "thickness_max": "18 in"},
     )
     s = size_footing(p, p.walls[0])

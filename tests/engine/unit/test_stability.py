@@ -99,7 +99,9 @@ def test_reversing_uplift_governs_in_both_directions_equally():
     assert plus.overturning.ratio == pytest.approx(minus.overturning.ratio, rel=1e-12)
     assert plus.bearing.eccentricity == pytest.approx(-minus.bearing.eccentricity, rel=1e-12)
     # the uplift at the heel overturns: with it the ratio is lower than without it
-    without = make(loads[:1] + loads[3:], footing={"width": "2 ft", "thickness": "1 ft", "extension_start": "1 ft", "extension_end": "1 ft"})
+    without = make(
+        loads[:1] + loads[3:], footing={"width": "2 ft", "thickness": "1 ft", "extension_start": "1 ft", "extension_end": "1 ft"}
+    )
     r0 = check_wall(without, without.walls[0])
     assert r.governing[Check.OVERTURNING].ratio < r0.governing[Check.OVERTURNING].ratio
 
@@ -114,7 +116,10 @@ def test_no_lateral_load_means_no_overturning_or_sliding_demand():
 
 def test_bearing_increase_applies_only_with_wind_or_seismic():
     """The allowable is raised only in combinations that carry W or E (IBC 2021 1806.1 usage)."""
-    loads = [{"type": "line", "case": "D", "value": "500 plf"}, {"type": "lateral", "case": "W", "value": "1 kip", "height": "10 ft"}]
+    loads = [
+        {"type": "line", "case": "D", "value": "500 plf"},
+        {"type": "lateral", "case": "W", "value": "1 kip", "height": "10 ft"},
+    ]
     p = make(loads, criteria={"bearing_increase": 1.3333})
     r = check_wall(p, p.walls[0])
     for case in r.cases:

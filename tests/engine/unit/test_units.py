@@ -20,7 +20,7 @@ INCH, FOOT, LBF = 0.0254, 0.3048, 4.4482216152605
         ("600 mm", Kind.LENGTH, 0.6),
         ("2 ft 6 in", Kind.LENGTH, 30 * INCH),
         ("2'-6\"", Kind.LENGTH, 30 * INCH),
-        ("6\"", Kind.LENGTH, 6 * INCH),
+        ('6"', Kind.LENGTH, 6 * INCH),
         ("1.2 m", Kind.LENGTH, 1.2),
         ("2 kip", Kind.FORCE, 2000 * LBF),
         ("10 kN", Kind.FORCE, 10_000.0),
@@ -64,8 +64,17 @@ def test_units_file_defines_trade_units():
 
 @pytest.mark.parametrize(
     ("text", "kind"),
-    [("24", Kind.LENGTH), ("24 kip", Kind.LENGTH), ("abc", Kind.LENGTH), ("", Kind.LENGTH), ("1 ft 2 kip", Kind.LENGTH),
-     ("2000 psi ft", Kind.PRESSURE), ("3 ft", Kind.FORCE), ("150 psf", Kind.UNIT_WEIGHT), ("2 lb", Kind.LENGTH)],
+    [
+        ("24", Kind.LENGTH),
+        ("24 kip", Kind.LENGTH),
+        ("abc", Kind.LENGTH),
+        ("", Kind.LENGTH),
+        ("1 ft 2 kip", Kind.LENGTH),
+        ("2000 psi ft", Kind.PRESSURE),
+        ("3 ft", Kind.FORCE),
+        ("150 psf", Kind.UNIT_WEIGHT),
+        ("2 lb", Kind.LENGTH),
+    ],
 )
 def test_wrong_dimension_or_text_is_refused_with_an_example(text, kind):
     """A bare number, a wrong unit or text is refused; the message shows an example of the right form."""
