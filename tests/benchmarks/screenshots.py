@@ -3,7 +3,8 @@
     python tests/benchmarks/screenshots.py [OUT_DIR]
 
 Writes demo.png (the demo project open), failing-wall.png (wall C3, which fails bearing),
-design-map.png (C3 sized, its design map shown) and si-units.png (the same in SI units) to
+design-map.png (C3 sized, its design map shown), si-units.png (the same in SI units) and
+welcome.png (a plain start with two recent projects) to
 resources/screenshots/ unless another folder is given. Runs offscreen; touches no user settings.
 """
 
@@ -74,6 +75,26 @@ def main(argv: list[str]) -> int:
         shot("si-units.png")
         doc.undo_stack.clear()
         window.close()
+
+        # the welcome panel of a plain start, with two recent projects (copies of the demo)
+        from engine.resources import resource_path
+
+        recent = []
+        for name in ("clinic.kernline", "warehouse-annex.kernline"):
+            copy = Path(tmp) / "Projects" / name
+            copy.parent.mkdir(exist_ok=True)
+            copy.write_text(resource_path("demo.kernline").read_text(encoding="utf-8"), encoding="utf-8")
+            recent.insert(0, str(copy))
+        settings.setValue("recent_files", recent)
+        welcome = MainWindow(settings=settings, recovery_dir=Path(tmp) / "recovery")
+        welcome.resize(*SIZE)
+        welcome.start(None, demo=False)
+        welcome.show()
+        app.processEvents()
+        path = out / "welcome.png"
+        welcome.grab().save(str(path))
+        shots.append(path)
+        welcome.close()
     for path in shots:
         print(path)
     return 0
