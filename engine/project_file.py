@@ -199,9 +199,19 @@ def _criteria(raw: Any) -> DesignCriteria:
         method=method,
         required=required,
         sds=sds,
-        bearing_increase=_number(obj, "bearing_increase", 1.0, positive=True),
+        bearing_increase=_bearing_increase(obj),
         custom_combinations=tuple(custom),
     )
+
+
+def _bearing_increase(obj: dict[str, Any]) -> float:
+    """The factor on the allowable in combinations with W or E: 1.0 (none) or more."""
+    value = _number(obj, "bearing_increase", 1.0, positive=True)
+    if value < 1.0:
+        raise InputError(
+            "bearing_increase", f"is a factor that raises the allowable with W or E: 1.0 for none or more, got {value:g}"
+        )
+    return value
 
 
 def _soil(raw: Any) -> SoilProperties:
@@ -238,9 +248,11 @@ def _load(raw: Any, wall_length: float) -> LineLoad | PointLoad | LateralLoad:
     if kind == "point":
         case = _case(obj)
         reverses = _reverses(obj, case, default=case.is_lateral_source)
+        value = _quantity(obj, "value", Kind.FORCE, None)
+        _no_upward_dead_load(case, value, obj)
         return PointLoad(
             case=case,
-            value=_quantity(obj, "value", Kind.FORCE, None),
+            value=value,
             at=_quantity(obj, "at", Kind.LENGTH, None),
             label=label,
             reverses=reverses,
@@ -254,6 +266,14 @@ def _load(raw: Any, wall_length: float) -> LineLoad | PointLoad | LateralLoad:
             label=label,
         )
     raise InputError("type", f'expected "line", "point" or "lateral", got {_show(kind)}')
+
+
+def _no_upward_dead_load(case: LoadCase, value: float, obj: dict[str, Any]) -> None:
+    """Dead load acts downward (ASCE 7-16 3.1: the weight of construction); uplift belongs to W or E."""
+    if case is LoadCase.D and value < 0.0:
+        raise InputError(
+            "value", f'a dead load cannot act upward, got "{obj.get("value")}"; enter uplift as a W or E load (negative value)'
+        )
 
 
 def _reverses(obj: dict[str, Any], case: LoadCase, default: bool) -> bool:
