@@ -1,8 +1,10 @@
 """Sliding of the footing along its length under the wall's in-plane shear.
 
 Sources:
-* Friction: mu * N at the base, N the vertical load on the soil, only while N > 0
-  (IBC 2021 Table 1806.2 note a: the coefficient of friction multiplies the dead load).
+* Friction: mu * N at the base, N the combination's whole vertical load on the soil, only while
+  N > 0 (the project's contract). IBC 2021 Table 1806.2 note a applies the coefficient to the dead
+  load; the two agree in the 0.6D and (0.6 - 0.14 S_DS)D combinations that usually govern sliding,
+  and the README and the calc package state the difference.
 * Cohesion: c times the contact area B*a, capped at one-half of N (IBC 2021 1806.3.2 caps the
   cohesion-type resistance at one-half the dead load; we cap it at half of the vertical load of the
   combination, which is the dead load times its factor plus any companion loads).
