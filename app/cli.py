@@ -107,6 +107,13 @@ def _dispatch(args: argparse.Namespace) -> int:
 def _window(path: str | None, demo: bool) -> int:
     if path is not None and not Path(path).is_file():
         raise InputError("", f"{path}: no such file")
+    if _no_display():
+        print(
+            "kernline: no display to open the window on (DISPLAY and WAYLAND_DISPLAY are not set). "
+            "The headless commands work here: kernline check, size, report, schedule.",
+            file=sys.stderr,
+        )
+        return EXIT_INTERNAL
     try:
         from app.main_window import launch
     except ImportError as err:
@@ -115,6 +122,15 @@ def _window(path: str | None, demo: bool) -> int:
         )
         return EXIT_INTERNAL
     return launch(path=path, demo=demo)
+
+
+def _no_display() -> bool:
+    """True on Linux/BSD with no X or Wayland display and no Qt platform chosen (Qt would abort)."""
+    if not sys.platform.startswith(("linux", "freebsd", "openbsd")):
+        return False
+    if os.environ.get("QT_QPA_PLATFORM"):
+        return False
+    return not (os.environ.get("DISPLAY") or os.environ.get("WAYLAND_DISPLAY"))
 
 
 def _save_demo(path: str) -> int:

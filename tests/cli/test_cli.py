@@ -114,3 +114,13 @@ def test_json_never_carries_nan_or_infinity(tmp_path, capsys):
 def test_missing_file_is_named_once(tmp_path):
     result = run("check", str(tmp_path / "nope.kernline"))
     assert result.stderr.count("nope.kernline") == 1
+
+
+def test_window_without_a_display_says_so(monkeypatch, capsys):
+    """With no display and no Qt platform chosen, the window command explains instead of aborting."""
+    monkeypatch.delenv("QT_QPA_PLATFORM", raising=False)
+    monkeypatch.delenv("DISPLAY", raising=False)
+    monkeypatch.delenv("WAYLAND_DISPLAY", raising=False)
+    monkeypatch.setattr(sys, "platform", "linux")
+    assert cli.main(["demo"]) == cli.EXIT_INTERNAL
+    assert "no display" in capsys.readouterr().err
