@@ -311,19 +311,19 @@ class _Fmt:
         self.units = units
 
     def length(self, value: float) -> str:
-        return format_length(value, self.units)
+        return minus(format_length(value, self.units))
 
     def force(self, value: float | Any) -> str:
-        return format_quantity(float(value), Kind.FORCE, self.units)
+        return minus(format_quantity(float(value), Kind.FORCE, self.units))
 
     def moment(self, value: float) -> str:
-        return format_quantity(value, Kind.MOMENT, self.units)
+        return minus(format_quantity(value, Kind.MOMENT, self.units))
 
     def pressure(self, value: float) -> str:
-        return format_quantity(value, Kind.PRESSURE, self.units)
+        return minus(format_quantity(value, Kind.PRESSURE, self.units))
 
     def line_load(self, value: float) -> str:
-        return format_quantity(value, Kind.LINE_LOAD, self.units)
+        return minus(format_quantity(value, Kind.LINE_LOAD, self.units))
 
     def unit_weight(self, value: float) -> str:
         return format_quantity(value, Kind.UNIT_WEIGHT, self.units)
@@ -337,12 +337,65 @@ class _Fmt:
             return "—"
         if math.isinf(value):
             return "∞"
+        if kind is Kind.LENGTH:  # a table length: decimal feet (US) or metres to three places
+            return self.decimal(value).rsplit(" ", 1)[0]
         info = kind.info
         decimals = info.decimals_us if self.units == "US" else info.decimals_si
-        return f"{to_display(value, kind, self.units):,.{decimals}f}"
+        return minus(f"{to_display(value, kind, self.units):,.{decimals}f}")
 
     def unit(self, kind: Kind) -> str:
         return unit_label(kind, self.units)
+
+    def decimal(self, value: float, places: int = 3) -> str:
+        """A length in decimal feet (US) or metres (SI) to ``places`` decimals, for substitution.
+
+        Substituted lengths that are computed (e, a) print this way, so that the printed line
+        reproduces its printed result; a true minus sign marks a negative value.
+        """
+        unit = "ft" if self.units == "US" else "m"
+        shown = value / _FOOT if self.units == "US" else value
+        return minus(f"{shown:,.{places}f} {unit}")
+
+    def exact(self, value: float) -> str:
+        """An input length in decimal feet (m in SI): three decimals, or four where three are not exact."""
+        shown = value / _FOOT if self.units == "US" else value
+        places = 3 if abs(shown - round(shown, 3)) < 1e-7 else 4
+        return self.decimal(value, places)
+
+    def signed_length(self, value: float) -> str:
+        """A signed computed length: decimal with a true minus, then feet-inches (US) and the side it is toward."""
+        side = "toward x = L_{f}" if value > 0 else ("toward x = 0" if value < 0 else "at mid-length")
+        extra = f"{format_length(abs(value), self.units)} " if self.units == "US" else ""
+        return f"{self.decimal(value)} ({extra}{side})"
+
+    def carried(self, value: float | Any, kind: Kind) -> str:
+        """A force or moment as carried through the equations: the display precision when that is exact,
+        else one more decimal (so a line recomputed from printed values lands on its printed result)."""
+        value = float(value)
+        info = kind.info
+        decimals = info.decimals_us if self.units == "US" else info.decimals_si
+        shown = to_display(value, kind, self.units)
+        if abs(shown - round(shown, decimals)) > 1e-7:
+            decimals += 1
+        return minus(format_quantity(value, kind, self.units, decimals))
+
+    def sub(self, value: float | Any, kind: Kind) -> str:
+        """:meth:`carried` for substitution into an expression: a negative value in parentheses."""
+        return paren(self.carried(value, kind))
+
+
+_FOOT = 0.3048
+
+
+def minus(text: str) -> str:
+    """Text with a leading hyphen-minus turned into a true minus sign (−), so it cannot read as a dash."""
+    return "−" + text[1:] if text.startswith("-") else text
+
+
+def paren(text: str) -> str:
+    """A substituted value, in parentheses with a true minus when it is negative: ``(−1.20 kip)``."""
+    text = minus(text)
+    return f"({text})" if text.startswith("−") else text
 
 
 def factor_text(value: float) -> str:
@@ -500,6 +553,12 @@ def build_package(
     for r in reports:
         name = f"Wall {r.wall.id}" + (f": {_clean(r.wall.label)}" if r.wall.label.strip() else "")
         entries.append(ContentsEntry(name, (("sheet", f"wall:{r.wall.id}"), ("all cases: sheet", f"appendix:{r.wall.id}"))))
+    if reports:
+        entries.append(
+            ContentsEntry(
+                "Appendix: every combination and direction, by wall", (("from sheet", f"appendix:{reports[0].wall.id}"),)
+            )
+        )
     sections.insert(0, _cover(project, reports, title, tuple(entries)))
     return Package(title=title, units=project.units, sections=tuple(sections), wall_ids=tuple(w.id for w in walls))
 
@@ -509,23 +568,39 @@ def build_package(
 # ---------------------------------------------------------------------------------------------
 
 
+def _count(n: int, noun: str) -> str:
+    """``n`` with the noun in the singular or plural: "1 wall", "4 walls"."""
+    return f"{n} {noun}" if n == 1 else f"{n} {noun}s"
+
+
 def _cover(project: Project, reports: Sequence[WallReport], title: TitleBlock, contents: tuple[ContentsEntry, ...]) -> Section:
     info = project.info
     n_fail = sum(not r.result.passes for r in reports)
     failing = [r.wall.id for r in reports if not r.result.passes]
     ids = ", ".join(r.wall.id for r in reports)
     scope = (
-        f"This package covers {len(reports)} of the project's {len(project.walls)} wall(s): {ids}."
+        f"This package covers {_count(len(reports), 'wall')} of the project's {len(project.walls)}: {ids}."
         if len(reports) != len(project.walls)
-        else f"This package covers all {len(reports)} wall(s) of the project: {ids}."
+        else (
+            f"This package covers all {_count(len(reports), 'wall')} of the project: {ids}."
+            if len(reports) > 1
+            else f"This package covers the project's one wall: {ids}."
+        )
     )
     if n_fail:
         verdict = Verdict(
             False,
-            f"{n_fail} of {len(reports)} wall(s) FAIL on their current footing: {', '.join(failing)}. See the summary schedule and the wall sheets.",
+            f"{n_fail} of {_count(len(reports), 'wall')} {'FAILS' if n_fail == 1 else 'FAIL'} on "
+            f"{'its' if n_fail == 1 else 'their'} current footing: {', '.join(failing)}. "
+            "See the summary schedule and the wall sheets.",
         )
     else:
-        verdict = Verdict(True, f"All {len(reports)} wall(s) pass every check on their current footing.")
+        verdict = Verdict(
+            True,
+            f"All {_count(len(reports), 'wall')} pass every check on their current footing."
+            if len(reports) > 1
+            else "The wall passes every check on its current footing.",
+        )
     blocks: list[Block] = [
         Heading("Calculation package"),
         Para(
@@ -560,7 +635,11 @@ _METHOD_TEXT = {
         "ASCE 7-16 allowable stress design: the basic combinations of section 2.4.1 with the seismic load effect of "
         "section 12.4.2.3 (ASD forms of section 2.4.5). The vertical seismic effect Ev = 0.2 S_{DS} D (12.4.2.2) is "
         "included in the dead-load factor of the seismic combinations. Wind W and seismic E are entered at strength "
-        "level; the combinations apply 0.6W and 0.7E."
+        "level; the combinations apply 0.6W and 0.7E. E is the horizontal seismic load effect as given by the engineer, "
+        "E_{h} = ρ Q_{E} with the redundancy factor ρ included; the overstrength factor Ω_{0} is not applied. "
+        "With these ASD combinations a required ratio of 1.00 is sufficient: the margin against overturning and "
+        "sliding is in the reduced dead load of 0.6D (2.4.1) and (0.6 − 0.14 S_{DS})D (2.4.5) that resists the full "
+        "wind or seismic effect."
     ),
     Method.SERVICE_FS: (
         "Service loads with factors of safety (common practice): unfactored D + W and D + E checked against the "
@@ -601,7 +680,7 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
     basis = (
         "gross (compared with the peak pressure)"
         if soil.bearing_basis is BearingBasis.GROSS
-        else ("net (compared with the peak pressure less the overburden γ_{s}(c + D))")
+        else ("net (compared with the peak pressure less the overburden γ_{s}(h_{s} + t_{f}))")
     )
     blocks: list[Block] = [
         Heading("Design basis"),
@@ -629,9 +708,14 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
             (
                 (formula("Allowable bearing pressure q_{a}"), fmt.pressure(soil.allowable_bearing)),
                 ("Basis of the allowable", formula(basis)),
-                ("Friction coefficient μ (on the vertical load N)", f"{soil.friction:g}"),
-                ("Cohesion c (sliding; capped at 0.5 N)", fmt.pressure(soil.cohesion)),
-                ("Passive pressure K, per depth", fmt.gradient(soil.passive)),
+                ("Friction coefficient μ (on the vertical load N; see below)", f"{soil.friction:g}"),
+                ("Cohesion c (sliding; capped at 0.5 N; see below)", fmt.pressure(soil.cohesion)),
+                (
+                    formula("Passive lateral bearing pressure per foot of depth p_{p} (IBC Table 1806.2)")
+                    if project.units == "US"
+                    else formula("Passive lateral bearing pressure per metre of depth p_{p}"),
+                    fmt.gradient(soil.passive),
+                ),
                 ("Passive ignored from grade to depth", fmt.length(soil.passive_ignore)),
                 (formula("Soil unit weight γ_{s}"), fmt.unit_weight(soil.unit_weight)),
                 (
@@ -647,22 +731,42 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
         Bullets(
             (
                 formula(
+                    "Symbols: B footing width, t_{f} footing thickness, L_{f} footing length, h_{s} soil cover over the "
+                    "footing, t_{w} wall thickness, h_{stem} and t_{stem} stem wall height and thickness, c cohesion, "
+                    "p_{p} passive pressure per depth. D, L, L_{r}, S, R, W and E are the load cases as ASCE 7 writes them. "
+                    "In the equations f is the combination's factor on the case of the load it multiplies, and f_{D} "
+                    "its factor on D, which the self weight W carries. P is a vertical load (its resultant), H a lateral "
+                    "load at height h above the top of the footing."
+                ),
+                formula(
                     "Overturning: moments about the toe (the footing end the lateral load pushes toward). "
                     "Ratio M_{R} / M_{OT}; downward loads resist, uplift and lateral loads overturn; lateral loads act "
-                    "at their height above the top of the footing plus the footing thickness D."
+                    "at their height above the top of the footing plus the footing thickness t_{f}."
                 ),
                 formula(
-                    "Sliding: resistance R = friction μ N + cohesion min(c B a, 0.5 N) + passive on the footing's "
-                    "end face; ratio R / V (resisting over driving, Bowles)."
+                    "Sliding: resistance R = friction μ N + cohesion min(c B a, 0.5 N) + passive p_{p} on the footing's "
+                    "end face; ratio R / V (resisting over driving, Bowles). N is the combination's total vertical load on "
+                    "the soil, with the factored self weight: it includes any live, snow or vertical seismic load the "
+                    "combination carries. IBC 2021 Table 1806.2 note a applies friction to the dead load and 1806.3.2 "
+                    "caps cohesion at one-half of the dead load; where a governing sliding combination carries live or "
+                    "snow load, this method departs from that wording and the engineer must confirm it (or check "
+                    "sliding on the dead load alone)."
                 ),
                 formula(
-                    "Soil bearing: rigid footing, linear soil pressure, no tension. Inside the kern (|e| ≤ L/6) "
-                    "q = N / (B L) (1 ± 6|e| / L); beyond it a triangular block of length a = 3 (L/2 − |e|) with "
-                    "q_{max} = 2N / (3B (L/2 − |e|)); |e| ≥ L/2 or N ≤ 0 has no equilibrium (fails). Ratio q_{a} / q_{max}."
+                    "Soil bearing: rigid footing, linear soil pressure, no tension. Inside the kern (|e| ≤ L_{f}/6) "
+                    "q = N / (B L_{f}) (1 ± 6|e| / L_{f}); beyond it a triangular block of length a = 3 (L_{f}/2 − |e|) "
+                    "with q_{max} = 2N / (3B (L_{f}/2 − |e|)); |e| ≥ L_{f}/2 or N ≤ 0 has no equilibrium (fails). "
+                    "Ratio q_{a} / q_{max}."
                 ),
                 formula(
                     "Self weight of footing, stem and soil cover is dead load at the footing's mid-length, "
-                    "carried with the combination's factor on D."
+                    "carried with the combination's factor f_{D} on D."
+                ),
+                formula(
+                    "Computed lengths (e, a) are substituted in decimal "
+                    + ("feet to three places, with feet and inches in brackets" if project.units == "US" else "metres")
+                    + "; forces and moments carry one decimal more than their display precision where that is not "
+                    "exact, so that every line recomputes to its printed result."
                 ),
                 "Every combination is checked in both directions of the lateral load; the case with the lowest "
                 "ratio / required governs each check.",
@@ -688,20 +792,27 @@ _REFERENCES = (
 
 
 def _references_and_notes(project: Project, fmt: _Fmt) -> Section:
-    notes = [
+    notes: list[Cell] = [
         "Scope: global stability of each wall and its strip footing in the plane of the wall (overturning, sliding, "
         "soil bearing). Not covered here and to be checked separately: footing reinforcement, flexure and shear of "
         "the footing, hold-down and anchor embedment, settlement, frost depth and code minimum footing sizes, and "
         "out-of-plane loads.",
         "Loads are as entered by the engineer of record. Vertical loads are positive downward; lateral loads are "
         "in-plane shears at a height above the top of the footing.",
-        "Coordinates: x runs along the footing from its start end (x = 0) to x = L = extension at start + wall "
+        "Coordinates: x runs along the footing from its start end (x = 0) to x = L_{f} = extension at start + wall "
         "length + extension at end. Direction + pushes toward x = L, direction − toward x = 0. Loads marked "
         '"reverses" act at their mirror position about the wall\'s mid-length in direction −.',
         "The footing is taken as rigid and the soil takes no tension. The soil pressure is checked along the "
         "footing's length; its width B carries the pressure uniformly.",
-        "Passive resistance acts on the footing's end face of width B, from the deeper of the soil cover and the "
-        "ignored depth down to the base.",
+        formula(
+            "Passive resistance acts on the footing's end face of width B, from depth z_{0} = max(h_{s}, ignored depth) "
+            "below grade down to the base at h_{s} + t_{f}."
+        ),
+        formula(
+            "Assumptions of the self weight: the stem wall's weight is taken over the full footing length L_{f} "
+            "(including the extensions); the soil over the footing is h_{s} deep and B − t_{stem} wide (B − t_{w} with no "
+            "stem) over the full footing length, extensions included. Where the drawings differ, revise the inputs."
+        ),
         "Dimensions are shown in "
         + (
             "feet and inches to the nearest 1/4 in; forces in kip to two decimals; pressures in psf."
@@ -714,7 +825,7 @@ def _references_and_notes(project: Project, fmt: _Fmt) -> Section:
         Heading("References"),
         Bullets(tuple(formula(r) for r in _REFERENCES)),
         Heading("General notes"),
-        Bullets(tuple(notes)),
+        Bullets(tuple(formula(n) if isinstance(n, str) else n for n in notes)),
     ]
     return Section("references", "References and general notes", "References and notes", tuple(blocks))
 
@@ -764,11 +875,14 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
     blocks: list[Block] = [
         Heading("Summary schedule"),
         Para(
-            "Footing size as drawn (width B × thickness D × length L) and, for each check, the governing ratio / required "
-            "ratio with the combination and direction that govern."
+            formula(
+                "Footing size as drawn (width B × thickness t_{f} × length L_{f}) and, for each check, the governing "
+                "ratio / required ratio with the combination and direction that govern: (+) lateral load toward "
+                "x = L_{f}, (−) toward x = 0, no mark: a combination without lateral load."
+            )
         ),
         Table(
-            ("Wall", "Label", "Footing B × D × L", "Overturning", "Sliding", "Bearing", "Result"),
+            ("Wall", "Label", formula("Footing B × t_{f} × L_{f}"), "Overturning", "Sliding", "Bearing", "Result"),
             tuple(rows),
             (0.07, 0.17, 0.18, 0.16, 0.16, 0.16, 0.10),
             align="LLLLLLL",
@@ -857,15 +971,15 @@ def _inputs(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list
     f = wall.footing
     pairs: list[tuple[Cell, Cell]] = [
         ("Wall length", fmt.length(wall.length)),
-        ("Wall thickness", fmt.length(wall.thickness)),
+        (formula("Wall thickness t_{w}"), fmt.length(wall.thickness)),
         ("Footing width B", fmt.length(f.width)),
-        ("Footing thickness D", fmt.length(f.thickness)),
+        (formula("Footing thickness t_{f}"), fmt.length(f.thickness)),
         ("Extension at start / end", f"{fmt.length(f.extension_start)} / {fmt.length(f.extension_end)}"),
-        ("Footing length L", fmt.length(result.length)),
-        ("Soil cover c over the footing", fmt.length(f.cover)),
+        (formula("Footing length L_{f}"), fmt.length(result.length)),
+        (formula("Soil cover h_{s} over the footing"), fmt.length(f.cover)),
         (formula("Concrete γ_{c}"), fmt.unit_weight(f.unit_weight)),
         (
-            "Stem wall height × thickness",
+            formula("Stem wall h_{stem} × t_{stem}"),
             f"{fmt.length(wall.stem.height)} × {fmt.length(wall.stem.thickness)}" if wall.stem.present else "no stem",
         ),
         (formula("Soil γ_{s}"), fmt.unit_weight(project.soil.unit_weight)),
@@ -912,7 +1026,7 @@ def _loads(wall: Wall, fmt: _Fmt) -> list[Block]:
             formula(
                 "Resultant of a line load w from s_{1} to s_{2}: P = w (s_{2} − s_{1}) at its mid-point (Hibbeler 4.9). "
                 'x on footing = extension at start + position; a reversing load acts at the position after "−:" '
-                "in direction −."
+                "in direction −. Negative values act upward (uplift)."
             ),
             "small",
         ),
@@ -922,39 +1036,45 @@ def _loads(wall: Wall, fmt: _Fmt) -> list[Block]:
 def _self_weight(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
     f = wall.footing
     sw = result.self_weight
-    L, B, D = fmt.length(result.length), fmt.length(result.width), fmt.length(result.thickness)
+    L, B, t = fmt.length(result.length), fmt.length(result.width), fmt.length(result.thickness)
     eqs: list[Block] = [
         Heading("Self weight (dead load at the footing's mid-length)", 2),
         Equation(
-            formula("W_{f}"), formula("γ_{c} B D L"), f"{fmt.unit_weight(f.unit_weight)} × {B} × {D} × {L}", fmt.force(sw.footing)
+            formula("W_{f}"),
+            formula("γ_{c} B t_{f} L_{f}"),
+            f"{fmt.unit_weight(f.unit_weight)} × {B} × {t} × {L}",
+            fmt.sub(sw.footing, Kind.FORCE),
         ),
     ]
     if wall.stem.present:
         eqs.append(
             Equation(
                 formula("W_{stem}"),
-                formula("γ_{c} t_{s} h_{s} L"),
+                formula("γ_{c} t_{stem} h_{stem} L_{f}"),
                 f"{fmt.unit_weight(f.unit_weight)} × {fmt.length(wall.stem.thickness)} × {fmt.length(wall.stem.height)} × {L}",
-                fmt.force(sw.stem),
+                fmt.sub(sw.stem, Kind.FORCE),
+                "the stem runs the full footing length",
             )
         )
     else:
         eqs.append(Equation(formula("W_{stem}"), None, None, fmt.force(sw.stem), "no stem wall"))
-    t = "t_{s}" if wall.stem.present else "t_{w}"
+    t_sup = "t_{stem}" if wall.stem.present else "t_{w}"
     eqs.append(
         Equation(
             formula("W_{soil}"),
-            formula(f"γ_{{s}} c (B − {t}) L"),
+            formula(f"γ_{{s}} h_{{s}} (B − {t_sup}) L_{{f}}"),
             f"{fmt.unit_weight(project.soil.unit_weight)} × {fmt.length(f.cover)} × ({B} − {fmt.length(wall.supported_thickness)}) × {L}",
-            fmt.force(sw.soil),
+            fmt.sub(sw.soil, Kind.FORCE),
+            "soil on both sides of the wall or stem, over the full footing length",
         )
     )
     eqs.append(
         Equation(
             formula("W"),
             formula("W_{f} + W_{stem} + W_{soil}"),
-            f"{fmt.force(sw.footing)} + {fmt.force(sw.stem)} + {fmt.force(sw.soil)}",
-            plain(fmt.force(sw.total), bold=True),
+            f"{fmt.sub(sw.footing, Kind.FORCE)} + {fmt.sub(sw.stem, Kind.FORCE)} + {fmt.sub(sw.soil, Kind.FORCE)}",
+            plain(fmt.sub(sw.total, Kind.FORCE), bold=True),
+            f"printed to the digits carried into the checks below ({fmt.force(sw.total)})",
         )
     )
     return _lead(eqs, 2)
@@ -988,7 +1108,7 @@ def _governing_heading(check: Check, g: Governing) -> list[Block]:
 
 
 def _lateral_terms(wall: Wall, combo: LoadCombination, direction: str, fmt: _Fmt, with_arm: bool) -> list[str]:
-    """Substituted terms f H (h + D) (or f H) of the lateral loads acting in the case."""
+    """Substituted terms f H (h + t_f) (or f H) of the lateral loads acting in the case."""
     if direction == "none":
         return []
     terms = []
@@ -998,10 +1118,10 @@ def _lateral_terms(wall: Wall, combo: LoadCombination, direction: str, fmt: _Fmt
             continue
         if with_arm:
             terms.append(
-                f"{factor_text(f)} × {fmt.force(h.force)} × ({fmt.length(h.height)} + {fmt.length(wall.footing.thickness)})"
+                f"{factor_text(f)} × {fmt.sub(h.force, Kind.FORCE)} × ({fmt.length(h.height)} + {fmt.length(wall.footing.thickness)})"
             )
         else:
-            terms.append(f"{factor_text(f)} × {fmt.force(h.force)}")
+            terms.append(f"{factor_text(f)} × {fmt.sub(h.force, Kind.FORCE)}")
     return terms
 
 
@@ -1011,6 +1131,18 @@ def _position(v: VerticalResultant, direction: str) -> float:
 
 def _join(terms: Sequence[str], empty: str = "0") -> str:
     return " + ".join(terms) if terms else empty
+
+
+def _n_equation(wall: Wall, result: WallResult, combo: LoadCombination, f_d: float, value: float, fmt: _Fmt) -> Equation:
+    """N = Σ f P + f_D W of a combination, written out (N does not depend on the lateral direction)."""
+    terms = []
+    for v in vertical_resultants(wall):
+        f = combo.factor(v.case)
+        if f == 0.0 or v.force == 0.0:
+            continue
+        terms.append(f"{factor_text(f)} × {fmt.sub(v.force, Kind.FORCE)}")
+    terms.append(f"{factor_text(f_d)} × {fmt.sub(result.self_weight.total, Kind.FORCE)}")
+    return Equation(formula("N"), formula("Σ f P + f_{D} W"), _join(terms), fmt.carried(value, Kind.FORCE))
 
 
 def _overturning(wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
@@ -1027,41 +1159,50 @@ def _overturning(wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
     toe_sign = float(result.table.toe_sign[i])
     L = fmt.length(result.length)
     toe = (
-        f"toe at x = L = {L} (the end the load pushes toward)"
+        f"toe at x = L_{{f}} = {L} (the end the load pushes toward)"
         if toe_sign > 0
         else "toe at x = 0 (the end the load pushes toward)"
     )
     resisting, overturning = [], []
+    mirrored = False
     for v in vertical_resultants(wall):
         f = combo.factor(v.case)
         if f == 0.0 or v.force == 0.0:
             continue
         x = fmt.length(_position(v, g.direction))
+        mirrored = mirrored or (g.direction == "-" and abs(v.x_reversed - v.x) > 1e-9)
         arm = f"({L} − {x})" if toe_sign > 0 else x
         if f * v.force > 0.0:  # downward: resists
-            resisting.append(f"{factor_text(f)} × {fmt.force(v.force)} × {arm}")
+            resisting.append(f"{factor_text(f)} × {fmt.sub(v.force, Kind.FORCE)} × {arm}")
         else:  # upward: overturns
-            overturning.append(f"|{factor_text(f)} × {fmt.force(v.force)}| × {arm}")
-    weight = fmt.force(result.self_weight.total)
+            overturning.append(f"|{factor_text(f)} × {fmt.sub(v.force, Kind.FORCE)}| × {arm}")
+    weight = fmt.sub(result.self_weight.total, Kind.FORCE)
     if f_d > 0.0:
         resisting.append(f"{factor_text(f_d)} × {weight} × {L}/2")
     elif f_d < 0.0:
         overturning.append(f"|{factor_text(f_d)}| × {weight} × {L}/2")
     lateral = _lateral_terms(wall, combo, g.direction, fmt, with_arm=True)
+    mirror_note = (
+        'loads marked reverses act at their mirror position about the wall\'s mid-length in direction − (loads table, after "−:")'
+        if mirrored
+        else ""
+    )
     blocks: list[Block] = _governing_heading(Check.OVERTURNING, g)
-    blocks.append(Para(f"Moments about the {toe}. Arms of vertical loads are measured from the toe.", "small"))
+    blocks.append(Para(formula(f"Moments about the {toe}. Arms of vertical loads are measured from the toe."), "small"))
     blocks += [
         Equation(
             formula("M_{OT}"),
-            formula("Σ f H (h + D) + Σ |f P| arm (uplift)" + (" + |f_{D}| W L/2" if f_d < 0 else "")),
+            formula("Σ f H (h + t_{f}) + Σ |f P| arm (uplift)" + (" + |f_{D}| W L_{f}/2" if f_d < 0 else "")),
             _join(lateral + overturning),
             fmt.moment(ot.moment),
+            mirror_note if overturning else "",
         ),
         Equation(
             formula("M_{R}"),
-            formula("Σ f P arm (downward loads)" + (" + f_{D} W L/2" if f_d > 0 else "")),
+            formula("Σ f P arm (downward loads)" + (" + f_{D} W L_{f}/2" if f_d > 0 else "")),
             _join(resisting),
             fmt.moment(ot.resisting),
+            mirror_note,
         ),
         Equation(
             formula("ratio"),
@@ -1071,7 +1212,7 @@ def _overturning(wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
         ),
     ]
     blocks.append(_check_verdict(Check.OVERTURNING, ot.ratio, ot.required, ot.passes))
-    return _lead(_tail(blocks, 2), 4)
+    return [Group(tuple(blocks))]
 
 
 def _check_verdict(check: Check, ratio: float, required: float, passes: bool, symbol: str | None = None) -> Verdict:
@@ -1090,13 +1231,13 @@ def _sliding(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
             Para("No case has a lateral shear: no demand."),
             Verdict(True, "Sliding passes: no demand."),
         ]
-    case, combo, i, _ = _case_of(result, g)
+    case, combo, i, f_d = _case_of(result, g)
     sl = case.sliding
     assert sl is not None
     soil = project.soil
-    N = fmt.force(case.vertical)
-    B, D = fmt.length(result.width), fmt.length(result.thickness)
-    c = fmt.length(wall.footing.cover)
+    N = fmt.sub(case.vertical, Kind.FORCE)
+    B, t = fmt.length(result.width), fmt.length(result.thickness)
+    hs = fmt.length(wall.footing.cover)
     blocks: list[Block] = _governing_heading(Check.SLIDING, g)
     blocks.append(
         Equation(
@@ -1106,42 +1247,49 @@ def _sliding(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
             fmt.force(sl.force),
         )
     )
-    blocks.append(
-        Equation(formula("N"), None, None, N, "vertical load on the soil in this case (see the bearing check for its build-up)")
-    )
+    bearing = result.governing[Check.BEARING]
+    if not math.isinf(bearing.ratio) and bearing.combination == g.combination:
+        blocks.append(
+            Equation(
+                formula("N"), None, None, N, "vertical load on the soil; same combination as the bearing check, built up there"
+            )
+        )
+    else:
+        n_eq = _n_equation(wall, result, combo, f_d, case.vertical, fmt)
+        blocks.append(replace(n_eq, note="vertical load on the soil in this combination"))
     if case.vertical > 0.0:
         blocks.append(Equation(formula("F_{μ}"), formula("μ N"), f"{soil.friction:g} × {N}", fmt.force(sl.friction), "friction"))
     else:
         blocks.append(Equation(formula("F_{μ}"), None, None, fmt.force(sl.friction), "N ≤ 0: no friction"))
     if soil.cohesion > 0.0:
-        a = fmt.length(float(result.evaluation.contact_length[i]))
+        a = fmt.exact(float(result.evaluation.contact_length[i]))
         blocks.append(
             Equation(
                 formula("F_{c}"),
                 formula("min(c B a, 0.5 N)"),
-                f"min({fmt.pressure(soil.cohesion)} × {B} × {a}, 0.5 × {N})",
+                f"min({fmt.pressure(soil.cohesion)} × {fmt.exact(result.width)} × {a}, 0.5 × {N})",
                 fmt.force(sl.cohesion),
-                "cohesion over the contact length a, capped (IBC 1806.3.2)",
+                "cohesion c over the contact length a, capped at half of N (see the design basis)",
             )
         )
     else:
         blocks.append(Equation(formula("F_{c}"), None, None, fmt.force(sl.cohesion), "no cohesion (c = 0)"))
     if soil.passive > 0.0:
         z = fmt.length(soil.passive_ignore)
-        note = "passive on the end face from z_{0} = max(c, ignored depth) to the base at c + D"
+        note = "passive on the end face from z_{0} = max(h_{s}, ignored depth) below grade to the base at h_{s} + t_{f}"
         if sl.passive == 0.0:
             note = "the ignored depth reaches the base: no passive resistance"
         blocks.append(
             Equation(
                 formula("F_{p}"),
-                formula("K B ((c + D)² − z_{0}²) / 2"),
-                f"{fmt.gradient(soil.passive)} × {B} × (({c} + {D})² − max({c}, {z})²) / 2",
+                formula("p_{p} B ((h_{s} + t_{f})² − z_{0}²) / 2"),
+                f"{fmt.gradient(soil.passive)} × {B} × (({hs} + {t})² − max({hs}, {z})²) / 2",
                 fmt.force(sl.passive),
                 formula(note),
             )
         )
     else:
-        blocks.append(Equation(formula("F_{p}"), None, None, fmt.force(sl.passive), "no passive resistance (K = 0)"))
+        blocks.append(Equation(formula("F_{p}"), None, None, fmt.force(sl.passive), formula("no passive resistance (p_{p} = 0)")))
     blocks += [
         Equation(
             formula("R"),
@@ -1158,7 +1306,7 @@ def _sliding(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
         ),
         _check_verdict(Check.SLIDING, sl.ratio, sl.required, sl.passes),
     ]
-    return _lead(_tail(blocks, 2), 3)
+    return _lead(_tail(blocks, 3), 5)
 
 
 def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
@@ -1173,33 +1321,36 @@ def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
     br = case.bearing
     assert br is not None
     soil = project.soil
-    L, B = fmt.length(result.length), fmt.length(result.width)
-    N, M = fmt.force(case.vertical), fmt.moment(case.moment)
-    # N: factored vertical loads plus the factored self weight
-    n_terms = []
+    L = fmt.length(result.length)
+    Ld, Bd = fmt.exact(result.length), fmt.exact(result.width)
+    # N and M carry the digits the lines below use (one more than the display precision when not exact)
+    N, M = fmt.sub(case.vertical, Kind.FORCE), fmt.sub(case.moment, Kind.MOMENT)
     m_terms = []
+    mirrored = False
     for v in vertical_resultants(wall):
         f = combo.factor(v.case)
         if f == 0.0 or v.force == 0.0:
             continue
-        n_terms.append(f"{factor_text(f)} × {fmt.force(v.force)}")
         x = _position(v, g.direction)
+        mirrored = mirrored or (g.direction == "-" and abs(v.x_reversed - v.x) > 1e-9)
         if abs(x - 0.5 * result.length) > 1e-9:  # a load at mid-length adds no moment about it
-            m_terms.append(f"{factor_text(f)} × {fmt.force(v.force)} × ({fmt.length(x)} − {L}/2)")
-    n_terms.append(f"{factor_text(f_d)} × {fmt.force(result.self_weight.total)}")
+            m_terms.append(f"{factor_text(f)} × {fmt.sub(v.force, Kind.FORCE)} × ({fmt.length(x)} − {L}/2)")
     lateral = _lateral_terms(wall, combo, g.direction, fmt, with_arm=True)
     if lateral:
         sign = "" if g.direction == "+" else "−"
         m_terms.insert(0, f"{sign}[{' + '.join(lateral)}]")
+    m_note = "about the footing's mid-length; + toward x = L_{f}; loads at mid-length add nothing"
+    if mirrored:
+        m_note += "; loads marked reverses at their mirror position (direction −)"
     blocks: list[Block] = _governing_heading(Check.BEARING, g)
     blocks += [
-        Equation(formula("N"), formula("Σ f P + f_{D} W"), _join(n_terms), N),
+        _n_equation(wall, result, combo, f_d, case.vertical, fmt),
         Equation(
             formula("M"),
-            formula("± Σ f H (h + D) + Σ f P (x − L/2)"),
+            formula("± Σ f H (h + t_{f}) + Σ f P (x − L_{f}/2)"),
             _join(m_terms),
-            M,
-            "about the footing's mid-length; + toward x = L; loads at mid-length add nothing",
+            fmt.carried(case.moment, Kind.MOMENT),
+            formula(m_note),
         ),
     ]
     if not br.stable:
@@ -1208,70 +1359,70 @@ def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
                 formula("e"),
                 formula("M / N"),
                 f"{M} / {N}",
-                fmt.length(br.eccentricity) if math.isfinite(br.eccentricity) else "∞",
+                formula(fmt.signed_length(br.eccentricity)) if math.isfinite(br.eccentricity) else "∞",
             ),
             Para(
                 formula(
-                    "N ≤ 0 or |e| ≥ L/2: the resultant falls outside the footing and the footing cannot be in "
+                    "N ≤ 0 or |e| ≥ L_{f}/2: the resultant falls outside the footing and the footing cannot be in "
                     "equilibrium on the soil. It overturns; bearing fails."
                 ),
                 "fail",
             ),
             _check_verdict(Check.BEARING, br.ratio, br.required, br.passes),
         ]
-        return _lead(blocks, 3)
-    e_abs = fmt.length(abs(br.eccentricity))
+        return [Group(tuple(blocks))]
+    e_abs = fmt.decimal(abs(br.eccentricity))
     beyond = br.contact_length < result.length * (1.0 - 1e-9)
     diagram = pressure_diagram(case.vertical, br.eccentricity, result.width, result.length)
     kern_half = (diagram.kern[1] - diagram.kern[0]) / 2.0  # L/6: half the middle third (display only)
-    blocks.append(Equation(formula("e"), formula("M / N"), f"{M} / {N}", fmt.length(br.eccentricity)))
+    blocks.append(Equation(formula("e"), formula("M / N"), f"{M} / {N}", formula(fmt.signed_length(br.eccentricity))))
     if not beyond:
         blocks += [
             Equation(
                 formula("|e|"),
                 None,
                 None,
-                formula(f"{e_abs} ≤ L/6 = {fmt.length(kern_half)}", bold=True),
+                formula(f"{e_abs} ≤ L_{{f}}/6 = {fmt.decimal(kern_half)}", bold=True),
                 "the resultant is inside the kern (middle third): the whole footing is in contact",
             ),
             Equation(
                 formula("q_{max}"),
-                formula("N / (B L) (1 + 6|e| / L)"),
-                f"{N} / ({B} × {L}) × (1 + 6 × {e_abs} / {L})",
+                formula("N / (B L_{f}) (1 + 6|e| / L_{f})"),
+                f"{N} / ({Bd} × {Ld}) × (1 + 6 × {e_abs} / {Ld})",
                 fmt.pressure(br.q_max),
             ),
             Equation(
                 formula("q_{min}"),
-                formula("N / (B L) (1 − 6|e| / L)"),
-                f"{N} / ({B} × {L}) × (1 − 6 × {e_abs} / {L})",
+                formula("N / (B L_{f}) (1 − 6|e| / L_{f})"),
+                f"{N} / ({Bd} × {Ld}) × (1 − 6 × {e_abs} / {Ld})",
                 fmt.pressure(br.q_min),
             ),
         ]
     else:
+        a_text = fmt.decimal(br.contact_length) + (f" ({fmt.length(br.contact_length)})" if fmt.units == "US" else "")
         blocks += [
             Equation(
                 formula("|e|"),
                 None,
                 None,
-                formula(f"{e_abs} > L/6 = {fmt.length(kern_half)}", bold=True),
+                formula(f"{e_abs} > L_{{f}}/6 = {fmt.decimal(kern_half)}", bold=True),
                 "the resultant is beyond the kern: only part of the footing is in contact and the pressure is a triangle",
             ),
-            Equation(
-                formula("a"), formula("3 (L/2 − |e|)"), f"3 × ({L}/2 − {e_abs})", fmt.length(br.contact_length), "contact length"
-            ),
+            Equation(formula("a"), formula("3 (L_{f}/2 − |e|)"), f"3 × ({Ld}/2 − {e_abs})", a_text, "contact length"),
             Equation(
                 formula("q_{max}"),
-                formula("2N / (3B (L/2 − |e|))"),
-                f"2 × {N} / (3 × {B} × ({L}/2 − {e_abs}))",
+                formula("2N / (3B (L_{f}/2 − |e|))"),
+                f"2 × {N} / (3 × {Bd} × ({Ld}/2 − {e_abs}))",
                 fmt.pressure(br.q_max),
             ),
             Equation(formula("q_{min}"), None, None, fmt.pressure(br.q_min), "no tension beyond the contact length"),
         ]
+    tail: list[Block] = []
     if soil.bearing_basis is BearingBasis.NET:
-        blocks.append(
+        tail.append(
             Equation(
                 formula("q"),
-                formula("q_{max} − γ_{s} (c + D)"),
+                formula("q_{max} − γ_{s} (h_{s} + t_{f})"),
                 f"{fmt.pressure(br.q_max)} − {fmt.unit_weight(soil.unit_weight)} × ({fmt.length(wall.footing.cover)} + {fmt.length(result.thickness)})",
                 fmt.pressure(br.pressure_compared),
                 "net pressure, for a net allowable",
@@ -1281,7 +1432,7 @@ def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
     else:
         q_symbol = "q_{max}"
     if combo.has_wind_or_seismic and project.criteria.bearing_increase != 1.0:
-        blocks.append(
+        tail.append(
             Equation(
                 formula("q_{a}"),
                 formula("q_{a,report} × increase"),
@@ -1291,8 +1442,8 @@ def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
             )
         )
     else:
-        blocks.append(Equation(formula("q_{a}"), None, None, fmt.pressure(br.allowable), "allowable bearing pressure"))
-    blocks += [
+        tail.append(Equation(formula("q_{a}"), None, None, fmt.pressure(br.allowable), "allowable bearing pressure"))
+    tail += [
         Equation(
             formula("ratio"),
             formula(f"q_{{a}} / {q_symbol}"),
@@ -1301,8 +1452,10 @@ def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
         ),
         _check_verdict(Check.BEARING, br.ratio, br.required, br.passes, f"q_{{a}} / {q_symbol}"),
     ]
-    blocks.append(pressure_drawing(diagram, br.allowable, result, g, fmt, CONTENT_WIDTH, 150.0))
-    return _lead(_tail(blocks, 3), 3)
+    drawing = pressure_drawing(diagram, br.allowable, result, g, fmt, CONTENT_WIDTH, 150.0)
+    # the heading and the equations from N to the pressures on one sheet; the allowable, ratio and
+    # verdict on one sheet; the diagram with them when it fits
+    return [Group(tuple(blocks)), Group(tuple(tail)), drawing]
 
 
 def _results_table(result: WallResult) -> list[Block]:
@@ -1352,11 +1505,15 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
         return blocks
     blocks.append(
         Para(
-            f"Searched: widths B from {fmt.length(z.width_min)} to {fmt.length(z.width_max)} in steps of {fmt.length(z.width_step)} "
-            f"({s.widths.size} values) and thicknesses D from {fmt.length(z.thickness_min)} to {fmt.length(z.thickness_max)} in steps of "
-            f"{fmt.length(z.thickness_step)} ({s.thicknesses.size} values): {s.candidates:,} candidates, each checked in every "
-            "combination and direction, with the footing length and the loads as entered. The smallest is the passing candidate "
-            "with the least cross-section B × D (least concrete), ties going to the thinner, then the narrower."
+            formula(
+                f"Searched: widths B from {fmt.length(z.width_min)} to {fmt.length(z.width_max)} in steps of "
+                f"{fmt.length(z.width_step)} ({s.widths.size} values) and thicknesses t_{{f}} from {fmt.length(z.thickness_min)} to "
+                f"{fmt.length(z.thickness_max)} in steps of {fmt.length(z.thickness_step)} ({s.thicknesses.size} values): "
+                f"{s.candidates:,} candidates, each checked in every combination and direction, with the footing length "
+                "and the loads as entered. Candidates are ranked by their cross-section B × t_{f} (the least concrete per "
+                "unit length of footing); of two with the same cross-section the thinner ranks first, then the narrower. The "
+                "chosen size is the first passing candidate in that ranking."
+            )
         )
     )
     if not s.feasible or s.width is None or s.thickness is None:
@@ -1388,9 +1545,9 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
             fail_rows.append(k)
         table_rows.append((name, f"{fmt.length(float(s.widths[c]))} × {fmt.length(float(s.thicknesses[r]))}", *values, verdict))
     blocks += [
-        Para(formula(f"Smallest passing size: B × D = {fmt.length(s.width)} × {fmt.length(s.thickness)}.", bold=True)),
+        Para(formula(f"Smallest passing size: B × t_{{f}} = {fmt.length(s.width)} × {fmt.length(s.thickness)}.", bold=True)),
         Table(
-            ("Candidate", "B × D", "Overturning", "Sliding", "Bearing", "Result"),
+            ("Candidate", formula("B × t_{f}"), "Overturning", "Sliding", "Bearing", "Result"),
             tuple(table_rows),
             (0.18, 0.22, 0.13, 0.13, 0.13, 0.21),
             align="LLRRRL",
@@ -1404,10 +1561,20 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
     if report.sized_result is not None:
         sr = report.sized_result
         parts = [
-            f"{_CHECK_WORD[c]} {ratio_text(sr.governing[c].ratio, sr.governing[c].required, sr.governing[c].passes)}"
+            f"{_CHECK_WORD[c]} "
+            + ("no demand" if math.isinf(sr.governing[c].normalized) else f"{sr.governing[c].normalized:.3f}")
             for c in ALL_CHECKS
         ]
-        blocks.append(Para("Governing ratios at the smallest passing size: " + ", ".join(parts) + ".", "small"))
+        blocks.append(Para("Governing ratio / required at the smallest passing size: " + ", ".join(parts) + ".", "small"))
+    if row == 0 and col == 0:
+        blocks.append(
+            Para(
+                "The lower bounds of the search pass: stability does not govern this footing. Its size is then set by "
+                "the code minimums (IBC 2021 section 1809: minimum footing width and thickness, frost depth) and by "
+                "practice, not by these checks.",
+                "note",
+            )
+        )
     if _same_size(wall, s):
         blocks.append(Verdict(True, "The current footing is this smallest passing size."))
     elif report.result.passes:
@@ -1436,25 +1603,39 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
 
 
 def _short_ratio(ratio: float, required: float, passes: bool) -> str:
-    return "—" if math.isinf(ratio) else ratio_text(ratio, required, passes)
+    return "no dem." if math.isinf(ratio) else ratio_text(ratio, required, passes)
+
+
+_CHECK_ABBREVIATION = {Check.OVERTURNING: "OT", Check.SLIDING: "SL", Check.BEARING: "BR"}
 
 
 def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
     result = report.result
     rows: list[tuple[Cell, ...]] = []
     fail_rows = []
-    gov = {g.case_index for g in result.governing.values()}
+    governs: dict[int, list[str]] = {}
+    for check, g in result.governing.items():
+        governs.setdefault(g.case_index, []).append(_CHECK_ABBREVIATION[check])
     for k, c in enumerate(result.cases):
         ot, sl, br = c.overturning, c.sliding, c.bearing
         failing = [name for name, r in (("OT", ot), ("SL", sl), ("BR", br)) if r is not None and not r.passes]
+        mark = f"\n* governs {', '.join(governs[k])}" if k in governs else ""
+        if br is None:
+            e_cell = "n/a"
+        elif not br.stable:
+            e_cell = fmt.number(br.eccentricity, Kind.LENGTH) + "\nno equil."
+        elif br.contact_length < result.length * (1.0 - 1e-9):
+            e_cell = fmt.number(br.eccentricity, Kind.LENGTH) + f"\nbeyond kern, a = {fmt.number(br.contact_length, Kind.LENGTH)}"
+        else:
+            e_cell = fmt.number(br.eccentricity, Kind.LENGTH)
         rows.append(
             (
-                plain(_clean(c.combination) + (" *" if k in gov else "")),
-                direction_text(c.direction),
+                plain(_clean(c.combination) + mark),
+                {"+": "+", "-": "−", "none": "none"}.get(c.direction, c.direction),
                 fmt.number(c.vertical, Kind.FORCE),
                 fmt.number(c.lateral, Kind.FORCE),
                 fmt.number(c.moment, Kind.MOMENT),
-                fmt.number(br.eccentricity, Kind.LENGTH) if br is not None else "n/a",
+                e_cell,
                 fmt.number(ot.moment, Kind.MOMENT) if ot is not None else "n/a",
                 fmt.number(ot.resisting, Kind.MOMENT) if ot is not None else "n/a",
                 _short_ratio(ot.ratio, ot.required, ot.passes) if ot is not None else "n/a",
@@ -1463,19 +1644,20 @@ def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
                 fmt.number(br.q_max, Kind.PRESSURE) if br is not None else "n/a",
                 fmt.number(br.allowable, Kind.PRESSURE) if br is not None else "n/a",
                 _short_ratio(br.ratio, br.required, br.passes) if br is not None else "n/a",
-                "ok" if not failing else "fails " + "/".join(failing),
+                "passes" if not failing else "FAILS " + ", ".join(failing),
             )
         )
         if failing:
             fail_rows.append(k)
     u = fmt.unit
+    length_unit = "decimal ft" if project.units == "US" else u(Kind.LENGTH)
     headers = (
         "Combination",
-        "Dir",
+        "Dir.",
         f"N ({u(Kind.FORCE)})",
         f"V ({u(Kind.FORCE)})",
         f"M ({u(Kind.MOMENT)})",
-        f"e ({u(Kind.LENGTH)})",
+        f"e ({length_unit})",
         formula(f"M_{{OT}} ({u(Kind.MOMENT)})"),
         formula(f"M_{{R}} ({u(Kind.MOMENT)})"),
         "OT ratio",
@@ -1486,17 +1668,22 @@ def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
         "BR ratio",
         "Result",
     )
-    widths = (0.17, 0.035, 0.06, 0.055, 0.065, 0.055, 0.065, 0.065, 0.055, 0.06, 0.055, 0.06, 0.055, 0.055, 0.065)
+    widths = (0.16, 0.035, 0.055, 0.05, 0.06, 0.085, 0.06, 0.06, 0.05, 0.055, 0.05, 0.055, 0.05, 0.05, 0.075)
     total = sum(widths)
+    any_na = any("n/a" in row for row in rows)
+    key = (
+        f"Footing {fmt.length(result.width)} × {fmt.length(result.thickness)} × {fmt.length(result.length)} (B × t_{{f}} × L_{{f}}). "
+        "N vertical load on the soil, V shear, M moment about the footing's mid-length, e = M / N (lengths in "
+        + ("decimal feet" if project.units == "US" else "metres")
+        + '; "beyond kern" marks a case with the resultant outside the middle third, with its contact length a), '
+        "M_{OT} and M_{R} moments about the toe, R sliding resistance, q_{max} peak soil pressure, q_{a} allowable. "
+        "Dir.: + lateral load toward x = L_{f}, − toward x = 0, none: no lateral load. OT, SL, BR: overturning, sliding, "
+        'bearing. "* governs" marks the case that governs the checks named. "no dem.": no demand (no overturning '
+        "moment, shear or pressure)." + (" n/a: the combination does not apply to that check." if any_na else "")
+    )
     blocks: list[Block] = [
         Heading(plain(f"Appendix: every combination and direction, wall {report.wall.id}")),
-        Para(
-            f"Footing {fmt.length(result.width)} × {fmt.length(result.thickness)} × {fmt.length(result.length)} (B × D × L). "
-            "N vertical load on the soil, V shear, M moment about the footing's mid-length, e = M / N, moments about the toe, "
-            "R sliding resistance, q_max peak soil pressure, q_a allowable. * marks a case that governs a check; "
-            "— in a ratio column: no demand; n/a: the combination does not apply to that check.",
-            "small",
-        ),
+        Para(formula(key), "small"),
         Table(
             headers,
             tuple(rows),
@@ -1637,10 +1824,15 @@ def elevation_drawing(wall: Wall, fmt: _Fmt, width: float, height: float) -> Dra
             (f.extension_start + p.at, f"{p.case.value} {fmt.force(p.value)}" + (" rev." if p.reverses else ""))
             for p in point_loads
         ]
-        for x, text in _group_loads(items):
-            xx = X(x)
-            shapes.append(Arrow(xx, y_band + 16, xx, top + 2, 0.7))
-            shapes.append(Label(xx, y_band + 18, text, "middle", 5.5, color="load"))
+        for up in (False, True):  # downward (compression) and upward (uplift) loads drawn apart
+            group = [it for it, p in zip(items, point_loads, strict=True) if (p.value < 0) == up]
+            for x, text in _group_loads(group):
+                xx = X(x)
+                if up:  # uplift: the arrow leaves the top of the wall, pointing up
+                    shapes.append(Arrow(xx, top + 2, xx, y_band + 16, 0.7))
+                else:
+                    shapes.append(Arrow(xx, y_band + 16, xx, top + 2, 0.7))
+                shapes.append(Label(xx, y_band + 18, text, "middle", 5.5, color="load"))
     # dimensions: footing length, extensions and wall length, footing thickness
     shapes.append(Dimension(X(0), Y(-f.thickness), X(length), Y(-f.thickness), f"L = {fmt.length(length)}", offset=-18.0))
     if f.extension_start > 0 or f.extension_end > 0:
@@ -1730,7 +1922,7 @@ def pressure_drawing(
         case = result.cases[g.case_index]
         text = f"N = {fmt.force(case.vertical)}"
         if case.bearing is not None:
-            text += f" at e = {fmt.length(case.bearing.eccentricity)}"
+            text += f" at e = {fmt.decimal(case.bearing.eccentricity)}"
         shapes.append(Label(xr, y_base + 38, text, "middle", 6.0, color="load"))
         # pressure values under the ends of the block
         peak_left = float(diagram.q[1]) >= float(diagram.q[2])

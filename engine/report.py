@@ -324,6 +324,10 @@ class GridSpec:
     label_columns: frozenset[int] = frozenset()
 
 
+# A table split across sheets leaves at least this many rows on each side (widow and orphan rows).
+_MIN_ROWS = 2
+
+
 @lru_cache(maxsize=1)
 def _flowable_classes() -> dict[str, type]:
     from reportlab.lib.utils import simpleSplit
@@ -510,7 +514,11 @@ def _flowable_classes() -> dict[str, type]:
             while k < len(self.rows) and used + heights[k] <= ah:
                 used += heights[k]
                 k += 1
-            if k == head or k == len(self.rows):
+            if k == len(self.rows):
+                return []
+            if len(self.rows) - k < _MIN_ROWS:  # no row or two left alone at the top of the next sheet
+                k = len(self.rows) - _MIN_ROWS
+            if k - head < _MIN_ROWS:  # nor alone under the header at the bottom of this one
                 return []
             header = self.rows[:head]
             first = Grid(self.spec, self.fonts, self.rows[:k], frozenset(i for i in self.bold_rows if i < k))
