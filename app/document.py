@@ -233,6 +233,10 @@ class ProjectDocument(QObject):
         self.case_choice: CaseChoice = GOVERNING_BEARING
         self.sizing: dict[str, SizingEntry] = {}
         self.last_error: str | None = None
+        self.last_refusal: InputError | None = None
+        # the words beside each input, by its path below the wall or the project ("footing.cover": "Soil cover");
+        # the forms register them so refusals name a field as the user sees it
+        self.field_labels: dict[str, str] = {}
         self._recovered = False
         self._loaded_text: str | None = None
         self._recompute(None)
@@ -392,13 +396,15 @@ class ProjectDocument(QObject):
             project = parse_project(self.raw)
         except InputError as err:
             command.revert_changes()
-            message = readable(err)
+            message = readable(err, self.field_labels)
+            self.last_refusal = err
             if not quiet:
                 self.last_error = message
                 self.edit_refused.emit(path_text(command.focus_path), message)
             return message
         command.prepared = project
         self.last_error = None
+        self.last_refusal = None
         self.undo_stack.push(command)
         return None
 
@@ -444,22 +450,37 @@ def _same_document(text: str, raw: dict[str, Any]) -> bool:
 
 
 _FRIENDLY = {
-    "footing.width": "footing width",
-    "footing.thickness": "footing thickness",
+    "footing.width": "footing width B",
+    "footing.thickness": "footing thickness D",
     "length": "wall length",
     "thickness": "wall thickness",
     "walls": "walls",
 }
 
 
-def readable(err: InputError) -> str:
-    """The engine's message, with the field path shortened to what a user recognises."""
+def readable(err: InputError, labels: dict[str, str] | None = None) -> str:
+    """The engine's message with the field path replaced by the words a user sees beside the field.
+
+    "walls[1].footing.cover: must not be negative" -> "Soil cover: must not be negative";
+    "criteria.sds: ..." -> "S_DS: ..."; a load is named by its row: "loads[10].case" -> "load row 11, case".
+    """
     field = err.field
     if field.startswith("walls["):
         close = field.find("]")
         field = field[close + 2 :] if close >= 0 else field
-    field = field.replace("criteria.", "").replace("soil.", "soil ")
-    name = _FRIENDLY.get(field, field.replace("_", " "))
+    labels = labels or {}
+    if field in labels:
+        name = labels[field]
+    elif field.startswith("loads["):
+        close = field.find("]")
+        row = field[6:close]
+        rest = field[close + 2 :].replace("_", " ")
+        name = f"load row {int(row) + 1}" + (f", {rest}" if rest else "") if row.isdigit() else field
+    elif field in _FRIENDLY:
+        name = _FRIENDLY[field]
+    else:
+        words = field.replace("criteria.required.", "required ").replace("criteria.", "").replace("soil.", "soil ")
+        name = words.replace(".", " ").replace("_", " ")
     return f"{name}: {err.problem}" if name else err.problem
 
 

@@ -351,12 +351,16 @@ class MainWindow(QMainWindow):
         self.show_editor()
         self.wall_form.refresh(force=True)
         self.project_form.refresh(force=True)
+        self._notice = None
         self._set_tab_order()
         self._render_results()
         self._update_units_actions()
         self._update_title()
 
     def _on_project_changed(self) -> None:
+        if self._notice is not None and self.statusBar().currentMessage() == self._notice:
+            self.statusBar().clearMessage()  # a later edit went through: the refusal no longer describes the state
+        self._notice = None
         self.wall_form.refresh()
         self.project_form.refresh()
         self._update_units_actions()
@@ -368,7 +372,9 @@ class MainWindow(QMainWindow):
     def _on_current_wall_changed(self, index: int) -> None:
         if index == self._rendered_index:
             return
-        self.wall_form.refresh(force=True)
+        dropped = self.wall_form.refresh(force=True)
+        if dropped:
+            self._show_notice("Discarded " + "; ".join(dropped) + " — not a valid entry, so the last valid value stays in force.")
         self._render_results()
 
     def _on_case_choice_changed(self) -> None:
@@ -430,8 +436,15 @@ class MainWindow(QMainWindow):
     def _on_dirty_changed(self, _dirty: bool) -> None:
         self._update_title()
 
+    _notice: str | None = None
+
+    def _show_notice(self, text: str) -> None:
+        """A status message about an edit that did not reach the model; cleared by the next edit that does."""
+        self._notice = text
+        self.statusBar().showMessage(text)
+
     def _on_edit_refused(self, field: str, message: str) -> None:
-        self.statusBar().showMessage(f"Not applied — {message}", 8000)
+        self._show_notice(f"Not applied — {message}")
 
     def _update_title(self) -> None:
         self.setWindowTitle(f"{self.document.display_name}[*] — Kernline")
@@ -601,7 +614,8 @@ class MainWindow(QMainWindow):
         try:
             self.document.open(path)
         except InputError as err:
-            QMessageBox.warning(self, "Cannot open the project", f"{path}\n\n{err.message}")
+            text = err.message if str(path) in err.message else f"{path}\n\n{err.message}"
+            QMessageBox.warning(self, "Cannot open the project", text)
             return False
         self.remove_recovery()
         self._add_recent(Path(path))

@@ -3,13 +3,40 @@
 from __future__ import annotations
 
 from PySide6.QtCore import Qt
-from PySide6.QtWidgets import QHBoxLayout, QLabel, QSplitter, QVBoxLayout, QWidget
+from PySide6.QtWidgets import QHBoxLayout, QLabel, QSizePolicy, QSplitter, QVBoxLayout, QWidget
 
+from engine.model import LateralLoad, Wall
 from engine.units import format_length
 
 from ..document import ProjectDocument
 from .elevation import ElevationView
 from .pressure import CasePicker, PressurePlot
+
+
+def lateral_note(wall: Wall, direction: str) -> str:
+    """What the elevation's lateral arrows show: the direction drawn, and the mirrored reversing loads."""
+    if not any(isinstance(ld, LateralLoad) for ld in wall.loads):
+        return "no lateral load"
+    shown = "−" if direction == "-" else "+"
+    note = f"lateral arrows: direction {shown}"
+    if direction == "-" and any(getattr(ld, "reverses", False) for ld in wall.loads):
+        note += "; reversing W/E loads are drawn at their mirrored positions for direction −"
+    return note
+
+
+CAPTION_LINES = 2  # a caption wraps to at most this many lines at the narrowest panel
+
+
+def _caption() -> QLabel:
+    """A hint that wraps to the panel's width; it never sets the window's minimum width or height."""
+    label = QLabel()
+    label.setObjectName("hint")
+    label.setWordWrap(True)
+    label.setSizePolicy(QSizePolicy.Policy.Ignored, QSizePolicy.Policy.Fixed)
+    label.setFixedHeight(label.fontMetrics().lineSpacing() * CAPTION_LINES + 2)
+    label.setAlignment(Qt.AlignmentFlag.AlignLeft | Qt.AlignmentFlag.AlignTop)
+    label.setContentsMargins(6, 0, 6, 0)
+    return label
 
 
 class DrawingsPanel(QWidget):
@@ -18,14 +45,12 @@ class DrawingsPanel(QWidget):
     def __init__(self, document: ProjectDocument, parent: QWidget | None = None) -> None:
         super().__init__(parent)
         self.document = document
-        self.elevation_caption = QLabel()
-        self.elevation_caption.setObjectName("hint")
+        self.elevation_caption = _caption()
         self.elevation = ElevationView()
         self.pressure = PressurePlot()
         self.pressure.setXLink(self.elevation)
         self.picker = CasePicker()
-        self.caption = QLabel()
-        self.caption.setObjectName("hint")
+        self.caption = _caption()
         title = QLabel("Soil pressure for")
         title.setObjectName("sectionTitle")
         head = QHBoxLayout()
@@ -48,8 +73,9 @@ class DrawingsPanel(QWidget):
         head_up = QHBoxLayout()
         head_up.setContentsMargins(6, 4, 6, 0)
         head_up.addWidget(elevation_title)
-        head_up.addWidget(self.elevation_caption, 1)
+        head_up.addStretch(1)
         upper_layout.addLayout(head_up)
+        upper_layout.addWidget(self.elevation_caption)
         upper_layout.addWidget(self.elevation, 1)
         splitter = QSplitter(Qt.Orientation.Vertical, self)
         splitter.addWidget(upper)
@@ -80,7 +106,7 @@ class DrawingsPanel(QWidget):
         grade = f"; grade {format_length(ft.cover, units)} above its top" if ft.cover > 0 else ""
         self.elevation_caption.setText(
             f"footing L {format_length(wall.footing_length, units)} × B {format_length(ft.width, units)} × "
-            f"D {format_length(ft.thickness, units)}{grade}; lateral arrows: direction {direction if direction != 'none' else '+'}"
+            f"D {format_length(ft.thickness, units)}{grade}; {lateral_note(wall, direction)}"
         )
         self.pressure.render(wall, result, index, doc.units)
         self.caption.setText(PressurePlot.caption(result, index, doc.units))

@@ -65,7 +65,7 @@ class ElevationView(pg.PlotWidget):
             axis.setPen(_pen(MUTED))
             axis.setTextPen(_pen(MUTED))
         plot.getAxis("left").setWidth(AXIS_WIDTH)
-        self.setMinimumHeight(180)
+        self.setMinimumHeight(140)
 
         self.soil = _rect_item(SOIL, SOIL, -3)
         self.footing = _rect_item(CONCRETE, CONCRETE_EDGE, 0)

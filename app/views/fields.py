@@ -15,7 +15,7 @@ from dataclasses import dataclass
 from typing import Any
 
 from PySide6.QtCore import Qt, QTimer, Signal
-from PySide6.QtGui import QKeyEvent
+from PySide6.QtGui import QContextMenuEvent, QKeyEvent, QKeySequence
 from PySide6.QtWidgets import QLabel, QLineEdit, QSizePolicy, QToolButton, QVBoxLayout, QWidget
 
 from engine.errors import InputError
@@ -98,6 +98,27 @@ def display_text(spec: FieldSpec, project: Project, wall: Wall) -> str:
     return show(float(value), spec.kind, spec.unit(project.units))
 
 
+# Examples of text each kind accepts, shown in SI projects in place of the engine's US example.
+SI_EXAMPLES = {
+    Kind.LENGTH: "600 mm",
+    Kind.FORCE: "10 kN",
+    Kind.LINE_LOAD: "4.4 kN/m",
+    Kind.PRESSURE: "95 kPa",
+    Kind.UNIT_WEIGHT: "23.6 kN/m^3",
+    Kind.PRESSURE_GRADIENT: "25 kPa/m",
+    Kind.MOMENT: "15 kN*m",
+}
+
+
+def field_problem(problem: str, kind: Kind | None, system: str) -> str:
+    """The engine's problem sentence for a field, with an example in the project's units."""
+    if system != "SI":
+        return problem
+    for each in (kind,) if kind is not None else tuple(SI_EXAMPLES):
+        problem = problem.replace(f'such as "{each.info.example}"', f'such as "{SI_EXAMPLES[each]}"')
+    return problem
+
+
 def to_raw(spec: FieldSpec, text: str, system: str) -> Any:
     """What the raw document stores for ``text`` typed into the field; raises InputError if unusable."""
     text = " ".join(text.split())
@@ -123,16 +144,52 @@ def parse_number(text: str) -> float | int:
     return int(value) if _INTEGER.match(text) else value
 
 
+def history_key(event: QKeyEvent) -> int:
+    """+1 for a redo key (Ctrl+Shift+Z, Ctrl+Y), -1 for undo (Ctrl+Z), 0 for any other key."""
+    if event.matches(QKeySequence.StandardKey.Undo):
+        return -1
+    if event.matches(QKeySequence.StandardKey.Redo) or (
+        event.key() == Qt.Key.Key_Y and event.modifiers() == Qt.KeyboardModifier.ControlModifier
+    ):
+        return 1
+    return 0
+
+
 class StepLineEdit(QLineEdit):
-    """A line edit whose Up / Down keys ask to step the value."""
+    """A line edit whose Up / Down keys ask to step the value, and whose undo keys go to the document.
+
+    QLineEdit's own undo would put back text the document no longer holds (a live edit has already
+    been applied), so Ctrl+Z / Ctrl+Shift+Z / Ctrl+Y are reported with ``history_requested`` instead.
+    """
 
     stepped = Signal(int)
+    history_requested = Signal(int)  # -1 undo, +1 redo
+
+    def event(self, event: Any) -> bool:
+        # claim the undo keys before the window's Undo action does, so the field decides what they mean
+        if event.type() == event.Type.ShortcutOverride and history_key(event):
+            event.accept()
+            return True
+        return super().event(event)
 
     def keyPressEvent(self, event: QKeyEvent) -> None:  # noqa: N802 - Qt's name
         if event.key() in (Qt.Key.Key_Up, Qt.Key.Key_Down):
             self.stepped.emit(1 if event.key() == Qt.Key.Key_Up else -1)
             return
+        step = history_key(event)
+        if step:
+            self.history_requested.emit(step)
+            return
         super().keyPressEvent(event)
+
+    def contextMenuEvent(self, event: QContextMenuEvent) -> None:  # noqa: N802 - Qt's name
+        # the menu's own Undo / Redo would act on the line edit's history, not the document's
+        menu = self.createStandardContextMenu()
+        for action in menu.actions():
+            if action.objectName() in ("edit-undo", "edit-redo"):
+                action.setVisible(False)
+        menu.exec(event.globalPos())
+        menu.deleteLater()
 
 
 class QuantityField(QWidget):
@@ -144,6 +201,7 @@ class QuantityField(QWidget):
 
     commit_requested = Signal(str, bool)
     step_requested = Signal(int)
+    history_requested = Signal(int)  # -1 undo, +1 redo (typed in the field)
 
     def __init__(self, spec: FieldSpec, parent: QWidget | None = None) -> None:
         super().__init__(parent)
@@ -162,7 +220,10 @@ class QuantityField(QWidget):
         layout.setSpacing(1)
         layout.addWidget(self.edit)
         layout.addWidget(self.error)
-        self.setSizePolicy(QSizePolicy.Policy.Expanding, QSizePolicy.Policy.Fixed)
+        # the height follows the width: a message that wraps to three lines gets three lines
+        policy = QSizePolicy(QSizePolicy.Policy.Expanding, QSizePolicy.Policy.Minimum)
+        policy.setHeightForWidth(True)
+        self.setSizePolicy(policy)
         self._shown = ""
         self._timer = QTimer(self)
         self._timer.setSingleShot(True)
@@ -171,6 +232,7 @@ class QuantityField(QWidget):
         self.edit.textEdited.connect(self._on_text_edited)
         self.edit.editingFinished.connect(self._on_editing_finished)
         self.edit.stepped.connect(self.step_requested)
+        self.edit.history_requested.connect(self.history_requested)
 
     @property
     def shown_text(self) -> str:

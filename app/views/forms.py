@@ -32,7 +32,7 @@ from engine.model import ALL_CHECKS, LateralLoad, LineLoad, LoadCase, PointLoad
 from engine.units import Kind, parse_quantity
 
 from .. import commands
-from ..document import ProjectDocument, get_at
+from ..document import ProjectDocument, get_at, path_text
 from ..style import WARM_LIGHT
 from .fields import (
     CRITERIA_FIELDS,
@@ -49,6 +49,7 @@ from .fields import (
     QuantityField,
     Section,
     display_text,
+    field_problem,
     parse_number,
     show,
     to_raw,
@@ -71,19 +72,62 @@ class FieldGroup:
         form.addRow(label, field)
         field.commit_requested.connect(lambda text, live, f=field: self.commit(f, text, live))
         field.step_requested.connect(lambda direction, f=field: self.step(f, direction))
+        field.history_requested.connect(lambda step, f=field: self.history(f, step))
+        self.document.field_labels[path_text(spec.path)] = spec.label
         self.fields.append(field)
         return field
 
     def full_path(self, spec: FieldSpec) -> tuple[Any, ...]:
         return self.document.wall_path(*spec.path) if spec.scope == "wall" else spec.path
 
-    def refresh(self, force: bool = False) -> None:
+    def refresh(self, force: bool = False) -> list[str]:
+        """Show the model's values; ``force`` drops typing and errors (another wall or project is shown).
+
+        Returns, for a forced refresh, a description of each invalid entry that was dropped
+        ('"abc" in Footing width B'), so the window can say that it was discarded.
+        """
         doc = self.document
         project, wall = doc.project, doc.current_wall
+        dropped = []
         for field in self.fields:
             if force:
+                if self.unapplied(field):
+                    dropped.append(f'"{field.edit.text().strip()}" in {field.spec.label}')
                 field.reset()
             field.set_display(display_text(field.spec, project, wall), force=force)
+        return dropped
+
+    def unapplied(self, field: QuantityField) -> bool:
+        """Whether the field holds text that never reached the model (refused, or typed and not valid)."""
+        if field.invalid:
+            return True
+        if not field.edit.isModified():
+            return False
+        try:
+            to_raw(field.spec, field.edit.text(), self.document.units)
+        except InputError:
+            return True
+        return False
+
+    def history(self, field: QuantityField, step: int) -> None:
+        """Ctrl+Z / Ctrl+Shift+Z typed in a field.
+
+        Text the model never took (refused or not yet valid) is put back to the model's value first;
+        otherwise the key undoes or redoes the document's last edit (a live edit of this very field
+        included), and the field shows the value in force afterwards. The field never keeps text
+        that differs from the model.
+        """
+        doc = self.document
+        field.flush()  # typing still waiting for its pause is applied first, as Enter would
+        pending = self.unapplied(field)
+        field.reset()
+        if not (pending and step < 0):
+            stack = doc.undo_stack
+            if step < 0:
+                stack.undo()
+            else:
+                stack.redo()
+        field.set_display(display_text(field.spec, doc.project, doc.current_wall), force=True)
 
     def field_at(self, path: Sequence[Any]) -> QuantityField | None:
         for field in self.fields:
@@ -99,7 +143,7 @@ class FieldGroup:
             value = to_raw(spec, text, doc.units)
         except InputError as err:
             if not live:
-                field.set_error(err.problem)
+                field.set_error(field_problem(err.problem, spec.kind, doc.units))
             return False
         path = self.full_path(spec)
         if value == get_at(doc.raw, path):
@@ -108,11 +152,13 @@ class FieldGroup:
                 field.set_display(display_text(spec, doc.project, doc.current_wall), force=True)
             return True
         message = doc.push(
-            commands.SetField(doc, path, value, session=field.session, text=f"Set {spec.label.lower()}"), quiet=live
+            commands.SetField(doc, path, value, session=field.session, text=f"Set {_words(spec.label)}"), quiet=live
         )
         if message is not None:
             if not live:
-                field.set_error(message)
+                # at the field its label names it: the engine's sentence without its path
+                refusal = doc.last_refusal
+                field.set_error(field_problem(refusal.problem, spec.kind, doc.units) if refusal is not None else message)
             return False
         field.set_error(None)
         if not live:
@@ -133,6 +179,18 @@ class FieldGroup:
             field.edit.setModified(False)
 
 
+def _words(label: str) -> str:
+    """A field's label inside a sentence: "Footing width B" -> "footing width B" (symbols such as S_DS keep their case)."""
+    return label if label[1:2].isupper() or label[1:2] == "_" else label[:1].lower() + label[1:]
+
+
+def _compact(box: QComboBox) -> QComboBox:
+    """A choice box whose longest entry does not set the form's minimum width (it elides instead)."""
+    box.setSizeAdjustPolicy(QComboBox.SizeAdjustPolicy.AdjustToMinimumContentsLengthWithIcon)
+    box.setMinimumContentsLength(8)
+    return box
+
+
 def _form() -> tuple[QWidget, QFormLayout]:
     box = QWidget()
     form = QFormLayout(box)
@@ -140,6 +198,8 @@ def _form() -> tuple[QWidget, QFormLayout]:
     form.setLabelAlignment(Qt.AlignmentFlag.AlignLeft)
     form.setFieldGrowthPolicy(QFormLayout.FieldGrowthPolicy.AllNonFixedFieldsGrow)
     form.setVerticalSpacing(4)
+    # a narrow column puts the field under its label rather than pushing it out of view
+    form.setRowWrapPolicy(QFormLayout.RowWrapPolicy.WrapLongRows)
     return box, form
 
 
@@ -294,6 +354,8 @@ class LoadsEditor(QWidget):
         else:
             self._show_message(None)
         self.refresh()
+        if message is not None and row < self.table.rowCount():
+            self.table.scrollToItem(self.table.item(row, col))
 
     def edit_cell(self, row: int, col: int, text: str) -> str | None:
         """Apply a cell edit as one command; return the refusal message, if any."""
@@ -307,15 +369,15 @@ class LoadsEditor(QWidget):
                 return f"expected one of {', '.join(KINDS)}"
             if text == _kind_of(load):
                 return None
-            return doc.push(commands.change_load_type(doc, wi, row, text))
+            return self._push(row, commands.change_load_type(doc, wi, row, text))
         if col == 1:
             if text == load.case.value:
                 return None
-            return doc.push(commands.SetField(doc, (*base, "case"), text, text="Set load case"))
+            return self._push(row, commands.SetField(doc, (*base, "case"), text, text="Set load case"))
         if col == 5:
             if text == load.label:
                 return None
-            return doc.push(commands.SetField(doc, (*base, "label"), text, text="Set load label"))
+            return self._push(row, commands.SetField(doc, (*base, "label"), text, text="Set load label"))
         key, kind, units = _cell_key(load, col)
         if key is None:
             return None
@@ -325,11 +387,23 @@ class LoadsEditor(QWidget):
         try:
             parse_quantity(text, kind, default_unit=unit)
         except InputError as err:
-            return err.problem
+            return field_problem(err.problem, kind, doc.units)
         value = f"{text} {unit}" if _is_bare(text) else text
         if value == get_at(doc.raw, (*base, key)):
             return None
-        return doc.push(commands.SetField(doc, (*base, key), value, text=f"Set load {key}"))
+        return self._push(row, commands.SetField(doc, (*base, key), value, text=f"Set load {key}"))
+
+    def _push(self, row: int, command: Any) -> str | None:
+        """Push a load edit; a refusal about this load is told without its path (the row and column say where)."""
+        doc = self.document
+        message = doc.push(command)
+        refusal = doc.last_refusal
+        if message is None or refusal is None:
+            return message
+        field = refusal.field
+        if field.startswith("walls["):
+            field = field[field.find("]") + 2 :]
+        return refusal.problem if field.startswith(f"loads[{row}]") else message
 
     def _selected_row(self) -> int | None:
         rows = self.table.selectionModel().selectedRows()
@@ -631,11 +705,17 @@ class WallForm(QWidget):
         self.sections["Sizing range"] = Section("Sizing range", box, False)
         layout.addWidget(self.sections["Sizing range"])
 
-    def refresh(self, force: bool = False) -> None:
+    shown_wall_id = ""
+
+    def refresh(self, force: bool = False) -> list[str]:
+        """Show the current wall; returns what a forced refresh dropped (see :meth:`FieldGroup.refresh`)."""
         wall = self.document.current_wall
+        previous = self.shown_wall_id
+        self.shown_wall_id = wall.id
         self.title.setText(f"Wall {wall.id}" + (f" — {wall.label}" if wall.label else ""))
-        self.group.refresh(force)
+        dropped = self.group.refresh(force)
         self.loads.refresh(clear_message=force)
+        return [f"{d} of wall {previous}" for d in dropped] if previous else dropped
 
     def focus_order(self) -> list[QWidget]:
         return (
@@ -664,7 +744,7 @@ class ProjectForm(QWidget):
         box, form = _form()
         for spec in SOIL_FIELDS[:1]:
             self.group.add(spec, form)
-        self.basis = QComboBox()
+        self.basis = _compact(QComboBox())
         for text, value in BASES:
             self.basis.addItem(text, value)
         self.basis.setToolTip(
@@ -678,7 +758,7 @@ class ProjectForm(QWidget):
         layout.addWidget(self.sections["Soil"])
 
         box, form = _form()
-        self.method = QComboBox()
+        self.method = _compact(QComboBox())
         for text, value in METHODS:
             self.method.addItem(text, value)
         self.method.setToolTip(
@@ -715,12 +795,13 @@ class ProjectForm(QWidget):
         doc.push(commands.SetField(doc, path, value, text=text))
         self.refresh()
 
-    def refresh(self, force: bool = False) -> None:
+    def refresh(self, force: bool = False) -> list[str]:
         project = self.document.project
-        self.group.refresh(force)
+        dropped = self.group.refresh(force)
         self.method.setCurrentIndex(max(0, self.method.findData(project.criteria.method.value)))
         self.basis.setCurrentIndex(max(0, self.basis.findData(project.soil.bearing_basis.value)))
         self.combinations.refresh()
+        return dropped
 
     def focus_order(self) -> list[QWidget]:
         fields = self.group.fields

@@ -25,7 +25,7 @@ from ..style import ACCENT, ACCENT_LIGHT, GRAPHITE, MUTED, WARM, configure_pyqtg
 from .elevation import AXIS_WIDTH, _pen
 from .fields import LONG, PRESSURE, trim, unit_factor
 
-MIN_HEIGHT = 170  # px
+MIN_HEIGHT = 140  # px
 
 
 def case_title(result: WallResult, index: int) -> str:
@@ -45,7 +45,7 @@ class CasePicker(QComboBox):
             "Governing: the case with the lowest ratio / required for that check."
         )
         self.setSizeAdjustPolicy(QComboBox.SizeAdjustPolicy.AdjustToMinimumContentsLengthWithIcon)
-        self.setMinimumContentsLength(34)
+        self.setMinimumContentsLength(20)
         self._key: tuple[str, ...] = ()
 
     def fill(self, result: WallResult, choice: tuple) -> None:

@@ -27,6 +27,12 @@ def ratio_text(g: Governing) -> str:
     return f"{g.ratio:.2f} {sign} {g.required:.2f}"
 
 
+def _stable(result: WallResult, g: Governing) -> bool:
+    """Whether the governing case has equilibrium on the soil (the engine's evaluation, per case)."""
+    stable = result.evaluation.stable
+    return not 0 <= g.case_index < len(stable) or bool(stable[g.case_index])
+
+
 def case_text(g: Governing) -> str:
     if math.isinf(g.ratio):
         return ""
@@ -84,6 +90,7 @@ class VerdictView(QWidget):
         self.setObjectName("verdict")
         self.headline = QLabel(self)
         self.headline.setObjectName("verdictHead")
+        self.headline.setWordWrap(True)
         grid = QGridLayout()
         grid.setContentsMargins(0, 0, 0, 0)
         grid.setHorizontalSpacing(10)
@@ -119,9 +126,12 @@ class VerdictView(QWidget):
             g = result.governing[check]
             _name, bar, ratio, verdict, case = self.rows[check]
             bar.set_value(g.normalized, g.passes)
-            ratio.setText(ratio_text(g))
             no_demand = math.isinf(g.ratio)
-            verdict.setText(mark(None if no_demand else g.passes))
+            unstable = check is Check.BEARING and not _stable(result, g)
+            # an unstable case has no pressure to compare: the resultant falls beyond the footing's end
+            ratio.setText("no equilibrium" if unstable else ratio_text(g))
+            # "no demand" is said once, by the ratio; the mark column keeps only its symbol
+            verdict.setText(mark(None).split()[0] if no_demand else mark(g.passes))
             _set_colour(verdict, WARM if not g.passes else GRAPHITE, bold=True)
             case.setText(case_text(g))
         worst = result.worst

@@ -65,7 +65,7 @@ def test_export_writes_the_calculation_package_of_the_open_project(qtbot, window
     assert "Cedar Hollow Community Clinic" in text  # the demo's project name
     assert all(wall_id in text for wall_id in ("N1", "S2", "C3", "E4"))
     assert "Demo geotechnical memo GM-26-031" in text  # soil.report of the raw file reaches the package
-    assert "FAIL on their current footing: C3" in text  # the demo's C3 fails bearing as opened
+    assert "FAILS on its current footing: C3" in text  # the demo's C3 fails bearing as opened
     assert informations and str(target) in informations[0] and "4 walls" in informations[0]
     assert not window.busy_bar.isVisible() and window.export_pdf_action.isEnabled()
     assert not dialogs.warnings
@@ -79,7 +79,7 @@ def test_export_follows_the_current_model(qtbot, window, tmp_path, dialogs, info
     target = tmp_path / "widened.pdf"
     assert _export(qtbot, window, target, dialogs).ok
     text = _pdf_text(target)
-    assert "All 4 wall(s) pass every check on their current footing" in text
+    assert "All 4 walls pass every check on their current footing" in text
     assert format_length(0.762, "US") in text  # 30 in as the package prints it
 
 
@@ -90,7 +90,7 @@ def test_export_with_an_invalid_field_uses_the_last_valid_model_and_says_so(qtbo
     assert width.invalid
     target = tmp_path / "last-valid.pdf"
     assert _export(qtbot, window, target, dialogs).ok
-    assert "FAIL on their current footing: C3" in _pdf_text(target)  # still 16 in, the last valid width
+    assert "FAILS on its current footing: C3" in _pdf_text(target)  # still 16 in, the last valid width
     assert "Footing width B" in informations[0] and "last valid" in informations[0]
 
 
