@@ -210,6 +210,7 @@ class Label:
     bold: bool = False
     angle: float = 0.0
     color: str = "ink"
+    markup: bool = False  # program text whose ``_{...}`` parts print as subscripts (see :func:`formula`)
 
 
 @dataclass(frozen=True, slots=True)
@@ -223,6 +224,7 @@ class Dimension:
     text: str
     offset: float = 12.0
     outside: str = "end"  # where the text goes when it does not fit between the ends: "start" or "end"
+    markup: bool = False  # program text whose ``_{...}`` parts print as subscripts (see :func:`formula`)
 
 
 Shape = Line | Rect | Polygon | Arrow | Label | Dimension
@@ -421,7 +423,7 @@ def direction_text(direction: str) -> str:
 
 def direction_words(direction: str) -> str:
     return {
-        "+": "lateral load toward the end x = L (direction +)",
+        "+": "lateral load toward the end x = L_{f} (direction +)",
         "-": "lateral load toward the end x = 0 (direction −)",
         "none": "no lateral load",
     }.get(direction, direction)
@@ -800,7 +802,7 @@ def _references_and_notes(project: Project, fmt: _Fmt) -> Section:
         "Loads are as entered by the engineer of record. Vertical loads are positive downward; lateral loads are "
         "in-plane shears at a height above the top of the footing.",
         "Coordinates: x runs along the footing from its start end (x = 0) to x = L_{f} = extension at start + wall "
-        "length + extension at end. Direction + pushes toward x = L, direction − toward x = 0. Loads marked "
+        "length + extension at end. Direction + pushes toward x = L_{f}, direction − toward x = 0. Loads marked "
         '"reverses" act at their mirror position about the wall\'s mid-length in direction −.',
         "The footing is taken as rigid and the soil takes no tension. The soil pressure is checked along the "
         "footing's length; its width B carries the pressure uniformly.",
@@ -1101,7 +1103,9 @@ def _governing_heading(check: Check, g: Governing) -> list[Block]:
     return [
         head,
         Para(
-            f"The case with the lowest ratio / required of all combinations and directions: {direction_words(g.direction)}.",
+            plain("The case with the lowest ratio / required of all combinations and directions: ")
+            + formula(direction_words(g.direction))
+            + plain("."),
             "small",
         ),
     ]
@@ -1728,6 +1732,7 @@ _POINTS_PER_METRE = 72.0 / 0.0254
 # A generous average character width of the sans-serif drawing font, per point of size (for
 # deciding whether a label fits; the renderer measures exactly).
 _TEXT_WIDTH = 0.58
+_CORNER_CLEAR = 6.0  # points: arrowheads nearer than this to the wall's top corner are moved apart
 
 
 def drawing_scale(fit: float, units: str) -> tuple[float, str]:
@@ -1819,6 +1824,7 @@ def elevation_drawing(wall: Wall, fmt: _Fmt, width: float, height: float) -> Dra
         text = f"{ld.case.value} {fmt.line_load(ld.value)}" + (" (reverses)" if ld.reverses else "")
         shapes.append(Label(xa - 4, y_band + 2, text, "end", 5.5, color="load"))
         y_band += 10.0
+    shear_at_top = any(abs(Y(h.height) - top) < _CORNER_CLEAR for h in laterals)
     if point_loads:
         items = [
             (f.extension_start + p.at, f"{p.case.value} {fmt.force(p.value)}" + (" rev." if p.reverses else ""))
@@ -1828,13 +1834,17 @@ def elevation_drawing(wall: Wall, fmt: _Fmt, width: float, height: float) -> Dra
             group = [it for it, p in zip(items, point_loads, strict=True) if (p.value < 0) == up]
             for x, text in _group_loads(group):
                 xx = X(x)
+                # a shear arrow at the wall's top corner: keep the point load's arrowhead clear above it
+                gap = 7.0 if shear_at_top and abs(xx - X(ws)) < _CORNER_CLEAR else 2.0
                 if up:  # uplift: the arrow leaves the top of the wall, pointing up
-                    shapes.append(Arrow(xx, top + 2, xx, y_band + 16, 0.7))
+                    shapes.append(Arrow(xx, top + gap, xx, y_band + 16, 0.7))
                 else:
-                    shapes.append(Arrow(xx, y_band + 16, xx, top + 2, 0.7))
+                    shapes.append(Arrow(xx, y_band + 16, xx, top + gap, 0.7))
                 shapes.append(Label(xx, y_band + 18, text, "middle", 5.5, color="load"))
     # dimensions: footing length, extensions and wall length, footing thickness
-    shapes.append(Dimension(X(0), Y(-f.thickness), X(length), Y(-f.thickness), f"L = {fmt.length(length)}", offset=-18.0))
+    shapes.append(
+        Dimension(X(0), Y(-f.thickness), X(length), Y(-f.thickness), f"L_{{f}} = {fmt.length(length)}", offset=-18.0, markup=True)
+    )
     if f.extension_start > 0 or f.extension_end > 0:
         if f.extension_start > 0:
             shapes.append(
@@ -1852,17 +1862,17 @@ def elevation_drawing(wall: Wall, fmt: _Fmt, width: float, height: float) -> Dra
     if wall.stem.present:
         shapes.append(Label(X(ws + wall.length / 2), Y(stem_h / 2) - 2, f"stem wall, {fmt.length(stem_h)} high", "middle", 5.5))
     shapes.append(Label(X(0), Y(-f.thickness) - 30, "x = 0", "middle", 5.0))
-    shapes.append(Label(X(length), Y(-f.thickness) - 30, "x = L", "middle", 5.0))
+    shapes.append(Label(X(length), Y(-f.thickness) - 30, "x = L_{f}", "middle", 5.0, markup=True))
     caption = f"Elevation along the wall, scale {scale_name} (printed at 100%); wall drawn to the highest lateral load; + direction to the right."
     return Drawing(width, height, tuple(shapes), caption)
 
 
 def section_drawing(wall: Wall, project: Project, fmt: _Fmt, width: float, height: float) -> Drawing:
-    """To-scale section across the footing: width B, thickness D, cover, stem or wall."""
+    """To-scale section across the footing: width B, thickness t_f, soil cover h_s, wall and stem thicknesses."""
     f = wall.footing
     stem_h = wall.stem.height if wall.stem.present else 0.0
     above = max(f.cover, stem_h) + 0.6  # show the wall a little above grade or the stem
-    margin_x, bottom, top = 24.0, 30.0, 14.0
+    margin_x, bottom, top = 24.0, 30.0, 22.0
     fit = min((width - 2 * margin_x) / f.width, (height - bottom - top) / (above + f.thickness))
     s, scale_name = drawing_scale(fit, fmt.units)
     cx = width / 2.0
@@ -1884,6 +1894,16 @@ def section_drawing(wall: Wall, project: Project, fmt: _Fmt, width: float, heigh
         base = stem_h
     tw = wall.thickness * s
     shapes.append(Rect(cx - tw / 2, Y(base), tw, (above - base) * s, fill="wall"))
+    # thickness of the wall across its top, and of the stem across its mid-height
+    shapes.append(
+        Dimension(cx - tw / 2, Y(above), cx + tw / 2, Y(above), f"t_{{w}} = {fmt.length(wall.thickness)}", 8.0, markup=True)
+    )
+    if wall.stem.present:
+        ts = wall.stem.thickness * s
+        yy = Y(min(stem_h, f.cover if f.cover > 0 else stem_h) / 2)  # clear of the grade line
+        shapes.append(
+            Dimension(cx - ts / 2, yy, cx + ts / 2, yy, f"t_{{stem}} = {fmt.length(wall.stem.thickness)}", 0.0, markup=True)
+        )
     shapes.append(Dimension(cx - half, Y(-f.thickness), cx + half, Y(-f.thickness), f"B = {fmt.length(f.width)}", offset=-12.0))
     shapes.append(Dimension(cx + half, Y(-f.thickness), cx + half, Y(0), fmt.length(f.thickness), offset=10.0))
     if f.cover > 0:
@@ -1891,16 +1911,45 @@ def section_drawing(wall: Wall, project: Project, fmt: _Fmt, width: float, heigh
     return Drawing(width, height, tuple(shapes), f"Section across the footing, scale {scale_name}.")
 
 
+_LABEL_STEP = 8.0  # points between the baselines of labels stacked in a margin (6 pt text)
+
+
+def _stack(wanted: Sequence[float], highest: float) -> list[float]:
+    """Baselines for margin labels wanted at ``wanted`` (points, y up), kept at least
+    :data:`_LABEL_STEP` apart and no higher than ``highest``; the order of the labels is kept."""
+    order = sorted(range(len(wanted)), key=lambda k: -wanted[k])
+    out = [0.0] * len(wanted)
+    limit = highest
+    for k in order:
+        out[k] = min(wanted[k], limit)
+        limit = out[k] - _LABEL_STEP
+    return out
+
+
 def pressure_drawing(
     diagram: PressureDiagram, allowable: float, result: WallResult, g: Governing, fmt: _Fmt, width: float, height: float
 ) -> Drawing:
-    """Soil pressure under the footing in the governing bearing case, with the allowable line."""
+    """Soil pressure under the footing in the governing bearing case, with the allowable line.
+
+    The values are written in the side margins at the level they mark (q_max at the peak's end, q_min at
+    the other end, q_a at the end away from the peak), so no label crosses the outline, the fill or the
+    dashed allowable line; the contact length is dimensioned below the lowest line. ``height`` is the
+    most the drawing may take; it shrinks to what it holds.
+    """
     length = result.length
-    left, right, top, bottom = 70.0, 30.0, 48.0, 30.0
+    left = right = 74.0
+    top = 48.0
+    depth = height - top - 44.0  # points for the deeper of q_max and q_a
     sx = (width - left - right) / length
     q_top = max(diagram.q_max if math.isfinite(diagram.q_max) else 0.0, allowable)
-    sy = (height - top - bottom - 14.0) / q_top if q_top > 0 else 0.0
+    sy = depth / q_top if q_top > 0 else 0.0
+    partial = diagram.stable and diagram.contact_end - diagram.contact_start < length * (1 - 1e-9)
+    # below the lowest line: the contact dimension (text above its line), or room for two margin labels
+    # pushed apart (q_min and q_a at one end)
+    below = 18.0 if partial else 14.0
+    height = top + depth + below
     y_base = height - top  # underside of the footing; pressure drawn downward from it
+    y_low = y_base - q_top * sy  # the lowest of the peak and the allowable line
 
     def X(x: float) -> float:
         return left + x * sx
@@ -1912,33 +1961,37 @@ def pressure_drawing(
     shapes.append(Line(X(k1), y_base + 10, X(k1), y_base + 16, 0.6))
     shapes.append(Line(X(k2), y_base + 10, X(k2), y_base + 16, 0.6))
     shapes.append(Line(X(k1), y_base + 16, X(k2), y_base + 16, 0.6))
-    shapes.append(Label(X(k1) - 3, y_base + 13, "kern (middle third)", "end", 5.5))
+    kern_text = "kern (middle third)"
+    kern_w = _TEXT_WIDTH * 5.5 * len(kern_text) + 3.0
+    xr = X(diagram.resultant_x) if diagram.stable else X(length / 2)
+    # the kern's name beside its bracket, on the side away from the resultant's arrow
+    if X(k1) - 3 - kern_w < xr < X(k1) + 2:
+        shapes.append(Label(X(k2) + 3, y_base + 13, kern_text, "start", 5.5))
+    else:
+        shapes.append(Label(X(k1) - 3, y_base + 13, kern_text, "end", 5.5))
+    ya = y_base - allowable * sy
+    shapes.append(Line(X(0), ya, X(length), ya, 0.8, dash=True, color="allow"))
+    # margin labels: (end, wanted baseline, text, bold, colour); end 0 = left margin, 1 = right margin
+    margin: list[tuple[int, float, str, bool, str]] = []
     if diagram.stable:
         pts = tuple((X(float(x)), y_base - float(q) * sy) for x, q in zip(diagram.x, diagram.q, strict=True))
         shapes.append(Polygon(pts, fill="pressure"))
         # the resultant N
-        xr = X(diagram.resultant_x)
         shapes.append(Arrow(xr, y_base + 36, xr, y_base + 11, 1.0))
         case = result.cases[g.case_index]
         text = f"N = {fmt.force(case.vertical)}"
         if case.bearing is not None:
             text += f" at e = {fmt.decimal(case.bearing.eccentricity)}"
         shapes.append(Label(xr, y_base + 38, text, "middle", 6.0, color="load"))
-        # pressure values under the ends of the block
+        # pressure values beside the ends of the block, at their levels
         peak_left = float(diagram.q[1]) >= float(diagram.q[2])
-        x_peak = diagram.contact_start if peak_left else diagram.contact_end
-        x_other = diagram.contact_end if peak_left else diagram.contact_start
-        anchor_peak, anchor_other = ("start", "end") if peak_left else ("end", "start")
-        shapes.append(
-            Label(
-                X(x_peak), y_base - diagram.q_max * sy - 8, f"q_max = {fmt.pressure(diagram.q_max)}", anchor_peak, 6.0, bold=True
-            )
-        )
+        peak_end, other_end = (0, 1) if peak_left else (1, 0)
+        margin.append((peak_end, y_base - diagram.q_max * sy - 2, f"q_{{max}} = {fmt.pressure(diagram.q_max)}", True, "ink"))
         if diagram.q_min > 0:
-            shapes.append(
-                Label(X(x_other), y_base - diagram.q_min * sy - 8, f"q_min = {fmt.pressure(diagram.q_min)}", anchor_other, 6.0)
+            margin.append(
+                (other_end, y_base - diagram.q_min * sy - 2, f"q_{{min}} = {fmt.pressure(diagram.q_min)}", False, "ink")
             )
-        if diagram.contact_end - diagram.contact_start < length * (1 - 1e-9):
+        if partial:
             shapes.append(
                 Dimension(
                     X(diagram.contact_start),
@@ -1946,10 +1999,11 @@ def pressure_drawing(
                     X(diagram.contact_end),
                     y_base,
                     f"contact a = {fmt.length(diagram.contact_end - diagram.contact_start)}",
-                    offset=-(diagram.q_max * sy + 24),
+                    offset=-(y_base - y_low + 12.0),
                 )
             )
     else:
+        peak_end, other_end = 0, 1
         shapes.append(
             Label(
                 width / 2,
@@ -1961,11 +2015,14 @@ def pressure_drawing(
                 color="fail",
             )
         )
-    ya = y_base - allowable * sy
-    shapes.append(Line(X(0), ya, X(length), ya, 0.8, dash=True, color="allow"))
-    shapes.append(Label(X(0) - 4, ya - 2, f"q_a = {fmt.pressure(allowable)}", "end", 6.0, color="allow"))
+    margin.append((other_end, ya - 2, f"q_{{a}} = {fmt.pressure(allowable)}", False, "allow"))
+    for end in (0, 1):
+        items = [m for m in margin if m[0] == end]
+        for (_, _, text, bold, color), y in zip(items, _stack([m[1] for m in items], y_base - 8.0), strict=True):
+            x, anchor = (X(0) - 4, "end") if end == 0 else (X(length) + 4, "start")
+            shapes.append(Label(x, y, text, anchor, 6.0, bold=bold, color=color, markup=True))
     shapes.append(Label(X(0) - 4, y_base + 2, "x = 0", "end", 5.5))
-    shapes.append(Label(X(length) + 4, y_base + 2, "x = L", "start", 5.5))
+    shapes.append(Label(X(length) + 4, y_base + 2, "x = L_{f}", "start", 5.5, markup=True))
     caption = (
         f"Soil pressure in the governing bearing case {case_name(g.combination, g.direction)} "
         "(pressures drawn downward to a uniform scale; dashed: allowable)."
@@ -1993,6 +2050,7 @@ __all__ = [
     "Para",
     "Polygon",
     "Rect",
+    "Rich",
     "Run",
     "Section",
     "Table",

@@ -44,10 +44,13 @@ from .calc_package import (
     Para,
     Polygon,
     Rect,
+    Rich,
     Section,
     Table,
     Verdict,
     build_package,
+    formula,
+    plain,
 )
 from .errors import InputError
 from .resources import resource_path
@@ -602,7 +605,6 @@ def _flowable_classes() -> dict[str, type]:
 
 
 def _draw_shape(c: Any, shape: Any, fonts: _Fonts, text: _Text) -> None:
-    from reportlab.pdfbase.pdfmetrics import stringWidth
 
     if isinstance(shape, Rect):
         c.setStrokeColorRGB(*_COLORS["ink"])
@@ -636,19 +638,33 @@ def _draw_shape(c: Any, shape: Any, fonts: _Fonts, text: _Text) -> None:
         _arrow(c, shape.x1, shape.y1, shape.x2, shape.y2, shape.width, _COLORS.get(shape.color, _COLORS["ink"]))
     elif isinstance(shape, Label):
         font = fonts.bold if shape.bold else fonts.regular
-        value = text.glyphs(shape.text)
+        runs = formula(shape.text) if shape.markup else plain(shape.text)
         c.saveState()
         c.setFillColorRGB(*_COLORS.get(shape.color, _COLORS["ink"]))
-        c.setFont(font, shape.size)
         c.translate(shape.x, shape.y)
         if shape.angle:
             c.rotate(shape.angle)
-        w = stringWidth(value, font, shape.size)
+        w = _runs_width(runs, font, shape.size, text)
         x = {"start": 0.0, "middle": -w / 2.0, "end": -w}.get(shape.anchor, 0.0)
-        c.drawString(x, 0, value)
+        _draw_runs(c, x, 0.0, runs, font, shape.size, text)
         c.restoreState()
     elif isinstance(shape, Dimension):
         _dimension(c, shape, fonts, text)
+
+
+def _runs_width(runs: Rich, font: str, size: float, text: _Text) -> float:
+    """Width of a label's runs, subscripts at their smaller size."""
+    return sum(_width(text.glyphs(r.text), font, size * _SUB_SCALE if r.sub else size) for r in runs)
+
+
+def _draw_runs(c: Any, x: float, y: float, runs: Rich, font: str, size: float, text: _Text) -> None:
+    """Draw a label's runs from (x, y) on the baseline, subscripts smaller and lowered as in the equations."""
+    for r in runs:
+        value = text.glyphs(r.text)
+        run_size = size * _SUB_SCALE if r.sub else size
+        c.setFont(font, run_size)
+        c.drawString(x, y + (_SUB_RISE * size if r.sub else 0.0), value)
+        x += _width(value, font, run_size)
 
 
 def _arrow(c: Any, x1: float, y1: float, x2: float, y2: float, width: float, color: tuple[float, float, float]) -> None:
@@ -673,11 +689,9 @@ def _arrow(c: Any, x1: float, y1: float, x2: float, y2: float, width: float, col
 
 
 def _dimension(c: Any, d: Dimension, fonts: _Fonts, text: _Text) -> None:
-    from reportlab.pdfbase.pdfmetrics import stringWidth
-
     size = 6.0
-    value = text.glyphs(d.text)
-    w = stringWidth(value, fonts.regular, size)
+    runs = formula(d.text) if d.markup else plain(d.text)
+    w = _runs_width(runs, fonts.regular, size, text)
     c.saveState()
     c.setStrokeColorRGB(0.2, 0.2, 0.2)
     c.setFillColorRGB(0, 0, 0)
@@ -693,11 +707,11 @@ def _dimension(c: Any, d: Dimension, fonts: _Fonts, text: _Text) -> None:
             c.line(x - 2, y - 2, x + 2, y + 2)
         span = abs(d.x2 - d.x1)
         if w + 4 <= span:
-            c.drawString((d.x1 + d.x2) / 2 - w / 2, y + 1.5, value)
+            _draw_runs(c, (d.x1 + d.x2) / 2 - w / 2, y + 1.5, runs, fonts.regular, size, text)
         elif d.outside == "start":  # too short for its text: write it beside one end
-            c.drawString(min(d.x1, d.x2) - 3 - w, y - 2, value)
+            _draw_runs(c, min(d.x1, d.x2) - 3 - w, y - 2, runs, fonts.regular, size, text)
         else:
-            c.drawString(max(d.x1, d.x2) + 3, y - 2, value)
+            _draw_runs(c, max(d.x1, d.x2) + 3, y - 2, runs, fonts.regular, size, text)
     else:  # vertical
         x = d.x1 + d.offset
         c.line(d.x1 + (1.5 if d.offset >= 0 else -1.5), d.y1, x + out, d.y1)
@@ -709,12 +723,12 @@ def _dimension(c: Any, d: Dimension, fonts: _Fonts, text: _Text) -> None:
         if w + 4 <= span:
             c.translate(x - 1.5 if d.offset < 0 else x + 1.5 + size * 0.8, (d.y1 + d.y2) / 2 - w / 2)
             c.rotate(90)
-            c.drawString(0, 0, value)
+            _draw_runs(c, 0, 0, runs, fonts.regular, size, text)
         else:
             if d.offset < 0:
-                c.drawString(x - 3 - w, (d.y1 + d.y2) / 2 - 2, value)
+                _draw_runs(c, x - 3 - w, (d.y1 + d.y2) / 2 - 2, runs, fonts.regular, size, text)
             else:
-                c.drawString(x + 3, (d.y1 + d.y2) / 2 - 2, value)
+                _draw_runs(c, x + 3, (d.y1 + d.y2) / 2 - 2, runs, fonts.regular, size, text)
     c.restoreState()
 
 
