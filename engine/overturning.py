@@ -18,7 +18,7 @@ ArrayLike = float | np.ndarray
 
 
 def toe_arm(x: ArrayLike, length: float, toe_sign: int) -> ArrayLike:
-    """Arm (m) of a vertical load at x about the toe: L - x for the toe at x = L (sign +1), x for x = 0."""
+    """Arm (m) of a vertical load at x about the toe: L - x for the toe at x = L_f (sign +1), x for x = 0."""
     return length - x if toe_sign > 0 else x
 
 

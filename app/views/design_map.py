@@ -14,7 +14,7 @@ import math
 import numpy as np
 import pyqtgraph as pg
 from PySide6.QtCore import QRectF, Qt, Signal
-from PySide6.QtWidgets import QGridLayout, QHBoxLayout, QLabel, QPushButton, QVBoxLayout, QWidget
+from PySide6.QtWidgets import QFrame, QGridLayout, QHBoxLayout, QLabel, QPushButton, QScrollArea, QVBoxLayout, QWidget
 
 from engine.model import ALL_CHECKS
 from engine.sizing import SizingResult
@@ -29,6 +29,8 @@ from .fields import SHORT, trim, unit_factor
 NOT_ALLOWED, FAILS, PASSES = 0, 1, 2
 # Clip for drawing boundaries: "no demand" (inf) becomes a large finite number.
 _CLIP = 1.0e3
+RING_ROOM = 0.08  # of the grid's span, kept around it for the ring of a corner cell
+SIDE_WIDTH = 320  # px: the buttons, message and legend beside the map
 
 
 def _rgb(hex_colour: str) -> list[int]:
@@ -123,10 +125,10 @@ class DesignMapView(QWidget):
         self.readout = QLabel("Hover over a cell to read its ratios; click a passing cell to adopt it.", self)
         self.readout.setObjectName("hint")
         self.legend = QLabel(
-            "Filled cells pass every check; grey cells are narrower than the wall.\n"
-            "Lines: where a check reaches its required ratio —\n"
-            "   ── overturning    – – sliding    ··· bearing\n"
-            "◯ the smallest passing size (least B × D)\n✕ the current size",
+            "Filled cells pass every check; grey cells are narrower than the wall. "
+            "Lines: where a check reaches its required ratio:\n"
+            "── overturning   – – sliding   ··· bearing\n"
+            "◯ smallest passing size (least B × D)   ✕ current size",
             self,
         )
         self.legend.setObjectName("hint")
@@ -139,14 +141,22 @@ class DesignMapView(QWidget):
         side.addWidget(self.readout)
         side.addStretch(1)
         side.addWidget(self.legend)
-        side_box = QWidget(self)
+        side.setContentsMargins(0, 0, 4, 0)
+        side_box = QWidget()
         side_box.setLayout(side)
-        side_box.setFixedWidth(330)
+        # a short panel scrolls its side column instead of squeezing the buttons and cutting the text
+        self.side = QScrollArea(self)
+        self.side.setObjectName("designMapSide")
+        self.side.setWidget(side_box)
+        self.side.setWidgetResizable(True)
+        self.side.setFrameShape(QFrame.Shape.NoFrame)
+        self.side.setHorizontalScrollBarPolicy(Qt.ScrollBarPolicy.ScrollBarAlwaysOff)
+        self.side.setFixedWidth(SIDE_WIDTH)
         layout = QHBoxLayout(self)
         layout.setContentsMargins(4, 4, 4, 4)
         layout.setSpacing(6)
         layout.addWidget(self.plot, 1)
-        layout.addWidget(side_box)
+        layout.addWidget(self.side)
 
         self.entry: SizingEntry | None = None
         self.fresh = False
@@ -201,7 +211,11 @@ class DesignMapView(QWidget):
         key = (rect.x(), rect.y(), rect.width(), rect.height())
         if key != self._grid_key:
             self._grid_key = key
-            item.setRange(xRange=(rect.left(), rect.right()), yRange=(rect.top(), rect.bottom()), padding=0.02)
+            # half a cell more on every side, and room for the ring's radius on a small map, so the
+            # ring and cross at a corner cell show whole
+            px = max(dw / 2, RING_ROOM * rect.width())
+            py = max(dt / 2, RING_ROOM * rect.height())
+            item.setRange(xRange=(rect.left() - px, rect.right() + px), yRange=(rect.top() - py, rect.bottom() + py), padding=0.0)
         for k, curve in enumerate(self.boundaries):
             xs, ys = boundary_lines(s.check_normalized[k], widths, thicknesses)
             curve.setData(xs, ys)

@@ -12,7 +12,7 @@ import math
 
 import numpy as np
 import pyqtgraph as pg
-from PySide6.QtCore import Qt
+from PySide6.QtCore import QPointF, QRectF, Qt
 from PySide6.QtGui import QColor
 from PySide6.QtWidgets import QComboBox, QWidget
 
@@ -22,7 +22,7 @@ from engine.soil_pressure import PressureDiagram, pressure_diagram
 from engine.units import Kind
 
 from ..style import ACCENT, ACCENT_LIGHT, GRAPHITE, MUTED, WARM, configure_pyqtgraph
-from .elevation import AXIS_WIDTH, _pen
+from .elevation import AXIS_WIDTH, Placement, Spot, _pen, place_labels
 from .fields import LONG, PRESSURE, trim, unit_factor
 
 MIN_HEIGHT = 140  # px
@@ -133,6 +133,11 @@ class PressurePlot(pg.PlotWidget):
         self.diagram: PressureDiagram | None = None
         self.shown_q: np.ndarray = np.zeros(0)
         self.shown_allowable = 0.0
+        self._placements: list[Placement] = []
+        self.label_rects: list[QRectF] = []
+        box = plot.getViewBox()
+        box.sigRangeChanged.connect(self.layout_labels)
+        box.sigResized.connect(self.layout_labels)
 
     def render(self, wall: Wall, result: WallResult, index: int, units: str) -> PressureDiagram:  # type: ignore[override]
         """Draw the pressure of case ``index`` of ``result``; returns the engine's diagram."""
@@ -169,12 +174,16 @@ class PressurePlot(pg.PlotWidget):
         self.allowable.setValue(allowable)
         increased = result.table.wind_or_seismic[index] and result.table.criteria.bearing_increase != 1.0
         self.allowable_label.setText(f"allowable {trim(allowable, 1)} {q_unit}" + (" (increased)" if increased else ""))
-        self.allowable_label.setPos(length * 1.01, allowable)
         k1, k2 = diagram.kern
         self.kern[0].setValue(k1 / fl)
         self.kern[1].setValue(k2 / fl)
-        self.kern_labels[0].setPos(k1 / fl, y_range[0])
-        self.kern_labels[1].setPos(k2 / fl, y_range[0])
+        kern_spots = [[Spot(k1 / fl, y_range[0], (1.0, 0.0))], [Spot(k2 / fl, y_range[0], (0.0, 0.0))]]
+        # the allowable label goes at the end away from the peak: beside the footing, else inside it
+        low_end_first = diagram.stable and float(q[2]) > float(q[1])
+        start_spots = [Spot(0.0, allowable, anchor) for anchor in ((1.02, 1.0), (1.02, 0.0), (-0.02, 1.0), (-0.02, 0.0))]
+        end_spots = [Spot(length, allowable, anchor) for anchor in ((-0.02, 1.0), (-0.02, 0.0), (1.02, 1.0), (1.02, 0.0))]
+        allowable_spots = start_spots + end_spots if low_end_first else end_spots + start_spots
+        end_spots_shown: list[list[Spot]] = [[], []]
         if diagram.stable:
             self.notice.setText("")
             a, b = diagram.contact_start / fl, diagram.contact_end / fl
@@ -186,10 +195,11 @@ class PressurePlot(pg.PlotWidget):
             )
             self.contact_label.setPos(0.5 * (a + b), y + 0.03 * top)
             q_start, q_end = float(q[1]), float(q[2])
-            self.end_labels[0].setText(f"{trim(q_start, 0 if units == 'US' else 1)} {q_unit}")
-            self.end_labels[0].setPos(a, q_start)
-            self.end_labels[1].setText(f"{trim(q_end, 0 if units == 'US' else 1)} {q_unit}")
-            self.end_labels[1].setPos(b, q_end)
+            # beyond the kern one end of the contact carries no pressure: the contact label says where it is
+            for k, (value, x_end, side) in enumerate(((q_start, a, 1.06), (q_end, b, -0.06))):
+                zero = value <= 1e-9 * max(abs(q_start), abs(q_end), 1e-30)
+                self.end_labels[k].setText("" if zero and not full else f"{trim(value, 0 if units == 'US' else 1)} {q_unit}")
+                end_spots_shown[k] = [Spot(x_end, value, (side, 0.5))]
             self.resultant.setData([diagram.resultant_x / fl], [0.0])
         else:
             self.contact.setData([], [])
@@ -197,9 +207,35 @@ class PressurePlot(pg.PlotWidget):
             for label in self.end_labels:
                 label.setText("")
             self.resultant.setData([], [])
-            self.notice.setText("No equilibrium on the soil: the resultant falls outside the footing (N ≤ 0 or |e| ≥ L/2)")
+            self.notice.setText("No equilibrium on the soil:\nthe resultant falls outside the footing\n(N ≤ 0 or |e| ≥ L/2)")
             self.notice.setPos(0.5 * length, 0.5 * top)
+        self._placements = [Placement(label, spots, 0) for label, spots in zip(self.kern_labels, kern_spots, strict=True)]
+        if not diagram.stable:
+            self._placements.append(Placement(self.notice, [Spot(0.5 * length, 0.5 * top, (0.5, 0.5))], 1))
+        for label, spots in zip(self.end_labels, end_spots_shown, strict=True):
+            if spots and label.toPlainText():
+                # slide away from the allowable line (down the screen when above the allowable)
+                self._placements.append(Placement(label, spots, 1 if spots[0].y > allowable else -1))
+        if diagram.stable:
+            self._placements.append(
+                Placement(self.contact_label, [Spot(self.contact_label.pos().x(), self.contact_label.pos().y(), (0.5, 0.0))], 1)
+            )
+        self._placements.append(Placement(self.allowable_label, allowable_spots, -1))
+        self.layout_labels()
         return diagram
+
+    def layout_labels(self, *_args) -> None:
+        """Place the labels clear of each other, of the allowable line (end values) and of the plot's edges."""
+        box = self.getPlotItem().getViewBox()
+        line = box.mapViewToScene(QPointF(0.0, self.shown_allowable)).y()
+        bounds = box.sceneBoundingRect()
+        # the allowable line is an obstacle for the labels placed before the allowable label itself
+        band = QRectF(bounds.left(), line - 1.5, bounds.width(), 3.0)
+        before = [p for p in self._placements if p.item is not self.allowable_label]
+        rects = place_labels(box, before, [band])
+        shown = [QRectF(r) for r in rects]
+        own = [p for p in self._placements if p.item is self.allowable_label]
+        self.label_rects = shown + place_labels(box, own, [r.adjusted(-2.0, -2.0, 2.0, 2.0) for r in shown])
 
     @staticmethod
     def caption(result: WallResult, index: int, units: str) -> str:

@@ -21,6 +21,9 @@ from engine.schedule import schedule_headers, schedule_rows
 from ..document import ProjectDocument
 from ..style import WARM
 
+# Shown first, so the verdict stays on screen in a narrow window; copy and CSV keep the engine's order.
+EARLY_COLUMNS = ("Wall", "Result", "Overturning ratio", "Sliding ratio", "Bearing ratio", "Footing width", "Footing thickness")
+
 
 class ScheduleView(QWidget):
     """All walls, one row each: id, label, sizes, governing ratios, result."""
@@ -63,6 +66,7 @@ class ScheduleView(QWidget):
         self.rows = schedule_rows(doc.project, results)
         self.table.setColumnCount(len(self.headers))
         self.table.setHorizontalHeaderLabels(self.headers)
+        self._order_columns()
         self.table.setRowCount(len(self.rows))
         for r, row in enumerate(self.rows):
             for c, text in enumerate(row):
@@ -78,6 +82,20 @@ class ScheduleView(QWidget):
                         if c < len(row) - 1
                         else Qt.AlignmentFlag.AlignCenter
                     )
+
+    def _order_columns(self) -> None:
+        """Move the verdict columns forward on screen only (the model's column order is untouched)."""
+        header = self.table.horizontalHeader()
+        logical = [self.headers.index(name) for name in EARLY_COLUMNS if name in self.headers]
+        logical += [c for c in range(len(self.headers)) if c not in logical]
+        for visual, column in enumerate(logical):
+            if header.visualIndex(column) != visual:
+                header.moveSection(header.visualIndex(column), visual)
+
+    def visible_headers(self) -> list[str]:
+        """The headers in the order shown."""
+        header = self.table.horizontalHeader()
+        return [self.headers[header.logicalIndex(v)] for v in range(header.count())]
 
     def tsv(self) -> str:
         lines = ["\t".join(self.headers)] + ["\t".join(row) for row in self.rows]
