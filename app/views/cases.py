@@ -10,7 +10,7 @@ from PySide6.QtGui import QBrush, QColor, QStandardItem, QStandardItemModel
 from PySide6.QtWidgets import QAbstractItemView, QHeaderView, QTableView, QWidget
 
 from engine.model import ALL_CHECKS
-from engine.results import WallResult
+from engine.results import BearingResult, WallResult
 from engine.units import Kind
 
 from ..style import NG_MARK, OK_MARK, WARM
@@ -77,7 +77,12 @@ class CasesModel(QStandardItemModel):
                     continue
                 ok = ok and r.passes
                 mark = OK_MARK if r.passes else NG_MARK
-                texts.append("no demand" if math.isinf(r.ratio) else f"{r.ratio:.2f} {mark}")
+                if math.isinf(r.ratio):
+                    texts.append("no demand")
+                elif isinstance(r, BearingResult) and not r.stable:  # the resultant beyond the footing's end
+                    texts.append(f"no equilibrium {mark}")
+                else:
+                    texts.append(f"{r.ratio:.2f} {mark}")
                 keys.append(r.ratio / r.required)
             texts.append("OK" if ok else "NG")
             keys.append(int(ok))
