@@ -17,9 +17,12 @@ import numpy as np
 ArrayLike = float | np.ndarray
 
 
-def toe_arm(x: ArrayLike, length: float, toe_sign: int) -> ArrayLike:
-    """Arm (m) of a vertical load at x about the toe: L - x for the toe at x = L_f (sign +1), x for x = 0."""
-    return length - x if toe_sign > 0 else x
+def toe_arm(x: ArrayLike, length: float, toe_sign: ArrayLike) -> np.ndarray:
+    """Arm (m) of a vertical load at x about the toe: L - x for the toe at x = L (sign +1), x for x = 0.
+
+    ``toe_sign`` may be an array broadcasting against ``x`` (one toe per design case).
+    """
+    return np.where(np.asarray(toe_sign) > 0, np.subtract(length, x), x)
 
 
 def vertical_toe_moments(force: ArrayLike, arm: ArrayLike) -> tuple[np.ndarray, np.ndarray]:
@@ -32,12 +35,18 @@ def vertical_toe_moments(force: ArrayLike, arm: ArrayLike) -> tuple[np.ndarray, 
     return np.maximum(moment, 0.0), np.maximum(-moment, 0.0)
 
 
-def lateral_moment(force: ArrayLike, height: ArrayLike, thickness: ArrayLike) -> np.ndarray:
-    """Overturning moment (N*m) of shear H applied ``height`` above the top of a footing D thick.
+def lateral_moment(moment_about_top: ArrayLike, shear: ArrayLike, thickness: ArrayLike) -> np.ndarray:
+    """Overturning moment (N*m) about the base of shears H_i applied h_i above the top of a footing D thick.
 
-    M = H (h + D): the arm runs to the base of the footing, about which the footing tips.
+    M = sum H_i (h_i + D) = sum H_i h_i + (sum H_i) D: each arm runs to the base of the footing, about
+    which the footing tips.
+
+    Args:
+        moment_about_top: sum H_i h_i (N*m).
+        shear: sum H_i (N).
+        thickness: D (m).
     """
-    return np.multiply(force, np.add(height, thickness))
+    return np.add(moment_about_top, np.multiply(shear, thickness))
 
 
 def overturning_ratio(resisting: ArrayLike, overturning: ArrayLike) -> np.ndarray:

@@ -108,7 +108,7 @@ def case_table(wall: Wall, soil: SoilProperties, criteria: DesignCriteria) -> Ca
     n_app = forces.sum(axis=1)
     m_app = (forces * (x - 0.5 * length)).sum(axis=1)
     toe = np.where(sign != 0.0, sign, np.where(m_app >= 0.0, 1.0, -1.0))
-    arm = np.where(toe[:, None] > 0.0, length - x, x)
+    arm = overturning.toe_arm(x, length, toe[:, None])
     resisting, overturning_moment = overturning.vertical_toe_moments(forces, arm)
 
     # lateral loads: only in cases that act laterally
@@ -165,18 +165,6 @@ class Evaluation:
     required: np.ndarray  # (3,)
     applies: np.ndarray  # (3, k)
 
-    @property
-    def ratios(self) -> np.ndarray:
-        """(3, k, ...) ratios of overturning, sliding and bearing."""
-        return np.stack(np.broadcast_arrays(self.overturning_ratio, self.sliding_ratio, self.bearing_ratio))
-
-    @property
-    def normalized(self) -> np.ndarray:
-        """(3, k, ...) ratio / required; inf where the case's combination does not apply to the check."""
-        extra = (1,) * (self.overturning_ratio.ndim - 1)
-        applies = self.applies.reshape(self.applies.shape + extra)
-        return np.where(applies, self.ratios / self.required.reshape((3, 1) + extra), np.inf)
-
     def check_minima(self) -> np.ndarray:
         """(3, ...) lowest ratio / required of each check over the cases it applies to (inf: none)."""
         out = []
@@ -212,7 +200,7 @@ def evaluate(table: CaseTable, width: float | np.ndarray, thickness: float | np.
     weight = np.asarray(self_weight(wall, soil, b, d).total, dtype=float)
     factored_weight = per_case(table.dead_factor) * weight  # acts at L/2
     vertical = per_case(table.applied_vertical) + factored_weight
-    lateral_moment = per_case(table.shear_moment) + per_case(table.shear) * d  # sum f H (h + D)
+    lateral_moment = overturning.lateral_moment(per_case(table.shear_moment), per_case(table.shear), d)  # sum f H (h + D)
     moment = per_case(table.direction_sign) * lateral_moment + per_case(table.applied_moment)
     e = soil_pressure.resultant_eccentricity(moment, vertical)
     pressure = soil_pressure.pressure_distribution(vertical, e, b, length)

@@ -154,6 +154,17 @@ def _slide(rect: QRectF, bounds: QRectF, taken: list[QRectF], nudge: int) -> QRe
     return best if best is not None else rect
 
 
+def style_axes(plot: pg.PlotItem) -> None:
+    """Quiet axes in engineering units (no SI prefixes such as "kpsf"), the left one of fixed width so
+    that the elevation and the pressure plot share one horizontal scale."""
+    for name in ("left", "bottom"):
+        axis = plot.getAxis(name)
+        axis.enableAutoSIPrefix(False)
+        axis.setPen(_pen(MUTED))
+        axis.setTextPen(_pen(MUTED))
+    plot.getAxis("left").setWidth(AXIS_WIDTH)
+
+
 class ElevationView(pg.PlotWidget):
     """Elevation of wall, stem, footing and soil cover, with line, point and lateral load arrows."""
 
@@ -166,12 +177,7 @@ class ElevationView(pg.PlotWidget):
         plot.hideButtons()
         plot.setAspectLocked(True, ratio=1.0)
         plot.disableAutoRange()
-        for name in ("left", "bottom"):
-            axis = plot.getAxis(name)
-            axis.enableAutoSIPrefix(False)
-            axis.setPen(_pen(MUTED))
-            axis.setTextPen(_pen(MUTED))
-        plot.getAxis("left").setWidth(AXIS_WIDTH)
+        style_axes(plot)
         self.setMinimumHeight(140)
 
         self.soil = _rect_item(SOIL, SOIL, -3)

@@ -22,7 +22,7 @@ from engine.soil_pressure import PressureDiagram, pressure_diagram
 from engine.units import Kind
 
 from ..style import ACCENT, ACCENT_LIGHT, GRAPHITE, MUTED, WARM, configure_pyqtgraph
-from .elevation import AXIS_WIDTH, Placement, Spot, _pen, place_labels
+from .elevation import Placement, Spot, _pen, place_labels, style_axes
 from .fields import LONG, PRESSURE, trim, unit_factor
 
 MIN_HEIGHT = 140  # px
@@ -87,12 +87,7 @@ class PressurePlot(pg.PlotWidget):
         plot.disableAutoRange()
         plot.setMouseEnabled(x=True, y=False)
         plot.invertY(True)
-        for name in ("left", "bottom"):
-            axis = plot.getAxis(name)
-            axis.enableAutoSIPrefix(False)
-            axis.setPen(_pen(MUTED))
-            axis.setTextPen(_pen(MUTED))
-        plot.getAxis("left").setWidth(AXIS_WIDTH)
+        style_axes(plot)
         # tall enough for the kern labels above the footing line and the contact bar below the
         # block, also when the design map tab takes half of the column
         self.setMinimumHeight(MIN_HEIGHT)
