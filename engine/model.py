@@ -371,14 +371,34 @@ class ProjectInfo:
 
 
 @dataclass(frozen=True, slots=True, kw_only=True)
+class Assumption:
+    """A value the engineer did not enter, which Kernline took by default.
+
+    Attributes:
+        field: its path in the project file, such as ``walls[0].footing.unit_weight``.
+        value: the value taken, as text in the project's units ("150 pcf").
+        basis: why this value (its clause, or "common practice").
+    """
+
+    field: str
+    value: str
+    basis: str
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
 class Project:
-    """A whole project: information, display units, criteria, soil and walls."""
+    """A whole project: information, display units, criteria, soil and walls.
+
+    ``assumptions`` lists every value taken by default when the project was read (see
+    :class:`Assumption`); a project built in code has none unless it says so.
+    """
 
     info: ProjectInfo = field(default_factory=ProjectInfo)
     units: str = "US"
     criteria: DesignCriteria = field(default_factory=DesignCriteria)
     soil: SoilProperties = field(default_factory=SoilProperties)
     walls: tuple[Wall, ...] = ()
+    assumptions: tuple[Assumption, ...] = ()
 
     def __post_init__(self) -> None:
         _require(self.units in ("US", "SI"), "units", f'expected "US" or "SI", got "{self.units}"')

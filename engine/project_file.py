@@ -14,7 +14,6 @@ import copy
 import json
 import math
 import os
-import tempfile
 from collections.abc import Iterator
 from contextlib import contextmanager
 from dataclasses import dataclass
@@ -24,6 +23,7 @@ from typing import Any
 
 from .combinations import MAX_SDS, default_required
 from .errors import FormatVersionError, InputError
+from .file_safety import atomic_write_text
 from .model import (
     ALL_CHECKS,
     BearingBasis,
@@ -470,34 +470,6 @@ def save_project(path: str | os.PathLike[str], raw: dict[str, Any]) -> None:
     """
     text = dumps_project(raw)
     atomic_write_text(Path(path), text)
-
-
-def atomic_write_text(path: Path, text: str) -> None:
-    """Write ``text`` to ``path`` so that readers see the old file or the new one, never a mixture."""
-    folder = path.resolve().parent
-    fd, tmp = tempfile.mkstemp(prefix=f".{path.name}.", suffix=".tmp", dir=folder)
-    try:
-        with os.fdopen(fd, "w", encoding="utf-8", newline="\n") as fh:
-            fh.write(text)
-            fh.flush()
-            os.fsync(fh.fileno())
-        if path.exists():
-            os.chmod(tmp, path.stat().st_mode & 0o777)
-        os.replace(tmp, path)
-    except BaseException:
-        try:
-            os.unlink(tmp)
-        except FileNotFoundError:
-            pass
-        raise
-    try:  # make the rename itself durable
-        dir_fd = os.open(folder, os.O_RDONLY)
-        try:
-            os.fsync(dir_fd)
-        finally:
-            os.close(dir_fd)
-    except OSError:  # pragma: no cover - some file systems refuse fsync on a folder
-        pass
 
 
 def with_footing_sizes(raw: dict[str, Any], sizes: dict[str, tuple[float, float]], units: str) -> dict[str, Any]:
