@@ -6,6 +6,26 @@ for input the engine cannot use: they name the field, what was given and what is
 
 from __future__ import annotations
 
+import unicodedata
+
+# A message is one line of about this many characters at most (longer ones end in "...").
+MAX_MESSAGE = 240
+
+
+def one_line(text: str, limit: int = MAX_MESSAGE) -> str:
+    """``text`` as one printable line: control and format characters (ESC, CR, LF, bidi overrides)
+    escaped as \\xNN / \\uNNNN, so nothing from a file can move the cursor or recolour a terminal,
+    and cut to ``limit`` characters."""
+    out = []
+    for ch in text:
+        if unicodedata.category(ch) in ("Cc", "Cf", "Zl", "Zp"):
+            code = ord(ch)
+            out.append(f"\\x{code:02x}" if code < 0x100 else f"\\u{code:04x}")
+        else:
+            out.append(ch)
+    line = "".join(out)
+    return line if len(line) <= limit else line[: limit - 3] + "..."
+
 
 class EngineError(Exception):
     """Base of every error the engine raises on purpose."""
@@ -27,7 +47,8 @@ class InputError(EngineError, ValueError):
 
     @property
     def message(self) -> str:
-        return f"{self.field}: {self.problem}" if self.field else self.problem
+        """One line: the field path and the problem, control characters escaped (see :func:`one_line`)."""
+        return one_line(f"{self.field}: {self.problem}" if self.field else self.problem)
 
     def within(self, prefix: str) -> InputError:
         """Return the same error with ``prefix`` put in front of its field path."""

@@ -365,8 +365,11 @@ class ProjectInfo:
     name: str = ""
     number: str = ""
     engineer: str = ""
+    checker: str = ""
     client: str = ""
     address: str = ""
+    revision: str = ""
+    revision_date: str = ""
     notes: str = ""
 
 

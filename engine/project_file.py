@@ -11,11 +11,13 @@ whole.
 from __future__ import annotations
 
 import copy
+import difflib
 import json
 import math
 import os
 from collections.abc import Iterator
 from contextlib import contextmanager
+from contextvars import ContextVar
 from dataclasses import dataclass
 from functools import lru_cache
 from pathlib import Path
@@ -23,9 +25,11 @@ from typing import Any
 
 from .combinations import MAX_SDS, default_required
 from .errors import FormatVersionError, InputError
-from .file_safety import atomic_write_text
+from .file_safety import atomic_write_text, check_input_file
 from .model import (
     ALL_CHECKS,
+    INCH,
+    Assumption,
     BearingBasis,
     Check,
     DesignCriteria,
@@ -44,7 +48,7 @@ from .model import (
     StripFooting,
     Wall,
 )
-from .units import Kind, format_length, length_text, parse_quantity
+from .units import Kind, format_length, format_quantity, length_text, parse_quantity
 
 FORMAT = "kernline-project"
 VERSION = 1
@@ -52,14 +56,93 @@ EXTENSION = ".kernline"
 
 _CASES = {c.value: c for c in LoadCase}
 
+# ---- the keys of each section -------------------------------------------------------------------
+# Inside these sections an unknown key is refused (a misspelt key would otherwise be ignored and a
+# default used). Users keep their own data under the top-level "extra" object or under any key that
+# starts with "x-"; both are kept exactly on save.
+TOP_KEYS = ("format", "version", "units", "project", "criteria", "soil", "walls", "extra")
+PROJECT_KEYS = ("name", "number", "engineer", "checker", "client", "address", "revision", "revision_date", "notes")
+CRITERIA_KEYS = ("method", "sds", "bearing_increase", "required", "combinations")
+REQUIRED_KEYS = tuple(c.value for c in ALL_CHECKS)
+COMBINATION_KEYS = ("name", "factors", "checks")
+SOIL_KEYS = (
+    "allowable_bearing",
+    "bearing_basis",
+    "friction",
+    "cohesion",
+    "passive",
+    "passive_ignore",
+    "unit_weight",
+    "report",
+)
+WALL_KEYS = ("id", "label", "length", "thickness", "footing", "stem", "loads", "sizing")
+FOOTING_KEYS = ("width", "thickness", "extension_start", "extension_end", "cover", "unit_weight", "offset")
+STEM_KEYS = ("height", "thickness")
+LOAD_KEYS = {
+    "line": ("type", "case", "value", "start", "end", "label", "reverses"),
+    "point": ("type", "case", "value", "at", "label", "reverses"),
+    "lateral": ("type", "case", "value", "height", "label"),
+}
+SIZING_KEYS = ("width_min", "width_max", "width_step", "thickness_min", "thickness_max", "thickness_step")
+USER_PREFIX = "x-"
+
+# Limits of physical sense on plain numbers (common practice: beyond them the number is a slip).
+MAX_FACTOR = 10.0  # a load factor, a required ratio or a bearing increase
+MAX_FRICTION = 2.0  # a friction coefficient (tan of a friction angle; 2 is over 63 degrees)
+MAX_DEPTH = 64  # nesting of JSON objects and lists
+MAX_INT_DIGITS = 100
+
+# Where the values taken by default come from (the "basis" of each assumption).
+BASIS_CONCRETE = "normal-weight concrete, common practice"
+BASIS_NONE = "none entered: not taken into account"
+BASIS_SIZING = "Kernline's default sizing range, common practice"
+
+_path: ContextVar[tuple[str, ...]] = ContextVar("kernline_field_path", default=())
+_assumed: ContextVar[list[Assumption] | None] = ContextVar("kernline_assumptions", default=None)
+_system: ContextVar[str] = ContextVar("kernline_units", default="US")
+
+
+def _join(parts: tuple[str, ...]) -> str:
+    out = ""
+    for part in parts:
+        if not part:
+            continue
+        out = part if not out else (out + part if part.startswith("[") else f"{out}.{part}")
+    return out
+
 
 @contextmanager
 def _scope(path: str) -> Iterator[None]:
-    """Prefix the field path of any InputError raised inside with ``path``."""
+    """Parse inside field ``path``: errors are prefixed with it, assumptions recorded under it."""
+    token = _path.set(_path.get() + (path,))
     try:
         yield
     except InputError as err:
         raise err.within(path) from None
+    finally:
+        _path.reset(token)
+
+
+def _assume(key: str, value: str, basis: str) -> None:
+    """Record that ``key`` (in the current scope) was not entered and ``value`` was taken."""
+    found = _assumed.get()
+    if found is not None:
+        found.append(Assumption(field=_join(_path.get() + (key,)), value=value, basis=basis))
+
+
+def _keys(obj: dict[str, Any], allowed: tuple[str, ...]) -> None:
+    """Refuse a key that is not one of ``allowed`` (keys starting with "x-" are the user's own)."""
+    for key in obj:
+        if key in allowed or (isinstance(key, str) and key.startswith(USER_PREFIX)):
+            continue
+        shown = key if len(key) <= 40 else key[:37] + "..."
+        lowered = {k.lower(): k for k in allowed}
+        close = difflib.get_close_matches(key.lower(), list(lowered), n=1, cutoff=0.6)
+        if close:
+            hint = f'did you mean "{lowered[close[0]]}"?'
+        else:
+            hint = "expected one of " + ", ".join(allowed)
+        raise InputError(shown, f'unknown key; {hint} (keep your own data under "extra" or keys starting with "x-")')
 
 
 def _object(raw: Any, path: str, required: bool = False) -> dict[str, Any]:
@@ -71,35 +154,65 @@ def _object(raw: Any, path: str, required: bool = False) -> dict[str, Any]:
 
 
 def _show(value: Any) -> str:
-    text = json.dumps(value) if not isinstance(value, str) else f'"{value}"'
-    return text if len(text) <= 60 else text[:57] + "..."
+    try:
+        text = json.dumps(value, ensure_ascii=False) if not isinstance(value, str) else f'"{value}"'
+    except (TypeError, ValueError):
+        text = type(value).__name__
+    return text if len(text) <= 40 else text[:37] + "..."
 
 
 def _quantity(
-    obj: dict[str, Any], key: str, kind: Kind, default: str | None, *, positive: bool = False, non_negative: bool = False
+    obj: dict[str, Any],
+    key: str,
+    kind: Kind,
+    default: str | None = None,
+    basis: str = "",
+    *,
+    positive: bool = False,
+    non_negative: bool = False,
 ) -> float:
-    """Parse obj[key] ("number unit") as ``kind``; missing -> default (or an error when None)."""
+    """Parse obj[key] ("number unit") as ``kind``; missing -> ``default`` (an assumption) or an error."""
     if key not in obj:
         if default is None:
             raise InputError(key, f'is missing; expected {kind.info.noun} such as "{kind.info.example}"')
-        text = default
-    else:
-        text = obj[key]
+        value = parse_quantity(default, kind)
+        _assume(key, _format(value, kind), basis)
+        return value
+    text = obj[key]
     if not isinstance(text, str):
-        raise InputError(key, f'expected {kind.info.noun} such as "{kind.info.example}", got {_show(text)}')
+        raise InputError(key, f'expected {kind.info.noun} such as "{kind.info.example}" (text in quotes), got {_show(text)}')
     with _scope(key):
         value = parse_quantity(text, kind)
     if positive and not value > 0.0:
-        raise InputError(key, f'must be greater than zero, got "{text}"')
+        raise InputError(key, f"must be greater than zero, got {_show(text)}")
     if non_negative and value < 0.0:
-        raise InputError(key, f'must not be negative, got "{text}"')
+        raise InputError(key, f"must not be negative, got {_show(text)}")
     return value
 
 
-def _number(obj: dict[str, Any], key: str, default: float | None, *, positive: bool = False, non_negative: bool = False) -> float:
+def _format(value: float, kind: Kind) -> str:
+    """A value taken by default, as text in the project's units."""
+    system = _system.get()
+    if kind is Kind.LENGTH:
+        return format_length(value, system)
+    return format_quantity(value, kind, system)
+
+
+def _number(
+    obj: dict[str, Any],
+    key: str,
+    default: float | None = None,
+    basis: str = "",
+    *,
+    positive: bool = False,
+    non_negative: bool = False,
+    limit: float | None = None,
+    limit_reason: str = "",
+) -> float:
     if key not in obj:
         if default is None:
             raise InputError(key, "is missing; expected a number")
+        _assume(key, f"{default:g}", basis)
         return default
     value = obj[key]
     if isinstance(value, bool) or not isinstance(value, (int, float)):
@@ -111,9 +224,11 @@ def _number(obj: dict[str, Any], key: str, default: float | None, *, positive: b
     if not math.isfinite(value):
         raise InputError(key, f"expected a finite number, got {value}")
     if positive and not value > 0.0:
-        raise InputError(key, f"must be greater than zero, got {value}")
+        raise InputError(key, f"must be greater than zero, got {value:g}")
     if non_negative and value < 0.0:
-        raise InputError(key, f"must not be negative, got {value}")
+        raise InputError(key, f"must not be negative, got {value:g}")
+    if limit is not None and abs(value) > limit:
+        raise InputError(key, f"{value:g} is beyond {limit:g}, the limit for {limit_reason}; check the value")
     return float(value)
 
 
@@ -124,7 +239,9 @@ def _text(obj: dict[str, Any], key: str, default: str = "") -> str:
     return value
 
 
-def _choice(obj: dict[str, Any], key: str, choices: dict[str, Any], default: str) -> Any:
+def _choice(obj: dict[str, Any], key: str, choices: dict[str, Any], default: str, basis: str) -> Any:
+    if key not in obj:
+        _assume(key, default, basis)
     value = obj.get(key, default)
     if not isinstance(value, str) or value not in choices:
         allowed = ", ".join(f'"{c}"' for c in choices)
@@ -147,21 +264,28 @@ def _case(obj: dict[str, Any], allowed: tuple[LoadCase, ...] = tuple(LoadCase)) 
 
 def _info(raw: Any) -> ProjectInfo:
     obj = _object(raw, "")
-    return ProjectInfo(**{k: _text(obj, k) for k in ("name", "number", "engineer", "client", "address", "notes")})
+    _keys(obj, PROJECT_KEYS)
+    return ProjectInfo(**{k: _text(obj, k) for k in PROJECT_KEYS})
 
 
 def _combination(raw: Any) -> LoadCombination:
     obj = _object(raw, "", required=True)
+    _keys(obj, COMBINATION_KEYS)
     name = _text(obj, "name")
     if not name.strip():
         raise InputError("name", 'is missing; give the combination a name such as "0.6D + 0.6W"')
     factors_raw = _object(obj.get("factors"), "factors", required=True)
     factors = []
-    for key in factors_raw:
-        if key not in _CASES:
-            raise InputError(f"factors.{key}", f"unknown load case; expected one of {', '.join(_CASES)}")
-        factors.append((_CASES[key], _number(factors_raw, key, None)))
+    with _scope("factors"):
+        for key in factors_raw:
+            if key not in _CASES:
+                close = [c for c in _CASES if c.lower() == str(key).lower()]
+                hint = f'did you mean "{close[0]}"? ' if close else ""
+                raise InputError(str(key)[:40], f"unknown load case; {hint}expected one of {', '.join(_CASES)} (ASCE 7-16 2.2)")
+            factors.append((_CASES[key], _number(factors_raw, key, limit=MAX_FACTOR, limit_reason="a load factor")))
     checks_raw = obj.get("checks", [c.value for c in ALL_CHECKS])
+    if "checks" not in obj:
+        _assume("checks", ", ".join(c.value for c in ALL_CHECKS), "a combination applies to every check unless it says")
     if not isinstance(checks_raw, list) or not checks_raw:
         raise InputError("checks", f'expected a list such as ["overturning", "sliding", "bearing"], got {_show(checks_raw)}')
     names = {c.value: c for c in ALL_CHECKS}
@@ -173,13 +297,31 @@ def _combination(raw: Any) -> LoadCombination:
     return LoadCombination(name=name, factors=tuple(factors), checks=frozenset(checks))
 
 
-def _criteria(raw: Any) -> DesignCriteria:
+def _criteria(raw: Any, seismic_walls: list[str]) -> DesignCriteria:
     obj = _object(raw, "")
-    method = _choice(obj, "method", {m.value: m for m in Method}, Method.ASCE7_16_ASD.value)
+    _keys(obj, CRITERIA_KEYS)
+    method = _choice(
+        obj,
+        "method",
+        {m.value: m for m in Method},
+        Method.ASCE7_16_ASD.value,
+        "ASCE 7-16 2.4 ASD combinations (Kernline's default)",
+    )
     base = default_required(method)
     with _scope("required"):
         req_obj = _object(obj.get("required"), "")
-        required = RequiredRatios(**{c.value: _number(req_obj, c.value, base.of(c), positive=True) for c in ALL_CHECKS})
+        _keys(req_obj, REQUIRED_KEYS)
+        basis = (
+            "a ratio of 1.0 with the ASD combinations (IBC 2021 1605.1.1, ASCE 7-16 2.4)"
+            if method is Method.ASCE7_16_ASD
+            else "factors of safety common in practice with service loads"
+        )
+        required = RequiredRatios(
+            **{
+                c.value: _number(req_obj, c.value, base.of(c), basis, positive=True, limit=MAX_FACTOR, limit_reason="a ratio")
+                for c in ALL_CHECKS
+            }
+        )
     custom: list[LoadCombination] = []
     if "combinations" in obj:
         combos = obj["combinations"]
@@ -190,7 +332,14 @@ def _criteria(raw: Any) -> DesignCriteria:
                 custom.append(_combination(c))
         if not custom:
             raise InputError("combinations", "is empty; leave it out to use the method's preset combinations")
-    sds = _number(obj, "sds", 0.0, non_negative=True)
+    uses_sds = method is Method.ASCE7_16_ASD and not custom
+    if uses_sds and seismic_walls and "sds" not in obj:
+        raise InputError(
+            "sds",
+            f"is missing; walls {', '.join(seismic_walls[:3])}{' ...' if len(seismic_walls) > 3 else ''} carry E loads, and "
+            "the vertical seismic effect Ev = 0.2 S_DS D (ASCE 7-16 12.4.2.2) needs S_DS from the site's seismic data",
+        )
+    sds = _number(obj, "sds", non_negative=True) if "sds" in obj else 0.0  # without E loads S_DS has no effect
     if sds > MAX_SDS:
         raise InputError(
             "sds", f"{sds:g} makes the counteracting dead-load factor 0.6 - 0.14 S_DS negative (ASCE 7-16 2.4.5); check the value"
@@ -206,7 +355,15 @@ def _criteria(raw: Any) -> DesignCriteria:
 
 def _bearing_increase(obj: dict[str, Any]) -> float:
     """The factor on the allowable in combinations with W or E: 1.0 (none) or more."""
-    value = _number(obj, "bearing_increase", 1.0, positive=True)
+    value = _number(
+        obj,
+        "bearing_increase",
+        1.0,
+        "no increase of the allowable for W or E",
+        positive=True,
+        limit=MAX_FACTOR,
+        limit_reason="a bearing increase",
+    )
     if value < 1.0:
         raise InputError(
             "bearing_increase", f"is a factor that raises the allowable with W or E: 1.0 for none or more, got {value:g}"
@@ -214,70 +371,108 @@ def _bearing_increase(obj: dict[str, Any]) -> float:
     return value
 
 
-def _soil(raw: Any) -> SoilProperties:
+def _soil(raw: Any, present: bool) -> SoilProperties:
+    """The geotechnical report's values. The site values have no default: a missing one is refused."""
+    if not present:
+        raise InputError(
+            "",
+            "is missing; give the geotechnical report's allowable_bearing, friction (or cohesion) and unit_weight",
+        )
     obj = _object(raw, "")
+    _keys(obj, SOIL_KEYS)
+    if "allowable_bearing" not in obj:
+        raise InputError(
+            "allowable_bearing",
+            'is missing; enter the allowable bearing pressure from the geotechnical report, such as "2000 psf"',
+        )
+    if "friction" not in obj and "cohesion" not in obj:
+        raise InputError(
+            "friction",
+            "is missing; enter the friction coefficient from the geotechnical report (or cohesion, for a cohesive soil)",
+        )
+    if "unit_weight" not in obj:
+        raise InputError(
+            "unit_weight", 'is missing; enter the soil\'s unit weight from the geotechnical report, such as "110 pcf"'
+        )
+    _text(obj, "report")
     return SoilProperties(
-        allowable_bearing=_quantity(obj, "allowable_bearing", Kind.PRESSURE, "2000 psf", positive=True),
-        bearing_basis=_choice(obj, "bearing_basis", {b.value: b for b in BearingBasis}, "gross"),
-        friction=_number(obj, "friction", 0.35, non_negative=True),
-        cohesion=_quantity(obj, "cohesion", Kind.PRESSURE, "0 psf", non_negative=True),
-        passive=_quantity(obj, "passive", Kind.PRESSURE_GRADIENT, "0 pcf", non_negative=True),
-        passive_ignore=_quantity(obj, "passive_ignore", Kind.LENGTH, "0 in", non_negative=True),
-        unit_weight=_quantity(obj, "unit_weight", Kind.UNIT_WEIGHT, "110 pcf", non_negative=True),
+        allowable_bearing=_quantity(obj, "allowable_bearing", Kind.PRESSURE, positive=True),
+        bearing_basis=_choice(
+            obj, "bearing_basis", {b.value: b for b in BearingBasis}, "gross", "the allowable is compared with the gross pressure"
+        ),
+        friction=_number(
+            obj, "friction", 0.0, BASIS_NONE, non_negative=True, limit=MAX_FRICTION, limit_reason="a friction coefficient"
+        ),
+        cohesion=_quantity(obj, "cohesion", Kind.PRESSURE, "0 psf", BASIS_NONE, non_negative=True),
+        passive=_quantity(obj, "passive", Kind.PRESSURE_GRADIENT, "0 pcf", BASIS_NONE, non_negative=True),
+        passive_ignore=_quantity(
+            obj, "passive_ignore", Kind.LENGTH, "0 in", "passive resistance taken from the ground surface", non_negative=True
+        ),
+        unit_weight=_quantity(obj, "unit_weight", Kind.UNIT_WEIGHT, non_negative=True),
     )
 
 
 def _load(raw: Any, wall_length: float) -> LineLoad | PointLoad | LateralLoad:
     obj = _object(raw, "", required=True)
     kind = obj.get("type")
+    if kind not in LOAD_KEYS:
+        if "type" not in obj:
+            raise InputError("type", 'is missing; expected "line", "point" or "lateral"')
+        raise InputError("type", f'expected "line", "point" or "lateral", got {_show(kind)}')
+    _keys(obj, LOAD_KEYS[kind])
     label = _text(obj, "label")
     if kind == "line":
         case = _case(obj)
         reverses = _reverses(obj, case, default=False)
-        start = _quantity(obj, "start", Kind.LENGTH, "0 ft")
-        end = _quantity(obj, "end", Kind.LENGTH, None) if "end" in obj else wall_length
+        if "start" not in obj and "end" not in obj:
+            start, end = 0.0, wall_length
+            shown = f"{format_length(start, _system.get())} to {format_length(end, _system.get())}"
+            _assume("", f"the wall's full length, {shown}", "a line load without start and end runs the wall's full length")
+        else:
+            start = _quantity(obj, "start", Kind.LENGTH, "0 ft", "the load starts at the wall's start")
+            if "end" in obj:
+                end = _quantity(obj, "end", Kind.LENGTH)
+            else:
+                end = wall_length
+                _assume("end", format_length(end, _system.get()), "the load runs to the wall's end")
         if not end > start:
             if "end" in obj:
-                raise InputError("end", f'must be beyond start ("{obj.get("start", "0 ft")}"), got "{obj["end"]}"')
+                raise InputError("end", f"must be beyond start ({_show(obj.get('start', '0 ft'))}), got {_show(obj['end'])}")
             raise InputError(
-                "start", f'"{obj.get("start")}" is at or beyond the wall\'s end, where the load ends by default; give an "end"'
+                "start",
+                f'{_show(obj.get("start"))} is at or beyond the wall\'s end, where the load ends by default; give an "end"',
             )
         return LineLoad(
-            case=case, value=_quantity(obj, "value", Kind.LINE_LOAD, None), start=start, end=end, label=label, reverses=reverses
+            case=case, value=_quantity(obj, "value", Kind.LINE_LOAD), start=start, end=end, label=label, reverses=reverses
         )
     if kind == "point":
         case = _case(obj)
         reverses = _reverses(obj, case, default=case.is_lateral_source)
-        value = _quantity(obj, "value", Kind.FORCE, None)
+        value = _quantity(obj, "value", Kind.FORCE)
         _no_upward_dead_load(case, value, obj)
-        return PointLoad(
-            case=case,
-            value=value,
-            at=_quantity(obj, "at", Kind.LENGTH, None),
-            label=label,
-            reverses=reverses,
-        )
-    if kind == "lateral":
-        case = _case(obj, (LoadCase.W, LoadCase.E))
-        return LateralLoad(
-            case=case,
-            value=_quantity(obj, "value", Kind.FORCE, None, non_negative=True),
-            height=_quantity(obj, "height", Kind.LENGTH, None, non_negative=True),
-            label=label,
-        )
-    raise InputError("type", f'expected "line", "point" or "lateral", got {_show(kind)}')
+        return PointLoad(case=case, value=value, at=_quantity(obj, "at", Kind.LENGTH), label=label, reverses=reverses)
+    case = _case(obj, (LoadCase.W, LoadCase.E))
+    return LateralLoad(
+        case=case,
+        value=_quantity(obj, "value", Kind.FORCE, non_negative=True),
+        height=_quantity(obj, "height", Kind.LENGTH, non_negative=True),
+        label=label,
+    )
 
 
 def _no_upward_dead_load(case: LoadCase, value: float, obj: dict[str, Any]) -> None:
     """Dead load acts downward (ASCE 7-16 3.1: the weight of construction); uplift belongs to W or E."""
     if case is LoadCase.D and value < 0.0:
         raise InputError(
-            "value", f'a dead load cannot act upward, got "{obj.get("value")}"; enter uplift as a W or E load (negative value)'
+            "value",
+            f"a dead load cannot act upward, got {_show(obj.get('value'))}; enter uplift as a W or E load (negative value)",
         )
 
 
 def _reverses(obj: dict[str, Any], case: LoadCase, default: bool) -> bool:
     if "reverses" not in obj:
+        if default:
+            _assume("reverses", "true", "a W or E point load moves to its mirror position when the lateral load reverses")
         return default
     value = obj["reverses"]
     if not isinstance(value, bool):
@@ -289,28 +484,39 @@ def _reverses(obj: dict[str, Any], case: LoadCase, default: bool) -> bool:
 
 def _wall(raw: Any, units: str) -> Wall:
     obj = _object(raw, "", required=True)
+    _keys(obj, WALL_KEYS)
     wid = obj.get("id")
     if not isinstance(wid, str) or not wid.strip():
         raise InputError("id", f'expected a wall id such as "A1", got {_show(wid)}')
-    length = _quantity(obj, "length", Kind.LENGTH, None, positive=True)
-    thickness = _quantity(obj, "thickness", Kind.LENGTH, None, positive=True)
+    length = _quantity(obj, "length", Kind.LENGTH, positive=True)
+    thickness = _quantity(obj, "thickness", Kind.LENGTH, positive=True)
     with _scope("footing"):
         f = _object(obj.get("footing"), "", required=True)
+        _keys(f, FOOTING_KEYS)
         footing = StripFooting(
-            width=_quantity(f, "width", Kind.LENGTH, None, positive=True),
-            thickness=_quantity(f, "thickness", Kind.LENGTH, None, positive=True),
-            extension_start=_quantity(f, "extension_start", Kind.LENGTH, "0 ft", non_negative=True),
-            extension_end=_quantity(f, "extension_end", Kind.LENGTH, "0 ft", non_negative=True),
-            cover=_quantity(f, "cover", Kind.LENGTH, "0 in", non_negative=True),
-            unit_weight=_quantity(f, "unit_weight", Kind.UNIT_WEIGHT, "150 pcf", non_negative=True),
-            offset=_quantity(f, "offset", Kind.LENGTH, "0 in"),
+            width=_quantity(f, "width", Kind.LENGTH, positive=True),
+            thickness=_quantity(f, "thickness", Kind.LENGTH, positive=True),
+            extension_start=_quantity(
+                f, "extension_start", Kind.LENGTH, "0 ft", "no extension past the wall's start", non_negative=True
+            ),
+            extension_end=_quantity(
+                f, "extension_end", Kind.LENGTH, "0 ft", "no extension past the wall's end", non_negative=True
+            ),
+            cover=_quantity(f, "cover", Kind.LENGTH, "0 in", "no soil over the footing", non_negative=True),
+            unit_weight=_quantity(f, "unit_weight", Kind.UNIT_WEIGHT, "150 pcf", BASIS_CONCRETE, non_negative=True),
+            offset=_quantity(f, "offset", Kind.LENGTH) if "offset" in f else 0.0,  # not used by the in-plane checks
         )
     with _scope("stem"):
         s = _object(obj.get("stem"), "")
-        stem = Stem(
-            height=_quantity(s, "height", Kind.LENGTH, "0 in", non_negative=True),
-            thickness=_quantity(s, "thickness", Kind.LENGTH, "8 in", positive=True),
-        )
+        _keys(s, STEM_KEYS)
+        stem_height = _quantity(s, "height", Kind.LENGTH, "0 in", "no stem wall", non_negative=True)
+        if stem_height > 0.0:
+            stem_thickness = _quantity(
+                s, "thickness", Kind.LENGTH, "8 in", "a common stem thickness, common practice", positive=True
+            )
+        else:
+            stem_thickness = _quantity(s, "thickness", Kind.LENGTH, "8 in", "", positive=True) if "thickness" in s else 8.0 * INCH
+        stem = Stem(height=stem_height, thickness=stem_thickness)
     supported = stem.thickness if stem.present else thickness
     if footing.width < supported:
         what = "stem" if stem.present else "wall"
@@ -319,9 +525,13 @@ def _wall(raw: Any, units: str) -> Wall:
             f"the footing ({format_length(footing.width, units)}) is narrower than the {what} it carries "
             f"({format_length(supported, units)}); widen the footing or correct the {what} thickness",
         )
-    loads_raw = obj.get("loads", [])
+    if "loads" not in obj:
+        raise InputError("loads", "is missing; a wall needs the loads it carries")
+    loads_raw = obj["loads"]
     if not isinstance(loads_raw, list):
         raise InputError("loads", f"expected a list of loads, got {_show(loads_raw)}")
+    if not loads_raw:
+        raise InputError("loads", "is empty; a wall needs the loads it carries")
     loads = []
     low, high = -footing.extension_start, length + footing.extension_end
     for i, item in enumerate(loads_raw):
@@ -346,14 +556,26 @@ def _wall(raw: Any, units: str) -> Wall:
         loads.append(load)
     with _scope("sizing"):
         z = _object(obj.get("sizing"), "")
-        sizing = SizingBounds(
-            width_min=_quantity(z, "width_min", Kind.LENGTH, "12 in", positive=True),
-            width_max=_quantity(z, "width_max", Kind.LENGTH, "8 ft", positive=True),
-            width_step=_quantity(z, "width_step", Kind.LENGTH, "1 in", positive=True),
-            thickness_min=_quantity(z, "thickness_min", Kind.LENGTH, "12 in", positive=True),
-            thickness_max=_quantity(z, "thickness_max", Kind.LENGTH, "4 ft", positive=True),
-            thickness_step=_quantity(z, "thickness_step", Kind.LENGTH, "1 in", positive=True),
-        )
+        _keys(z, SIZING_KEYS)
+        defaults = {
+            "width_min": "12 in",
+            "width_max": "8 ft",
+            "width_step": "1 in",
+            "thickness_min": "12 in",
+            "thickness_max": "4 ft",
+            "thickness_step": "1 in",
+        }
+        if units == "SI":
+            defaults = {
+                "width_min": "300 mm",
+                "width_max": "2400 mm",
+                "width_step": "25 mm",
+                "thickness_min": "300 mm",
+                "thickness_max": "1200 mm",
+                "thickness_step": "25 mm",
+            }
+        bounds = {key: _quantity(z, key, Kind.LENGTH, defaults[key], BASIS_SIZING, positive=True) for key in SIZING_KEYS}
+        sizing = _sizing_bounds(bounds)
     return Wall(
         id=wid,
         label=_text(obj, "label"),
@@ -366,23 +588,62 @@ def _wall(raw: Any, units: str) -> Wall:
     )
 
 
+def _sizing_bounds(bounds: dict[str, float]) -> SizingBounds:
+    """The sizing grid; when it is too large, the message names the step that makes it so."""
+    try:
+        return SizingBounds(**bounds)
+    except InputError as err:
+        if err.field != "width_step":
+            raise
+        widths = (bounds["width_max"] - bounds["width_min"]) / bounds["width_step"] + 1.0
+        thicknesses = (bounds["thickness_max"] - bounds["thickness_min"]) / bounds["thickness_step"] + 1.0
+        key = "width_step" if widths >= thicknesses else "thickness_step"
+        raise InputError(key, err.problem) from None
+
+
 def _wall_cached(raw: Any, units: str) -> Wall:
     """:func:`_wall`, remembered by the wall's JSON text: the window re-parses the whole project on
-    every edit, and usually only one wall has changed."""
+    every edit, and usually only one wall has changed. Its assumptions are replayed in the scope."""
     try:
         key = json.dumps(raw, sort_keys=True, allow_nan=False)
     except (TypeError, ValueError):
-        return _wall(raw, units)
-    return _wall_from_text(key, units)
+        wall, found = _wall_uncached(raw, units)
+    else:
+        wall, found = _wall_from_text(key, units)
+    for a in found:
+        _assume(a.field, a.value, a.basis)
+    return wall
+
+
+def _wall_uncached(raw: Any, units: str) -> tuple[Wall, tuple[Assumption, ...]]:
+    found: list[Assumption] = []
+    t_assumed, t_path, t_system = _assumed.set(found), _path.set(()), _system.set(units)
+    try:
+        wall = _wall(raw, units)
+    finally:
+        _assumed.reset(t_assumed)
+        _path.reset(t_path)
+        _system.reset(t_system)
+    return wall, tuple(found)
 
 
 @lru_cache(maxsize=1024)
-def _wall_from_text(key: str, units: str) -> Wall:
-    return _wall(json.loads(key), units)
+def _wall_from_text(key: str, units: str) -> tuple[Wall, tuple[Assumption, ...]]:
+    return _wall_uncached(json.loads(key), units)
+
+
+def _has_seismic_loads(raw: Any) -> bool:
+    return (
+        isinstance(raw, dict)
+        and isinstance(raw.get("loads"), list)
+        and any(isinstance(ld, dict) and ld.get("case") == "E" for ld in raw["loads"])
+    )
 
 
 def parse_project(raw: Any) -> Project:
     """Validate a project document (parsed JSON) and build the model.
+
+    Every value taken by default is listed in ``Project.assumptions``.
 
     Raises:
         FormatVersionError: not a Kernline project, or written by a newer version.
@@ -405,28 +666,44 @@ def parse_project(raw: Any) -> Project:
         )
     if version < 1:
         raise FormatVersionError("version", f"expected 1, got {_show(version)}")
-    units = obj.get("units", "US")
-    if units not in ("US", "SI"):
-        raise InputError("units", f'expected "US" or "SI", got {_show(units)}')
-    with _scope("project"):
-        info = _info(obj.get("project"))
-    with _scope("criteria"):
-        criteria = _criteria(obj.get("criteria"))
-    with _scope("soil"):
-        soil = _soil(obj.get("soil"))
-    walls_raw = obj.get("walls")
-    if walls_raw is None:
-        raise InputError("walls", "is missing; a project needs at least one wall")
-    if not isinstance(walls_raw, list):
-        raise InputError("walls", f"expected a list of walls, got {_show(walls_raw)}")
-    if not walls_raw:
-        raise InputError("walls", "is empty; a project needs at least one wall")
-    walls = []
-    for i, w in enumerate(walls_raw):
-        with _scope(f"walls[{i}]"):
-            walls.append(_wall_cached(w, units))
-    with _scope(""):
-        return Project(info=info, units=units, criteria=criteria, soil=soil, walls=tuple(walls))
+    _keys(obj, TOP_KEYS)
+    if "extra" in obj and not isinstance(obj["extra"], dict):
+        raise InputError("extra", f"expected an object {{...}} of your own data, got {_show(obj['extra'])}")
+    found: list[Assumption] = []
+    t_assumed, t_path = _assumed.set(found), _path.set(())
+    try:
+        units = obj.get("units", "US")
+        if units not in ("US", "SI"):
+            raise InputError("units", f'expected "US" or "SI", got {_show(units)}')
+        t_system = _system.set(units)
+        try:
+            if "units" not in obj:
+                _assume("units", "US", "display units (results are the same in either)")
+            walls_raw = obj.get("walls")
+            if walls_raw is None:
+                raise InputError("walls", "is missing; a project needs at least one wall")
+            if not isinstance(walls_raw, list):
+                raise InputError("walls", f"expected a list of walls, got {_show(walls_raw)}")
+            if not walls_raw:
+                raise InputError("walls", "is empty; a project needs at least one wall")
+            seismic = [str(w.get("id")) for w in walls_raw if _has_seismic_loads(w)]
+            with _scope("project"):
+                info = _info(obj.get("project"))
+            with _scope("criteria"):
+                criteria = _criteria(obj.get("criteria"), seismic)
+            with _scope("soil"):
+                soil = _soil(obj.get("soil"), "soil" in obj)
+            walls = []
+            for i, w in enumerate(walls_raw):
+                with _scope(f"walls[{i}]"):
+                    walls.append(_wall_cached(w, units))
+            with _scope(""):
+                return Project(info=info, units=units, criteria=criteria, soil=soil, walls=tuple(walls), assumptions=tuple(found))
+        finally:
+            _system.reset(t_system)
+    finally:
+        _assumed.reset(t_assumed)
+        _path.reset(t_path)
 
 
 @dataclass(frozen=True, slots=True)
@@ -437,24 +714,85 @@ class ProjectDocument:
     project: Project
 
 
-def loads_project(text: str) -> ProjectDocument:
-    """Parse the text of a project file."""
+class _JsonRefused(Exception):
+    """JSON that is valid but not accepted in a project file (NaN, a 200-digit integer)."""
+
+
+class _Duplicated(dict[str, Any]):
+    """An object in which a key appeared twice; ``key`` is the first such key."""
+
+    key: str = ""
+
+
+def _pairs(pairs: list[tuple[str, Any]]) -> dict[str, Any]:
+    out: dict[str, Any] = {}
+    for key, value in pairs:
+        if key in out:
+            marked = _Duplicated(pairs)
+            marked.key = key
+            return marked
+        out[key] = value
+    return out
+
+
+def _int(text: str) -> int:
+    if len(text.lstrip("-")) > MAX_INT_DIGITS:
+        raise _JsonRefused(f"has an integer of {len(text.lstrip('-'))} digits; at most {MAX_INT_DIGITS} are accepted")
+    return int(text)
+
+
+def _constant(name: str) -> Any:
+    raise _JsonRefused(f"has {name}, which is not a number a project file may hold")
+
+
+def decode_json(text: str) -> Any:
+    """Decode a project's JSON text strictly: a byte-order mark is accepted; duplicate keys, NaN and
+    Infinity, integers of more than 100 digits and nesting deeper than 64 levels are refused."""
+    if text.startswith("\ufeff"):
+        text = text[1:]
     try:
-        raw = json.loads(text)
+        raw = json.loads(text, object_pairs_hook=_pairs, parse_int=_int, parse_constant=_constant)
+    except _JsonRefused as why:
+        raise InputError("", f"the file {why}") from None
     except json.JSONDecodeError as err:
         raise InputError("", f"the file is not valid JSON (line {err.lineno}, column {err.colno}: {err.msg})") from None
+    except RecursionError:
+        raise InputError("", f"the file nests objects and lists deeper than {MAX_DEPTH} levels") from None
+    # walk the tree once: the depth, and the path of any object with a duplicate key
+    stack: list[tuple[Any, str, int]] = [(raw, "", 1)]
+    while stack:
+        node, path, depth = stack.pop()
+        if depth > MAX_DEPTH:
+            raise InputError("", f"the file nests objects and lists deeper than {MAX_DEPTH} levels")
+        if isinstance(node, _Duplicated):
+            raise InputError(_join((path, node.key[:40])), "appears twice in one object; keep one of them")
+        if isinstance(node, dict):
+            stack.extend((v, _join((path, str(k)[:40])), depth + 1) for k, v in node.items())
+        elif isinstance(node, list):
+            stack.extend((v, f"{path}[{i}]", depth + 1) for i, v in enumerate(node))
+    return raw
+
+
+def loads_project(text: str) -> ProjectDocument:
+    """Parse the text of a project file."""
+    raw = decode_json(text)
     return ProjectDocument(raw=raw, project=parse_project(raw))
 
 
 def load_project(path: str | os.PathLike[str]) -> ProjectDocument:
-    """Read and validate a project file."""
+    """Read and validate a project file (a FIFO, device or folder is refused without being opened)."""
     p = Path(path)
+    check_input_file(p)
     try:
-        text = p.read_text(encoding="utf-8")
+        data = p.read_bytes()
     except FileNotFoundError:
         raise InputError("", f"{p}: no such file") from None
-    except (OSError, UnicodeDecodeError) as err:
-        raise InputError("", f"{p}: cannot be read ({err})") from None
+    except OSError as err:
+        raise InputError("", f"{p}: cannot be read ({err.strerror or err})") from None
+    try:
+        text = data.decode("utf-8")
+    except UnicodeDecodeError as err:
+        raise InputError("", f"{p}: is not UTF-8 text (byte {err.start}); save the project file as UTF-8") from None
     return loads_project(text)
 
 

@@ -339,15 +339,31 @@ def wall_json(result: WallResult) -> dict[str, Any]:
     }
 
 
-def results_json(results: tuple[WallResult, ...], sizing: dict[str, dict[str, Any]] | None = None) -> dict[str, Any]:
-    """The whole results document, format "kernline-results" version 1."""
+def results_json(
+    results: tuple[WallResult, ...],
+    sizing: dict[str, dict[str, Any]] | None = None,
+    project: Project | None = None,
+) -> dict[str, Any]:
+    """The whole results document, format "kernline-results" version 1.
+
+    With ``project``, the document also lists ``"assumptions"`` (every value taken by default, as
+    ``{"field", "value", "basis"}``) and ``"warnings"`` (legal inputs that are usually mistakes, as
+    ``{"field", "message"}``); both are lists, empty when there are none.
+    """
     walls = []
     for r in results:
         entry = wall_json(r)
         if sizing is not None and r.wall_id in sizing:
             entry["sizing"] = sizing[r.wall_id]
         walls.append(entry)
-    return {"format": "kernline-results", "version": 1, "walls": walls}
+    out: dict[str, Any] = {"format": "kernline-results", "version": 1}
+    if project is not None:
+        from .input_warnings import input_warnings
+
+        out["assumptions"] = [{"field": a.field, "value": a.value, "basis": a.basis} for a in project.assumptions]
+        out["warnings"] = [{"field": w.field, "message": w.message} for w in input_warnings(project, results)]
+    out["walls"] = walls
+    return out
 
 
 __all__ = [

@@ -6,6 +6,8 @@ import math
 from collections.abc import Sequence
 
 from . import CAUTION
+from .errors import one_line
+from .input_warnings import InputWarning
 from .model import ALL_CHECKS, Project
 from .results import Governing, WallResult
 from .sizing import SizingResult
@@ -47,7 +49,7 @@ def check_table(project: Project, results: Sequence[WallResult]) -> str:
         worst = r.worst
         rows.append(
             [
-                r.wall_id,
+                one_line(r.wall_id, 40),
                 footing_text(r.width, r.thickness, r.length, project.units),
                 *[ratio_text(r.governing[c]) for c in ALL_CHECKS],
                 f"{worst.check.value}: {case_text(worst)}",
@@ -71,6 +73,25 @@ def size_table(project: Project, sized: Sequence[SizingResult], results: Sequenc
         )
         note = s.message if s.feasible else s.message + ". " + " ".join(s.suggestions)
         rows.append(
-            [s.wall_id, size, str(s.candidates), *[ratio_text(r.governing[c]) if s.feasible else "" for c in ALL_CHECKS], note]
+            [
+                one_line(s.wall_id, 40),
+                size,
+                str(s.candidates),
+                *[ratio_text(r.governing[c]) if s.feasible else "" for c in ALL_CHECKS],
+                note,
+            ]
         )
     return f"{_table(headers, rows)}\n\n{CAUTION}"
+
+
+def assumptions_text(project: Project) -> str:
+    """The values taken by default, one per line with their basis ("" when every value was entered)."""
+    if not project.assumptions:
+        return ""
+    rows = [[one_line(a.field, 60), one_line(a.value, 40), one_line(a.basis, 100)] for a in project.assumptions]
+    return "Assumed (not in the project file; confirm, or enter the value):\n" + _table(["Field", "Value", "Basis"], rows)
+
+
+def warnings_text(warnings: Sequence[InputWarning]) -> str:
+    """Warnings, one line each, prefixed "warning:" (for stderr)."""
+    return "\n".join(f"warning: {one_line(w.text)}" for w in warnings)

@@ -13,11 +13,11 @@ from __future__ import annotations
 
 import math
 import re
-from collections.abc import Callable
+import unicodedata
 from dataclasses import dataclass
 from enum import Enum
 from functools import lru_cache
-from typing import TYPE_CHECKING, Any
+from typing import TYPE_CHECKING
 
 from .errors import InputError
 from .resources import resource_path
@@ -89,114 +89,208 @@ def registry() -> pint.UnitRegistry:
     return _registry
 
 
-_NUMBER = r"[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?"
-_BARE_NUMBER = re.compile(rf"^\s*({_NUMBER})\s*$")
-# 2'-6", 2' 6", 2', 6", 2'-6 1/2" is not supported (fractions are rare in a project file)
-_UNSIGNED = r"(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?"
-_SIGN = re.compile(r"^\s*([-+])\s*")
-# after one leading sign: 2'-6", 2' 6", 2', 6" (the "-" between feet and inches is a separator)
-_FEET_INCHES = re.compile(rf"""^(?:({_UNSIGNED})\s*')?\s*(?:-\s*)?(?:({_UNSIGNED})\s*")?\s*$""")
-# after one leading sign: "2 ft 6 in", "1 m 250 mm": two or more unsigned number-word pairs, summed
-_COMPOUND_PART = re.compile(rf"\s*({_UNSIGNED})\s*([A-Za-z]+)\s*")
-# pint evaluates powers of numbers ("9**9**9 in" would run for minutes): refuse them, and big exponents
-_RISKY_POWER = re.compile(r"(\d\s*\)?\s*(\*\*|\^))|((\*\*|\^)\s*[-+]?\s*\d{2,})")
-# magnitudes beyond this (in SI) are typing errors, and would overflow products of forces and arms
-MAX_MAGNITUDE = 1e12
-_SIMPLE = re.compile(rf"^\s*({_NUMBER})\s*([A-Za-z_][A-Za-z_0-9*/^ .·]*?)\s*$")
-
-
-def _expected(kind: Kind, text: str) -> InputError:
-    return InputError("", f'expected {kind.info.noun} such as "{kind.info.example}", got "{text}"')
-
-
-# Exact definitions (NIST SP 811, appendix B): 1 in = 0.0254 m, 1 lbf = 4.4482216152605 N.
-_INCH = 0.0254
-_FOOT = 12.0 * _INCH
-_LBF = 4.4482216152605
-_KIP = 1000.0 * _LBF
-
-# The units a structural engineer types most, with their SI factors, so that a run that meets only
-# these never pays for building the pint registry. tests/engine/unit/test_units.py checks every
-# entry against pint. "lb" and "lbs" mean pound-force here, as they do on structural drawings.
-_COMMON_UNITS: dict[str, dict[str, float]] = {
-    "[length]": {
-        "m": 1.0,
-        "mm": 1e-3,
-        "cm": 1e-2,
-        "in": _INCH,
-        "inch": _INCH,
-        "inches": _INCH,
-        "ft": _FOOT,
-        "foot": _FOOT,
-        "feet": _FOOT,
-    },
-    "[force]": {
-        "N": 1.0,
-        "kN": 1e3,
-        "MN": 1e6,
-        "lbf": _LBF,
-        "lb": _LBF,
-        "lbs": _LBF,
-        "kip": _KIP,
-        "kips": _KIP,
-    },
-    "[force] / [length]": {
-        "N/m": 1.0,
-        "kN/m": 1e3,
-        "plf": _LBF / _FOOT,
-        "klf": _KIP / _FOOT,
-        "lbf/ft": _LBF / _FOOT,
-        "lb/ft": _LBF / _FOOT,
-        "kip/ft": _KIP / _FOOT,
-    },
-    "[force] / [length] ** 2": {
-        "Pa": 1.0,
-        "kPa": 1e3,
-        "MPa": 1e6,
-        "psf": _LBF / _FOOT**2,
-        "ksf": _KIP / _FOOT**2,
-        "psi": _LBF / _INCH**2,
-        "ksi": _KIP / _INCH**2,
-        "kN/m^2": 1e3,
-        "kN/m**2": 1e3,
-        "kN/m²": 1e3,
-    },
-    "[force] / [length] ** 3": {
-        "N/m^3": 1.0,
-        "N/m**3": 1.0,
-        "kN/m^3": 1e3,
-        "kN/m**3": 1e3,
-        "kN/m³": 1e3,
-        "pcf": _LBF / _FOOT**3,
-        "kcf": _KIP / _FOOT**3,
-        "psf/ft": _LBF / _FOOT**3,
-        "kPa/m": 1e3,
-        "lbf/ft^3": _LBF / _FOOT**3,
-    },
-    "[force] * [length]": {
-        "N*m": 1.0,
-        "kN*m": 1e3,
-        "kN·m": 1e3,
-        "kip*ft": _KIP * _FOOT,
-        "kip·ft": _KIP * _FOOT,
-        "lbf*ft": _LBF * _FOOT,
-        "lb*ft": _LBF * _FOOT,
-        "ft*kip": _KIP * _FOOT,
-    },
+# Limits of physical sense per kind, in SI: a value beyond one is a typing or unit slip (a length in
+# millimetres typed as metres, a force in N typed as kN), never a footing (common practice).
+LIMITS: dict[Kind, tuple[float, str]] = {
+    Kind.LENGTH: (1000.0, "1 km"),
+    Kind.FORCE: (1e10, "1e10 N"),
+    Kind.LINE_LOAD: (1e10, "1e10 N/m"),
+    Kind.PRESSURE: (1e10, "1e10 Pa"),
+    Kind.UNIT_WEIGHT: (1e7, "1e7 N/m³"),
+    Kind.PRESSURE_GRADIENT: (1e7, "1e7 N/m³"),
+    Kind.MOMENT: (1e13, "1e13 N·m"),
 }
+MAX_TEXT = 100  # characters in one quantity: longer text is a paste gone wrong
+
+# ---- the quantity grammar ---------------------------------------------------------------------
+#
+#   quantity  := [sign] term (term)*          terms of one kind, summed: "2 ft 6 1/2 in"
+#   term      := magnitude unit | magnitude mark ["-"]       2'-6 1/2"   30 1/2 in   1.5e3 lbf
+#   magnitude := decimal | integer "/" integer | integer integer "/" integer
+#   unit      := word [power] ((" / " | " * " | "·") word [power])*    kN/m^3, kip*ft, kN/m³
+#   mark      := ' (feet) | " (inches), also the primes ′ ″
+#
+# A bare magnitude is a number in the field's own unit where the caller gives one (a window field),
+# and is refused elsewhere. Only the unit words reach pint (:func:`unit_factor`), never user text as
+# an expression, so nothing typed is evaluated.
+
+_DECIMAL = re.compile(r"(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)(?:[eE][-+]?[0-9]+)?")
+_WORD = r"[A-Za-z_µμ]+(?:\^[0-9]|\*\*[0-9]|[²³])?"
+_UNIT = re.compile(rf"{_WORD}(?:\s*[/*·]\s*{_WORD})*")
+_SIGNS = {"+": 1.0, "-": -1.0, "−": -1.0}
+_MARKS = {"'": "ft", "′": "ft", '"': "in", "″": "in"}
+# Spellings of pound-force: pint's "lb" is the pound mass; on structural drawings "lb" means lbf.
+_POUND_SPELLINGS = {"lb": "lbf", "lbs": "lbf"}
+# Prefixes (k, M, m ...) belong on SI units only: "kin" or "mft" is a typo, not a kilo-inch.
+_PREFIXABLE = frozenset({"meter", "newton", "pascal", "gram", "second"})
 
 
-@lru_cache(maxsize=256)
-def _unit_factor(unit: str, dimensionality: str) -> float | None:
-    """SI factor of ``unit`` when it has ``dimensionality``; None when it does not or is unknown."""
-    common = _COMMON_UNITS.get(dimensionality, {}).get(unit.replace(" ", ""))
-    if common is not None:
-        return common
-    if any(unit.replace(" ", "") in table for table in _COMMON_UNITS.values()):
-        return None  # a known unit of another dimension: no need to build the registry to say so
+class _Refused(Exception):
+    """Text outside the grammar; the message says what is wrong with it."""
+
+
+@dataclass(frozen=True, slots=True)
+class _Term:
+    magnitude: float
+    unit: str  # a unit expression of words, or "ft"/"in" for the marks
+
+
+def _tokens_of(text: str) -> tuple[float, list[_Term]]:
+    """Split ``text`` into a sign and its terms, or raise :class:`_Refused` saying why."""
+    for ch in text:
+        if unicodedata.category(ch) == "Nd" and not "0" <= ch <= "9":
+            raise _Refused("uses a digit other than 0-9; type the number with the digits 0-9")
+        if unicodedata.category(ch) in ("Cc", "Cf") and ch not in "\t":
+            raise _Refused("contains a control character")
+    pos, n = 0, len(text)
+
+    def skip() -> None:
+        nonlocal pos
+        while pos < n and text[pos].isspace():
+            pos += 1
+
+    skip()
+    sign = 1.0
+    if pos < n and text[pos] in _SIGNS:
+        sign = _SIGNS[text[pos]]
+        pos += 1
+        skip()
+        if pos < n and text[pos] in _SIGNS:
+            raise _Refused("has more than one sign; give one sign before the number")
+    terms: list[_Term] = []
+    while True:
+        skip()
+        if pos >= n:
+            break
+        # the magnitude
+        m = _DECIMAL.match(text, pos)
+        if not m:
+            if text[pos] in _SIGNS:
+                raise _Refused("has a sign inside it; one sign goes before the whole value")
+            u = _UNIT.match(text, pos)
+            if u and u.group(0).lower() in ("nan", "inf", "infinity"):
+                raise _Refused("is not a finite number")
+            if u:
+                if not terms and u.end() == len(text.rstrip()):
+                    raise _Refused("is a unit with no number")
+                raise _Refused("has a unit with no number before it" if terms else "starts with a unit; put the number first")
+            raise _Refused(f'has an unexpected "{text[pos]}"')
+        number_text = m.group(0)
+        pos = m.end()
+        if pos < n and (text[pos] == "." or "0" <= text[pos] <= "9"):
+            raise _Refused(f'has a malformed number "{number_text}{text[pos]}"')
+        magnitude = float(number_text)
+        simple = _fraction_at(text, pos)
+        if simple is not None:  # "1/2": the number just read is the numerator
+            denominator, pos = simple
+            if not number_text.isdigit():
+                raise _Refused(f'has a fraction with a numerator that is not a whole number, "{number_text}/"')
+            if denominator == 0:
+                raise _Refused("divides by zero")
+            magnitude = int(number_text) / denominator
+        else:
+            second = _DECIMAL.match(text, _skip_spaces(text, pos))
+            if second is not None and _skip_spaces(text, pos) > pos:
+                mixed = _fraction_at(text, second.end())
+                if mixed is None:
+                    raise _Refused("has two numbers in a row; give each number its unit")
+                # a mixed number "6 1/2": a whole number, then a proper fraction
+                denominator, end_of_fraction = mixed
+                if not number_text.isdigit() or not second.group(0).isdigit():
+                    raise _Refused("has a mixed number whose parts are not whole numbers")
+                if denominator == 0:
+                    raise _Refused("divides by zero")
+                numerator = int(second.group(0))
+                if numerator >= denominator:
+                    raise _Refused(f'has a mixed number with an improper fraction "{numerator}/{denominator}"')
+                magnitude = int(number_text) + numerator / denominator
+                pos = end_of_fraction
+        skip()
+        # the unit
+        if pos >= n:
+            if terms:
+                raise _Refused("ends with a number that has no unit")
+            return sign, [_Term(magnitude, "")]
+        if text[pos] in _MARKS:
+            unit = _MARKS[text[pos]]
+            pos += 1
+            skip()
+            if unit == "ft" and pos < n and text[pos] in "-−" and _DECIMAL.match(text, _skip_spaces(text, pos + 1)):
+                pos += 1  # 2'-6": the hyphen separates feet from inches
+        else:
+            u = _UNIT.match(text, pos)
+            if not u:
+                if text[pos] in _SIGNS:
+                    raise _Refused("has a sign inside it; one sign goes before the whole value")
+                raise _Refused(f'has an unexpected "{text[pos]}" where a unit should be')
+            unit = re.sub(r"\s+", "", u.group(0))
+            pos = u.end()
+            if pos < n and not text[pos].isspace() and text[pos] not in _MARKS:
+                raise _Refused(f'has an unexpected "{text[pos]}" after the unit "{unit}"')
+        if any(t.unit == unit for t in terms):
+            raise _Refused(f'gives the unit "{unit}" twice')
+        terms.append(_Term(magnitude, unit))
+        skip()
+        if pos < n and _UNIT.match(text, pos) and not _DECIMAL.match(text, pos):
+            raise _Refused("has a unit right after a unit; write a product as kip*ft and give each number one unit")
+    if not terms:
+        raise _Refused("is empty")
+    return sign, terms
+
+
+def _fraction_at(text: str, pos: int) -> tuple[int, int] | None:
+    """At ``pos``, "/ 2" (spaces allowed): the denominator and the position after it, else None."""
+    pos = _skip_spaces(text, pos)
+    if pos >= len(text) or text[pos] != "/":
+        return None
+    m = re.compile(r"[0-9]+").match(text, _skip_spaces(text, pos + 1))
+    if m is None:
+        raise _Refused('has a "/" that is neither a fraction nor part of a unit')
+    end = m.end()
+    if end < len(text) and (text[end] == "." or "0" <= text[end] <= "9"):
+        raise _Refused("has a fraction whose denominator is not a whole number")
+    return int(m.group(0)), end
+
+
+def _skip_spaces(text: str, pos: int) -> int:
+    while pos < len(text) and text[pos].isspace():
+        pos += 1
+    return pos
+
+
+def _show_text(text: str) -> str:
+    """The user's text, quoted, shortened and with control characters escaped, for a message."""
+    shown = "".join(ch if unicodedata.category(ch) not in ("Cc", "Cf") else f"\\x{ord(ch):02x}" for ch in text)
+    return f'"{shown}"' if len(shown) <= 40 else f'"{shown[:37]}..."'
+
+
+@lru_cache(maxsize=512)
+def unit_factor(unit: str, dimensionality: str) -> float | None:
+    """SI value of one ``unit`` when it has ``dimensionality``; None when it is unknown or of another kind.
+
+    pint (the one registry, with Kernline's psf, plf, pcf ... definitions) does every conversion.
+    ``unit`` is a unit expression of the grammar above (words, "/", "*", "·", small powers), never
+    a number or an arbitrary expression.
+    """
+    if not _UNIT.fullmatch(unit):
+        return None
+    words = re.findall(r"[A-Za-z_µμ]+", unit)
+    expr = unit.replace("·", "*").replace("^", "**").replace("²", "**2").replace("³", "**3")
+    for word in words:
+        if word in _POUND_SPELLINGS:
+            expr = re.sub(rf"(?<![A-Za-z_]){word}(?![A-Za-z_])", _POUND_SPELLINGS[word], expr)
     reg = registry()
     try:
-        q = reg.Quantity(1.0, unit.replace("·", "*"))
+        for word in words:
+            spelled = _POUND_SPELLINGS.get(word, word)
+            parses = reg.parse_unit_name(spelled)
+            if not parses:
+                return None
+            prefix, name, _suffix = parses[0]
+            if prefix and name not in _PREFIXABLE:
+                return None
+        units = reg.parse_units(expr)
+        q = reg.Quantity(1.0, units)
     except Exception:
         return None
     if q.dimensionality != reg.get_dimensionality(dimensionality):
@@ -206,111 +300,95 @@ def _unit_factor(unit: str, dimensionality: str) -> float | None:
 
 @lru_cache(maxsize=4096)
 def parse_quantity(text: str, kind: Kind, default_unit: str | None = None) -> float:
-    """Parse text such as "24 in", "600 mm", "2 ft 6 in" or 2'-6" into an SI float.
+    """Parse text such as "24 in", "2 ft 6 1/2 in", 2'-6", "3 1/2 kip" or "1.5e3 lbf" into an SI float.
+
+    The grammar is in this module's comments and the README. Unit names and conversions are pint's
+    (the one registry); exact inch-pound factors per NIST SP 811 appendix B come through pint.
 
     Args:
         text: what the user typed or the file holds.
         kind: the physical kind the field needs; text of another dimension is refused.
-        default_unit: unit for a bare number ("24"); when None a bare number is refused.
+        default_unit: the unit of a bare number ("24"), i.e. the unit shown beside a window field;
+            when None a bare number is refused (the project file always states units).
 
     Returns:
         The value in SI base units (m, N, N/m, Pa, N/m^3, N*m).
 
     Raises:
-        InputError: with an empty field path (the caller's scope adds it) and a message naming what
-            was expected.
+        InputError: with an empty field path (the caller's scope adds it) and a one-line message
+            saying what is wrong and what was expected.
     """
+    info = kind.info
     if not isinstance(text, str):
         raise _expected(kind, str(text))
-    dim = kind.info.dimensionality
-    value: float | None = None
-    bare = _BARE_NUMBER.match(text)
-    if bare:
-        if default_unit is None:
-            raise _expected(kind, text)
-        factor = _unit_factor(default_unit, dim)
+    if len(text) > MAX_TEXT:
+        raise InputError("", f"{_show_text(text)} is too long for one value ({len(text)} characters; at most {MAX_TEXT})")
+    try:
+        sign, terms = _tokens_of(text)
+    except _Refused as why:
+        raise InputError("", f'{_show_text(text)} {why}; expected {info.noun} such as "{info.example}"') from None
+    total = 0.0
+    for term in terms:
+        unit = term.unit or default_unit
+        if unit is None:
+            raise InputError("", f'{_show_text(text)} has no unit; expected {info.noun} such as "{info.example}"')
+        factor = unit_factor(unit, info.dimensionality)
         if factor is None:
-            raise _expected(kind, text)
-        value = float(bare.group(1)) * factor
-    elif kind is Kind.LENGTH and ("'" in text or '"' in text):
-        value = _signed(text, kind, _feet_inches)
-    else:
-        simple = _SIMPLE.match(text)
-        if simple:
-            factor = _unit_factor(simple.group(2).strip(), dim)
-            if factor is not None:
-                value = float(simple.group(1)) * factor
-        if value is None and kind is Kind.LENGTH and len(_COMPOUND_PART.findall(text)) >= 2:
-            value = _signed(text, kind, _compound_length)
-        if value is None:
-            value = _parse_with_pint(text, kind)
+            known = unit_factor(unit, unit_dimensionality(unit) or "") if unit_dimensionality(unit) else None
+            what = f'"{unit}" is not {info.noun}' if known is not None else f'"{unit}" is not a unit Kernline knows'
+            raise InputError("", f'{_show_text(text)}: {what}; expected {info.noun} such as "{info.example}"')
+        if not math.isfinite(term.magnitude):
+            raise InputError("", f"{_show_text(text)} is not a finite number")
+        total += term.magnitude * factor
+    value = sign * total
     if not math.isfinite(value):
-        raise InputError("", f'expected a finite number, got "{text}"')
-    if abs(value) > MAX_MAGNITUDE:
-        raise InputError("", f'"{text}" is far too large; check the number and its unit')
+        raise InputError("", f"{_show_text(text)} is not a finite number")
+    limit, limit_text = LIMITS[kind]
+    if abs(value) > limit:
+        raise InputError(
+            "", f"{_show_text(text)} is beyond {limit_text}, the limit for {info.noun}; check the number and its unit"
+        )
     return value
 
 
-def _signed(text: str, kind: Kind, parse: Callable[[str, Kind], float | None]) -> float:
-    """Apply one leading sign to a compound form; a sign inside it is refused."""
-    sign = 1.0
-    m = _SIGN.match(text)
-    body = text
-    if m:
-        sign = -1.0 if m.group(1) == "-" else 1.0
-        body = text[m.end() :]
-    value = parse(body, kind)
-    if value is None:
-        raise _expected(kind, text)
-    return sign * value
-
-
-def _feet_inches(body: str, kind: Kind) -> float | None:
-    """2'-6", 2' 6", 2', 6" (unsigned): feet and inches, 1 in = 0.0254 m exactly (NIST SP 811)."""
-    m = _FEET_INCHES.match(body)
-    if not m or (m.group(1) is None and m.group(2) is None):
+@lru_cache(maxsize=256)
+def unit_dimensionality(unit: str) -> str | None:
+    """The pint dimensionality of a known unit expression (for messages), or None."""
+    if not _UNIT.fullmatch(unit):
         return None
-    return (float(m.group(1) or 0.0) * 12.0 + float(m.group(2) or 0.0)) * 0.0254
-
-
-def _compound_length(body: str, kind: Kind) -> float | None:
-    """ "2 ft 6 in", "1 m 250 mm" (unsigned parts): the sum of the parts."""
-    parts = _COMPOUND_PART.findall(body)
-    if len(parts) < 2 or "".join(f"{n}{u}" for n, u in parts) != re.sub(r"\s+", "", body):
+    try:
+        reg = registry()
+        expr = unit.replace("·", "*").replace("^", "**").replace("²", "**2").replace("³", "**3")
+        for word, spelled in _POUND_SPELLINGS.items():
+            expr = re.sub(rf"(?<![A-Za-z_]){word}(?![A-Za-z_])", spelled, expr)
+        return str(reg.Quantity(1.0, reg.parse_units(expr)).dimensionality)
+    except Exception:
         return None
-    total = 0.0
-    for number, unit in parts:
-        factor = _unit_factor(unit, kind.info.dimensionality)
-        if factor is None:
-            return None
-        total += float(number) * factor
-    return total
 
 
-def _parse_with_pint(text: str, kind: Kind) -> float:
-    """General pint parse for anything the fast paths above do not cover ("3 kN/m", "1.5 kip/ft")."""
-    if _RISKY_POWER.search(text) or len(text) > 80:
-        raise _expected(kind, text)
-    reg = registry()
-    try:
-        q: Any = reg.parse_expression(text.replace("·", "*"))
-    except Exception:
-        raise _expected(kind, text) from None
-    if not hasattr(q, "dimensionality"):
-        raise _expected(kind, text)
-    if q.dimensionality != reg.get_dimensionality(kind.info.dimensionality):
-        raise _expected(kind, text)
-    try:
-        return float(q.to_base_units().magnitude)
-    except Exception:
-        raise _expected(kind, text) from None
+def stored_text(text: str, kind: Kind, default_unit: str) -> str:
+    """The text to store for what was typed into a field whose unit is ``default_unit``.
+
+    The text is checked with :func:`parse_quantity` (InputError if refused). A bare number ("18",
+    "6 1/2") gets the field's unit written after it, so the file states its units and reads back to
+    the same value; anything else is stored as typed (less outer spaces).
+    """
+    parse_quantity(text, kind, default_unit)
+    _sign, terms = _tokens_of(text)
+    if len(terms) == 1 and not terms[0].unit:
+        return f"{text.strip()} {default_unit}"
+    return text.strip()
+
+
+def _expected(kind: Kind, text: str) -> InputError:
+    return InputError("", f'expected {kind.info.noun} such as "{kind.info.example}", got {_show_text(text)}')
 
 
 @lru_cache(maxsize=64)
 def display_factor(kind: Kind, system: str) -> float:
     """SI value per display unit of ``kind`` in ``system`` (e.g. 47.88 Pa per psf)."""
     unit = kind.info.display_us if system == "US" else kind.info.display_si
-    factor = _unit_factor(unit, kind.info.dimensionality)
+    factor = unit_factor(unit, kind.info.dimensionality)
     assert factor is not None, unit
     return factor
 

@@ -44,7 +44,7 @@ def test_bad_input_exits_2_with_the_field_and_no_traceback(tmp_path):
     path.write_text(json.dumps(raw), encoding="utf-8")
     result = run("check", str(path))
     assert result.returncode == 2
-    assert 'walls[1].footing.width: expected a length such as "24 in", got "24"' in result.stderr
+    assert 'walls[1].footing.width: "24" has no unit; expected a length such as "24 in"' in result.stderr
     assert "Traceback" not in result.stderr + result.stdout
 
 

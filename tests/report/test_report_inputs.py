@@ -127,12 +127,10 @@ def _net_with_increase(raw: dict) -> None:
     raw["criteria"].update(bearing_increase=1.33)
 
 
-def test_wall_without_loads_has_no_demand(demo_document) -> None:
-    """With no loads only the self weight acts: overturning and sliding print "no demand" and pass."""
-    text = render(variant(demo_document, _no_loads), wall_ids=["N1"]).text_of("Wall N1")
-    assert "The wall carries no loads; only the self weight acts." in text
-    assert "Overturning passes: no demand." in text and "Sliding passes: no demand." in text
-    assert "Wall N1 PASSES" in text
+def test_wall_without_loads_is_refused_not_printed(demo_document) -> None:
+    """A wall with no loads is refused when the project is read, so no package shows it passing."""
+    with pytest.raises(InputError, match=r"walls\[0\]\.loads: is empty"):
+        variant(demo_document, _no_loads)
 
 
 def test_resultant_beyond_the_footing_is_no_equilibrium(demo_document) -> None:

@@ -264,7 +264,7 @@ def centred_projects(draw):
     criteria = {
         "combinations": [{"name": "fD + gW", "factors": {"D": draw(st.floats(0.3, 1.5)), "W": draw(st.floats(0.3, 1.5))}}]
     }
-    return _project(criteria, {"unit_weight": "110 pcf"}, wall)
+    return _project(criteria, {"allowable_bearing": "2000 psf", "friction": 0.35, "unit_weight": "110 pcf"}, wall)
 
 
 @FAST
@@ -308,7 +308,7 @@ def test_uplift_beyond_dead_load_has_no_equilibrium(dead_klf, uplift_factor, len
         ],
     }
     criteria = {"combinations": [{"name": "D + W", "factors": {"D": 1.0, "W": 1.0}}]}
-    project = parse_project(_project(criteria, {"unit_weight": "0 pcf"}, wall))
+    project = parse_project(_project(criteria, {"allowable_bearing": "2000 psf", "friction": 0.35, "unit_weight": "0 pcf"}, wall))
     result = check_wall(project, project.walls[0])
     for case in result.cases:
         assert case.vertical <= 1e-9 * abs(dead_klf)

@@ -22,9 +22,9 @@ def make(loads, criteria=None, footing=None, stem=None):
     }
     if stem:
         wall["stem"] = stem
-    raw = {"format": "kernline-project", "version": 1, "walls": [wall]}
-    if criteria:
-        raw["criteria"] = criteria
+    soil = {"allowable_bearing": "2000 psf", "friction": 0.35, "unit_weight": "110 pcf"}
+    raw = {"format": "kernline-project", "version": 1, "soil": soil, "walls": [wall]}
+    raw["criteria"] = criteria or {"sds": 0.0}
     return parse_project(raw)
 
 

@@ -54,7 +54,7 @@ def _raw(combinations: dict, *, width: str = "10 ft", step: str = "0.1 ft") -> d
             "bearing_increase": 1.25,
             "combinations": [{"name": name, "factors": factors, "checks": ["bearing"]} for name, factors in combinations.items()],
         },
-        "soil": {"allowable_bearing": "4 ksf", "unit_weight": "0 pcf"},
+        "soil": {"allowable_bearing": "4 ksf", "friction": 0.35, "unit_weight": "0 pcf"},
         "walls": [
             {
                 "id": "W1",

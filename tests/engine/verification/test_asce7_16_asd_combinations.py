@@ -89,7 +89,7 @@ def _project() -> dict:
         "version": 1,
         "criteria": {"method": "asce7-16-asd", "sds": SDS},
         # self weight off so that V is the applied loads only
-        "soil": {"unit_weight": "0 pcf"},
+        "soil": {"allowable_bearing": "2000 psf", "friction": 0.35, "unit_weight": "0 pcf"},
         "walls": [
             {
                 "id": "C1",

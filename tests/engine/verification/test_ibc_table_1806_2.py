@@ -65,7 +65,7 @@ def _class_5_wall():
         "format": "kernline-project",
         "version": 1,
         "criteria": {"combinations": [{"name": "D + W", "factors": {"D": 1.0, "W": 1.0}}]},
-        "soil": {"friction": 0.0, "cohesion": "130 psf", "unit_weight": "0 pcf"},
+        "soil": {"allowable_bearing": "2000 psf", "friction": 0.0, "cohesion": "130 psf", "unit_weight": "0 pcf"},
         "walls": [
             {
                 "id": "K5",
@@ -94,7 +94,7 @@ def _class_4_wall():
         "format": "kernline-project",
         "version": 1,
         "criteria": {"combinations": [{"name": "D + W", "factors": {"D": 1.0, "W": 1.0}}]},
-        "soil": {"friction": 0.25, "passive": "150 pcf", "unit_weight": "0 pcf"},
+        "soil": {"allowable_bearing": "2000 psf", "friction": 0.25, "passive": "150 pcf", "unit_weight": "0 pcf"},
         "walls": [
             {
                 "id": "K4",

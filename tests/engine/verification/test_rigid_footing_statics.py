@@ -27,7 +27,7 @@ def _case(shear_kip: float, direction: str = "+"):
         "format": "kernline-project",
         "version": 1,
         "criteria": {"combinations": [{"name": "D + W", "factors": {"D": 1.0, "W": 1.0}}]},
-        "soil": {"unit_weight": "0 pcf"},
+        "soil": {"allowable_bearing": "2000 psf", "friction": 0.35, "unit_weight": "0 pcf"},
         "walls": [
             {
                 "id": "R1",

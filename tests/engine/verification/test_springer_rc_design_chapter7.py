@@ -36,7 +36,7 @@ def _problem_7_2():
         "version": 1,
         "units": "SI",
         "criteria": {"combinations": [{"name": "1.2D + 1.6L", "factors": {"D": 1.2, "L": 1.6}, "checks": ["bearing"]}]},
-        "soil": {"allowable_bearing": "100 kPa", "unit_weight": "0 kN/m^3"},
+        "soil": {"allowable_bearing": "100 kPa", "friction": 0.35, "unit_weight": "0 kN/m^3"},
         "walls": [
             {
                 "id": "P72",
@@ -82,7 +82,7 @@ def _problem_7_3(side_ft: float):
         "format": "kernline-project",
         "version": 1,
         "criteria": {"combinations": [{"name": "D + W", "factors": {"D": 1.0, "W": 1.0}, "checks": ["bearing"]}]},
-        "soil": {"allowable_bearing": "4 ksf", "unit_weight": "0 pcf"},
+        "soil": {"allowable_bearing": "4 ksf", "friction": 0.35, "unit_weight": "0 pcf"},
         "walls": [
             {
                 "id": "P73",

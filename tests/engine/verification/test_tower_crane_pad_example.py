@@ -27,7 +27,7 @@ def _raw() -> dict:
         "version": 1,
         "units": "SI",
         "criteria": {"combinations": [{"name": "D + W", "factors": {"D": 1.0, "W": 1.0}}]},
-        "soil": {"allowable_bearing": "200 kPa", "unit_weight": "0 kN/m^3"},
+        "soil": {"allowable_bearing": "200 kPa", "friction": 0.35, "unit_weight": "0 kN/m^3"},
         "walls": [
             {
                 "id": "TC",
