@@ -4,8 +4,15 @@
 ``report`` and ``schedule`` run headless and never import Qt, so they start fast and run on a server.
 
 Exit codes: 0 every wall passes (or the job was done), 1 a check fails or a wall cannot be sized,
-2 bad input (a message on stderr names the field), 3 an internal error (no traceback unless
-``KERNLINE_DEBUG=1``).
+2 bad input (a message on stderr names the field or the path), 3 an internal error (no traceback
+unless ``KERNLINE_DEBUG=1``), 130 interrupted (Ctrl+C), 141 standard output was closed early.
+
+Paths are checked before any work: the project FILE must be a regular file (a folder, a named pipe
+or a device is refused at once, without reading it); ``-o OUT`` must not be the project file under
+any spelling (``./x/../p.kernline``, a symbolic or hard link to it), a folder, a device or a named
+pipe, a read-only file, or a file in a missing or read-only folder. An earlier PDF or CSV is
+overwritten. ``size --write`` checks that FILE may be written before it sizes anything, and a
+refused command leaves FILE as it was.
 """
 
 from __future__ import annotations
@@ -19,8 +26,11 @@ from pathlib import Path
 
 from engine import CAUTION, __version__
 from engine.errors import EngineError, InputError
+from engine.file_safety import FilePathError, check_input_file, check_output_path, check_writable
 
 EXIT_OK, EXIT_FAIL, EXIT_INPUT, EXIT_INTERNAL = 0, 1, 2, 3
+EXIT_INTERRUPTED = 130  # 128 + SIGINT, what a shell reports for Ctrl+C
+EXIT_CLOSED_OUTPUT = 141  # 128 + SIGPIPE, what a shell reports for a program whose output pipe closed
 
 
 def _parser() -> argparse.ArgumentParser:
@@ -58,10 +68,26 @@ def _parser() -> argparse.ArgumentParser:
 
 
 def main(argv: Sequence[str] | None = None) -> int:
-    """Run the command; return its exit code."""
+    """Run the command; return its exit code.
+
+    A standard output closed before everything was printed (``kernline check --json FILE | head -1``)
+    ends the command quietly with exit code 141, the status a shell reports for a program stopped by
+    SIGPIPE, so ``set -o pipefail`` scripts see what they see for any other tool. Standard output is
+    then pointed at the null device, as the Python documentation recommends (library reference,
+    ``signal`` module, "Note on SIGPIPE"), so that the flush at exit raises nothing. A file the
+    command was writing is not affected: it is written completely or not at all.
+    """
     args = _parser().parse_args(argv)
     try:
-        return _dispatch(args)
+        code = _dispatch(args)
+        sys.stdout.flush()  # a closed pipe shows here, not in the interpreter's flush at exit
+        return code
+    except BrokenPipeError:
+        _silence_stdout()
+        return EXIT_CLOSED_OUTPUT
+    except FilePathError as err:  # names its own path: the project file, or the output
+        print(f"kernline: {err.message}", file=sys.stderr)
+        return EXIT_INPUT
     except InputError as err:
         where = _where(args)
         print(f"kernline: {'' if err.message.startswith(where) else where}{err.message}", file=sys.stderr)
@@ -70,12 +96,22 @@ def main(argv: Sequence[str] | None = None) -> int:
         print(f"kernline: {err}", file=sys.stderr)
         return EXIT_INPUT
     except KeyboardInterrupt:
-        return 130
+        return EXIT_INTERRUPTED
     except Exception as err:  # never a traceback for the user
         if os.environ.get("KERNLINE_DEBUG"):
             raise
         print(f"kernline: internal error: {type(err).__name__}: {err} (set KERNLINE_DEBUG=1 for details)", file=sys.stderr)
         return EXIT_INTERNAL
+
+
+def _silence_stdout() -> None:
+    """Point standard output at the null device (after its reader went away)."""
+    try:
+        devnull = os.open(os.devnull, os.O_WRONLY)
+        os.dup2(devnull, sys.stdout.fileno())
+        os.close(devnull)
+    except (OSError, ValueError):  # no file descriptor (a test's captured stdout): nothing to flush
+        pass
 
 
 def _where(args: argparse.Namespace) -> str:
@@ -105,8 +141,8 @@ def _dispatch(args: argparse.Namespace) -> int:
 
 
 def _window(path: str | None, demo: bool) -> int:
-    if path is not None and not Path(path).is_file():
-        raise InputError("", f"{path}: no such file")
+    if path is not None:
+        check_input_file(path)
     if _no_display():
         print(
             "kernline: no display to open the window on (DISPLAY and WAYLAND_DISPLAY are not set). "
@@ -134,7 +170,7 @@ def _no_display() -> bool:
 
 
 def _save_demo(path: str) -> int:
-    from engine.project_file import atomic_write_text
+    from engine.file_safety import atomic_write_text
     from engine.resources import resource_path
 
     text = resource_path("demo.kernline").read_text(encoding="utf-8")
@@ -148,6 +184,7 @@ def _check(path: str, as_json: bool) -> int:
     from engine.results import check_project, results_json
     from engine.summary import check_table
 
+    check_input_file(path)
     doc = load_project(path)
     results = check_project(doc.project)
     if as_json:
@@ -165,6 +202,9 @@ def _size(path: str, as_json: bool, write: bool) -> int:
     from engine.sizing import size_footing
     from engine.summary import size_table
 
+    check_input_file(path)
+    if write:  # before the sizing, which takes a while: a file that cannot be written is said at once
+        check_writable(path)
     doc = load_project(path)
     project = doc.project
     sized = []
@@ -175,16 +215,19 @@ def _size(path: str, as_json: bool, write: bool) -> int:
         if s.feasible:
             wall = replace(wall, footing=replace(wall.footing, width=s.width, thickness=s.thickness))
         results.append(check_wall(project, wall))
-    if as_json:
-        print(json.dumps(results_json(tuple(results), {s.wall_id: s.as_json() for s in sized}), indent=2, allow_nan=False))
-    else:
-        print(size_table(project, sized, results))
-    if write:
+    written: int | None = None
+    if write:  # written before anything is printed, so a closed output pipe cannot stop the write
         sizes = {
             s.wall_id: (s.width, s.thickness) for s in sized if s.feasible and s.width is not None and s.thickness is not None
         }
         save_project(path, with_footing_sizes(doc.raw, sizes, project.units))
-        print(f"wrote {len(sizes)} footing size(s) to {path}", file=sys.stderr if as_json else sys.stdout)
+        written = len(sizes)
+    if as_json:
+        print(json.dumps(results_json(tuple(results), {s.wall_id: s.as_json() for s in sized}), indent=2, allow_nan=False))
+    else:
+        print(size_table(project, sized, results))
+    if written is not None:
+        print(f"wrote {written} footing size(s) to {path}", file=sys.stderr if as_json else sys.stdout)
     return EXIT_OK if all(s.feasible for s in sized) else EXIT_FAIL
 
 
@@ -196,6 +239,8 @@ def _report(path: str, output: str, walls: str | None) -> int:
         return EXIT_INTERNAL
     from engine.project_file import load_project
 
+    check_input_file(path)
+    check_output_path(output, inputs=[path])
     doc = load_project(path)
     ids = [w.strip() for w in walls.split(",")] if walls else None
     write_report(doc, output, wall_ids=ids)
@@ -211,6 +256,8 @@ def _schedule(path: str, output: str) -> int:
         return EXIT_INTERNAL
     from engine.project_file import load_project
 
+    check_input_file(path)
+    check_output_path(output, inputs=[path])
     doc = load_project(path)
     write_schedule(doc.project, output)
     print(f"wrote {output}")
