@@ -1,4 +1,18 @@
-"""The footing schedule: one row per wall (size, governing ratios, verdict), as rows or a CSV file."""
+"""The footing schedule: one row per wall (size, governing ratios, verdict), as rows or a CSV file.
+
+The CSV file is meant to be opened in a spreadsheet program:
+
+- UTF-8 with a byte-order mark (``utf-8-sig``), so spreadsheet programs that otherwise guess a legacy
+  code page read unit symbols and accented labels as written (common practice);
+- rows end in CR LF, the csv module's default and RFC 4180's line break; a cell holding a line break
+  or a comma is quoted;
+- no cell can run as a formula: a cell that begins with ``=``, ``+``, ``-``, ``@``, a tab or a carriage
+  return gets a leading apostrophe, which spreadsheet programs read as "this is text" (OWASP, "CSV
+  Injection", https://owasp.org/www-community/attacks/CSV_Injection). The rule is applied to every
+  cell, but a cell that is a plain decimal number (``-0.35``) is left as it is, so a negative number
+  stays a number; the schedule's own numbers are ratios (not negative in practice) and lengths, which
+  are written with their unit (``24 in``) and so are text.
+"""
 
 from __future__ import annotations
 
@@ -6,12 +20,30 @@ import csv
 import io
 import math
 import os
+import re
 from collections.abc import Sequence
 
+from .file_safety import atomic_write_text
 from .model import ALL_CHECKS, Project
-from .project_file import atomic_write_text
 from .results import WallResult, check_project
 from .units import format_length
+
+CSV_ENCODING = "utf-8-sig"
+FORMULA_STARTS = ("=", "+", "-", "@", "\t", "\r")
+"""First characters that make a spreadsheet read a cell as a formula (OWASP, "CSV Injection")."""
+
+_PLAIN_NUMBER = re.compile(r"-?[0-9]+(\.[0-9]+)?")
+
+
+def guard_cell(cell: str) -> str:
+    """``cell`` as written to the CSV file: with a leading apostrophe if a spreadsheet would run it.
+
+    A plain decimal number (``-12``, ``-0.35``) is not guarded: a spreadsheet reads it as the number
+    it is, and an apostrophe would turn it into text.
+    """
+    if cell.startswith(FORMULA_STARTS) and not _PLAIN_NUMBER.fullmatch(cell):
+        return "'" + cell
+    return cell
 
 
 def schedule_headers(units: str) -> list[str]:
@@ -50,17 +82,19 @@ def schedule_rows(project: Project, results: Sequence[WallResult]) -> list[list[
 
 
 def schedule_csv(project: Project, results: Sequence[WallResult] | None = None) -> str:
-    """The schedule as CSV text (header row first)."""
+    """The schedule as CSV text (header row first, CR LF line ends, every cell guarded by :func:`guard_cell`)."""
     results = check_project(project) if results is None else results
-    buffer = io.StringIO()
-    writer = csv.writer(buffer, lineterminator="\n")
-    writer.writerow(schedule_headers(project.units))
-    writer.writerows(schedule_rows(project, results))
+    buffer = io.StringIO(newline="")
+    writer = csv.writer(buffer)  # the default dialect: "\r\n" line ends, quotes where a cell needs them
+    for row in [schedule_headers(project.units), *schedule_rows(project, results)]:
+        writer.writerow([guard_cell(cell) for cell in row])
     return buffer.getvalue()
 
 
 def write_schedule(project: Project, path: str | os.PathLike[str], results: Sequence[WallResult] | None = None) -> None:
-    """Write the schedule CSV atomically."""
-    from pathlib import Path
+    """Write the schedule CSV atomically, in UTF-8 with a byte-order mark (:data:`CSV_ENCODING`).
 
-    atomic_write_text(Path(path), schedule_csv(project, results))
+    Raises:
+        FilePathError: ``path`` cannot be written (see :func:`engine.file_safety.atomic_write_bytes`).
+    """
+    atomic_write_text(path, schedule_csv(project, results), encoding=CSV_ENCODING)
