@@ -438,6 +438,30 @@ def _clean(text: str) -> str:
     return "".join(ch for ch in text if ch in "\n\t" or ord(ch) >= 32 and ord(ch) != 127)
 
 
+# Longest user text printed whole in a heading, a contents line or a table cell; longer text is cut
+# short there with an ellipsis and printed in full, wrapped, in the list of inputs it belongs to.
+LABEL_LIMIT = 80  # wall and load labels (at most seven lines in the schedule's label column)
+INFO_LIMIT = 120  # project name, number, client, address and engineer on the cover
+ELLIPSIS = "…"
+
+
+def brief(text: str, limit: int = LABEL_LIMIT) -> str:
+    """``text`` cut to at most ``limit`` characters, ending in an ellipsis when it was longer."""
+    if len(text) <= limit:
+        return text
+    return text[: limit - 1].rstrip() + ELLIPSIS
+
+
+def _is_long(text: str, limit: int = LABEL_LIMIT) -> bool:
+    return len(text) > limit
+
+
+def wall_title(wall: Wall) -> str:
+    """The heading of a wall's sheet, "Wall N1: North exterior wall", the label cut short by :func:`brief`."""
+    label = _clean(wall.label)
+    return f"Wall {wall.id}" + (f": {brief(label)}" if label.strip() else "")
+
+
 _CHECK_WORD = {Check.OVERTURNING: "overturning", Check.SLIDING: "sliding", Check.BEARING: "bearing"}
 _CHECK_TITLE = {Check.OVERTURNING: "Overturning", Check.SLIDING: "Sliding", Check.BEARING: "Soil bearing"}
 _CHECK_RATIO = {
@@ -553,8 +577,9 @@ def build_package(
     for r in reports:
         sections.append(_appendix(project, r, fmt))
     for r in reports:
-        name = f"Wall {r.wall.id}" + (f": {_clean(r.wall.label)}" if r.wall.label.strip() else "")
-        entries.append(ContentsEntry(name, (("sheet", f"wall:{r.wall.id}"), ("all cases: sheet", f"appendix:{r.wall.id}"))))
+        entries.append(
+            ContentsEntry(wall_title(r.wall), (("sheet", f"wall:{r.wall.id}"), ("all cases: sheet", f"appendix:{r.wall.id}")))
+        )
     if reports:
         entries.append(
             ContentsEntry(
@@ -603,6 +628,13 @@ def _cover(project: Project, reports: Sequence[WallReport], title: TitleBlock, c
             if len(reports) > 1
             else "The wall passes every check on its current footing.",
         )
+    user_info = (  # cut short in the key-value list when long, and then printed in full under it
+        ("Project", title.project_name),
+        ("Project number", _clean(info.number) or "—"),
+        ("Client", _clean(info.client) or "—"),
+        ("Site address", _clean(info.address) or "—"),
+        ("Engineer", _clean(info.engineer) or "—"),
+    )
     blocks: list[Block] = [
         Heading("Calculation package"),
         Para(
@@ -612,16 +644,13 @@ def _cover(project: Project, reports: Sequence[WallReport], title: TitleBlock, c
         Heading("Project information", 2),
         KeyValues(
             (
-                ("Project", plain(title.project_name)),
-                ("Project number", plain(_clean(info.number) or "—")),
-                ("Client", plain(_clean(info.client) or "—")),
-                ("Site address", plain(_clean(info.address) or "—")),
-                ("Engineer", plain(_clean(info.engineer) or "—")),
+                *((name, plain(brief(value, INFO_LIMIT))) for name, value in user_info),
                 ("Display units", "US customary (ft, in, kip, psf)" if project.units == "US" else "SI (m, kN, kPa)"),
                 ("Prepared with", f"{title.program} (program name and version; every input is printed in this package)"),
             ),
             columns=1,
         ),
+        *(Para(plain(f"{name} in full: {value}")) for name, value in user_info if _is_long(value, INFO_LIMIT)),
         Para(scope),
         verdict,
         Para(CAUTION, "caution"),
@@ -860,7 +889,7 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
     fail_rows = []
     for k, (r, row) in enumerate(zip(reports, rows_in, strict=True)):
         # schedule columns: wall, label, wall length, B, D, L, then (ratio, required, case) per check, result
-        cells: list[Cell] = [plain(row[0]), plain(row[1]), f"{row[3]} × {row[4]} × {row[5]}"]
+        cells: list[Cell] = [plain(row[0]), plain(brief(_clean(row[1]))), f"{row[3]} × {row[4]} × {row[5]}"]
         for j, check in enumerate(ALL_CHECKS):
             ratio, required = row[6 + 3 * j : 8 + 3 * j]
             g = r.result.governing[check]
@@ -934,8 +963,8 @@ def _same_size(wall: Wall, sizing: SizingResult) -> bool:
 
 def _wall_section(project: Project, report: WallReport, fmt: _Fmt) -> Section:
     wall, result = report.wall, report.result
-    title = f"Wall {wall.id}" + (f": {_clean(wall.label)}" if wall.label.strip() else "")
-    blocks: list[Block] = [Heading(plain(_clean(title))), _wall_verdict(result)]
+    title = wall_title(wall)
+    blocks: list[Block] = [Heading(plain(title)), _wall_verdict(result)]
     blocks.append(
         DrawingRow(
             (
@@ -986,7 +1015,11 @@ def _inputs(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list
         ),
         (formula("Soil γ_{s}"), fmt.unit_weight(project.soil.unit_weight)),
     ]
-    return [Heading("Inputs", 2), KeyValues(tuple(pairs), columns=2)]
+    blocks: list[Block] = [Heading("Inputs", 2), KeyValues(tuple(pairs), columns=2)]
+    label = _clean(wall.label)
+    if _is_long(label):  # cut short in the headings and the schedule: here in full
+        blocks.append(Para(plain(f"Wall label in full: {label}")))
+    return blocks
 
 
 def _load_position(load: LineLoad | PointLoad | LateralLoad, fmt: _Fmt) -> str:
@@ -1000,6 +1033,7 @@ def _load_position(load: LineLoad | PointLoad | LateralLoad, fmt: _Fmt) -> str:
 def _loads(wall: Wall, fmt: _Fmt) -> list[Block]:
     verticals = iter(vertical_resultants(wall))
     rows: list[tuple[Cell, ...]] = []
+    long_labels: list[tuple[int, str]] = []
     for i, load in enumerate(wall.loads, start=1):
         if isinstance(load, LateralLoad):
             kind, value, resultant, where = "lateral", fmt.force(load.value), fmt.force(load.value), "—"
@@ -1011,10 +1045,14 @@ def _loads(wall: Wall, fmt: _Fmt) -> list[Block]:
             where = fmt.length(v.x)
             if load.reverses:
                 where += f" (−: {fmt.length(v.x_reversed)})"
-        label = _clean(load.label) + (" [reverses]" if getattr(load, "reverses", False) else "")
+        label = _clean(load.label)
+        if _is_long(label):
+            long_labels.append((i, label))
+        label = brief(label) + (" [reverses]" if getattr(load, "reverses", False) else "")
         rows.append((str(i), kind, load.case.value, value, _load_position(load, fmt), resultant, where, plain(label)))
     if not rows:
         return [Heading("Loads", 2), Para("The wall carries no loads; only the self weight acts.")]
+    in_full: list[Block] = [Para(plain(f"Label of load {i} in full: {label}"), "small") for i, label in long_labels]
     return [
         Heading("Loads (as entered; positions from the wall's start end)", 2),
         Table(
@@ -1024,6 +1062,7 @@ def _loads(wall: Wall, fmt: _Fmt) -> list[Block]:
             align="CLCRLRLL",
             font_size=7.0,
         ),
+        *in_full,
         Para(
             formula(
                 "Resultant of a line load w from s_{1} to s_{2}: P = w (s_{2} − s_{1}) at its mid-point (Hibbeler 4.9). "

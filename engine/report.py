@@ -17,7 +17,6 @@ from __future__ import annotations
 
 import io
 import os
-import tempfile
 from collections.abc import Sequence
 from dataclasses import dataclass, replace
 from functools import lru_cache
@@ -52,7 +51,7 @@ from .calc_package import (
     formula,
     plain,
 )
-from .errors import InputError
+from .file_safety import atomic_write_bytes, check_writable
 from .resources import resource_path
 
 if TYPE_CHECKING:  # pragma: no cover
@@ -194,6 +193,8 @@ def _spans(value: Cell, bold: bool = False, color: str = "") -> list[Span]:
 
 
 _WIDTHS: dict[tuple[str, str, float], float] = {}
+_CHAR_WIDTHS: dict[tuple[str, float], dict[str, float]] = {}
+_ELLIPSIS = "…"
 
 
 def _width(text: str, font: str, size: float) -> float:
@@ -206,6 +207,82 @@ def _width(text: str, font: str, size: float) -> float:
         if len(_WIDTHS) < 200_000:
             _WIDTHS[key] = w
     return w
+
+
+def _char_widths(text: str, font: str, size: float) -> list[float]:
+    """The width of each character of ``text``; a string's width is their sum (reportlab applies no
+    kerning), so prefixes are measured by adding up instead of measuring each prefix again."""
+    from reportlab.pdfbase.pdfmetrics import stringWidth
+
+    table = _CHAR_WIDTHS.setdefault((font, size), {})
+    out = []
+    for ch in text:
+        w = table.get(ch)
+        if w is None:
+            w = table[ch] = stringWidth(ch, font, size)
+        out.append(w)
+    return out
+
+
+def _break_word(word: str, font: str, size: float, first: float, rest: float) -> list[str]:
+    """Cut a word wider than a line into pieces: the first fills ``first`` points, the others ``rest``.
+
+    Each piece is the longest that fits (at least one character); the last piece is what is left.
+    One pass over the word's character widths, so the time grows with the word's length, not its square.
+    """
+    pieces: list[str] = []
+    start, x, avail = 0, 0.0, first
+    for i, w in enumerate(_char_widths(word, font, size)):
+        if x + w > avail and i > start:
+            pieces.append(word[start:i])
+            start, x, avail = i, 0.0, rest
+        x += w
+    pieces.append(word[start:])
+    return pieces
+
+
+def _clip(text: str, font: str, size: float, width: float) -> str:
+    """``text`` cut short with an ellipsis so that it fits ``width`` (unchanged if it fits)."""
+    if _width(text, font, size) <= width:
+        return text
+    room = width - _width(_ELLIPSIS, font, size)
+    x, k = 0.0, 0  # k: characters kept
+    for w in _char_widths(text, font, size):
+        if x + w > room:
+            break
+        x += w
+        k += 1
+    return text[:k].rstrip() + _ELLIPSIS
+
+
+def _wrap_plain(text: str, font: str, size: float, width: float, widest_word: float = 0.0) -> list[str]:
+    """Lines of plain text no wider than ``width``: breaks at newlines and spaces. Linear in the length of the text.
+
+    A word wider than ``widest_word`` (default ``width``) is cut into pieces ``width`` wide; a narrower
+    one that is still wider than ``width`` keeps a line of its own (a short word in a narrow table
+    column may run into the cell's padding rather than be split).
+    """
+    widest_word = max(widest_word, width)
+    space = _width(" ", font, size)
+    lines: list[str] = []
+    for hard in text.split("\n"):
+        words: list[str] = []
+        x = 0.0
+        for word in hard.split():
+            w = _width(word, font, size)
+            if words and x + space + w <= width:
+                words.append(word)
+                x += space + w
+                continue
+            if words:
+                lines.append(" ".join(words))
+            if w > widest_word and len(word) > 1:
+                *full, word = _break_word(word, font, size, width, width)
+                lines += full
+                w = _width(word, font, size)
+            words, x = [word], w
+        lines.append(" ".join(words))
+    return lines
 
 
 # A wrapped line: its x offset and its segments (text, font, size, rise, colour) drawn in order.
@@ -249,14 +326,12 @@ def _layout(lines: list[list[Span]], style: TextStyle, fonts: _Fonts, text: _Tex
                 indent = style.left_indent
                 avail = max(width - indent, 20.0)
                 line, x, gap = [], 0.0, 0.0
-            while not line and w > avail and len(word) > 1:  # a single word wider than the line
-                k = len(word) - 1
-                while k > 1 and _width(word[:k], font, size) > avail:
-                    k -= 1
-                out.append((indent, [(word[:k], font, size, rise, color)]))
-                indent = style.left_indent
-                avail = max(width - indent, 20.0)
-                word = word[k:]
+            if not line and w > avail and len(word) > 1:  # a single word wider than the line: cut it
+                rest = max(width - style.left_indent, 20.0)
+                *full, word = _break_word(word, font, size, avail, rest)
+                for cut in full:
+                    out.append((indent, [(cut, font, size, rise, color)]))
+                    indent, avail = style.left_indent, rest
                 w = _width(word, font, size)
             piece = (" " if gap else "") + word
             if line and line[-1][1:] == (font, size, rise, color):
@@ -329,6 +404,8 @@ class GridSpec:
 
 # A table split across sheets leaves at least this many rows on each side (widow and orphan rows).
 _MIN_ROWS = 2
+# Lines of plain text a table cell shows at most; longer text ends in an ellipsis.
+_CELL_MAX_LINES = 8
 
 
 @lru_cache(maxsize=1)
@@ -853,9 +930,12 @@ class _Builder:
         return self.classes["Grid"](spec, self.fonts, rows, frozenset())
 
     def _cell(self, value: Cell, spec: GridSpec, bold: bool, j: int) -> Any:
-        """Lines of text wrapped to the column, or rich text where the cell has subscripts or bold runs."""
-        from reportlab.lib.utils import simpleSplit
+        """Lines of text wrapped to the column, or rich text where the cell has subscripts or bold runs.
 
+        Plain text longer than :data:`_CELL_MAX_LINES` lines is cut short with an ellipsis: a row
+        never outgrows a sheet. The package prints such text in full elsewhere (a wall's label under
+        its inputs, see :mod:`engine.calc_package`).
+        """
         if not isinstance(value, str) and all(not r.sub and not r.bold for r in value):
             value = "".join(r.text for r in value)
         label = j in spec.label_columns
@@ -868,7 +948,12 @@ class _Builder:
                 if _width(part, font, size) <= width:
                     lines.append(part)
                 else:
-                    lines += simpleSplit(part, font, size, width) or [""]
+                    lines += _wrap_plain(part, font, size, width, widest_word=spec.widths[j])
+                if len(lines) > _CELL_MAX_LINES:
+                    break
+            if len(lines) > _CELL_MAX_LINES:
+                lines = lines[:_CELL_MAX_LINES]
+                lines[-1] = _clip(lines[-1] + _ELLIPSIS, font, size, width)
             return lines
         style = TextStyle(size=size, leading=spec.leading, bold=bold, space_after=0.0, color="grey" if label else "ink")
         return self.rich(value, style)
@@ -952,15 +1037,9 @@ def _canvas_class(package: Package, fonts: _Fonts) -> type:
 
 def _fit(c: Any, text: str, font: str, size: float, width: float, minimum: float = 5.5) -> tuple[str, float]:
     """Shrink the font (down to ``minimum``) and then shorten the text so that it fits ``width``."""
-    from reportlab.pdfbase.pdfmetrics import stringWidth
-
-    while size > minimum and stringWidth(text, font, size) > width:
+    while size > minimum and _width(text, font, size) > width:
         size -= 0.5
-    if stringWidth(text, font, size) <= width:
-        return text, size
-    while text and stringWidth(text + "…", font, size) > width:
-        text = text[:-1]
-    return text + "…", size
+    return _clip(text, font, size, width), size
 
 
 _TITLE_FORM = "klTitleBlock"
@@ -1143,46 +1222,19 @@ def render_report(project: Any, wall_ids: Sequence[str] | str | None = None, **o
 def write_report(
     project: Any, output: str | os.PathLike[str], wall_ids: Sequence[str] | str | None = None, **options: Any
 ) -> None:
-    """Write the calculation package to ``output`` atomically (temp file in the same folder, fsync, rename).
+    """Write the calculation package to ``output`` atomically (see :mod:`engine.file_safety`).
+
+    The output path is checked before the package is laid out, so a path that cannot be written is
+    refused at once.
 
     Raises:
-        InputError: an unknown wall id, or an output path that cannot be written (the message says why).
+        InputError: an unknown wall id.
+        FilePathError: an output path that cannot be written (a folder, a device, a read-only file,
+            a missing or read-only folder; the message says which).
     """
-    path = Path(output)
-    folder = path.resolve().parent
-    if not folder.is_dir():
-        raise InputError("output", f"{folder}: no such folder")
-    if path.is_dir():
-        raise InputError("output", f"{path} is a folder; give a file name such as {path / 'package.pdf'}")
+    check_writable(output)
     data = render_report(project, wall_ids, **options)
-    try:
-        fd, tmp = tempfile.mkstemp(prefix=f".{path.name}.", suffix=".tmp", dir=folder)
-    except OSError as err:
-        raise InputError("output", f"{folder}: cannot write here ({err.strerror or err})") from None
-    try:
-        with os.fdopen(fd, "wb") as fh:
-            fh.write(data)
-            fh.flush()
-            os.fsync(fh.fileno())
-        if path.exists():
-            os.chmod(tmp, path.stat().st_mode & 0o777)
-        else:
-            umask = os.umask(0)
-            os.umask(umask)
-            os.chmod(tmp, 0o666 & ~umask)
-        os.replace(tmp, path)
-    except OSError as err:
-        try:
-            os.unlink(tmp)
-        except FileNotFoundError:
-            pass
-        raise InputError("output", f"{path}: cannot be written ({err.strerror or err})") from None
-    except BaseException:
-        try:
-            os.unlink(tmp)
-        except FileNotFoundError:
-            pass
-        raise
+    atomic_write_bytes(output, data)
 
 
 __all__ = ["render_package", "render_report", "write_report"]
