@@ -2,8 +2,9 @@
 
 Sources:
 * Gross and net allowable pressure: a net allowable excludes the overburden at the footing base,
-  so the gross peak is reduced by gs (c + D) before comparing (Das, *Principles of Foundation
-  Engineering*, net allowable bearing capacity; ``../shared/reference/practice-notes.md`` 1.1).
+  so the gross peak is reduced by gs (c + D) before comparing (B. M. Das, *Principles of Foundation
+  Engineering*, net allowable bearing capacity). The project states which one its soils report gives:
+  the two are commonly confused between geotechnical and structural engineers (common practice).
 * Increase of the allowable in combinations with wind or seismic load: a value the geotechnical
   report (or IBC 2021 1806.1 with the alternative basic combinations of 1605.2) permits; the
   project states it, default 1.0 (no increase).

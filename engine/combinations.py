@@ -6,8 +6,9 @@ section 12.4.2 in the forms of section 2.4.5 / 12.4.2.3, where the vertical seis
 Ev = 0.2 S_DS D (Eq. 12.4-4a) and the ASD seismic factor on E is 0.7.
 
 The "service-fs" method is the older practice of unfactored service loads checked against factors of
-safety (overturning 2.0, sliding 1.5, bearing 1.0): common practice, see
-``../shared/reference/engineering-refs.md`` section 5; the required values are editable.
+safety (overturning 2.0, sliding 1.5, bearing 1.0): common practice, fixed by no code clause (the
+retaining-wall stability values in Das, *Principles of Foundation Engineering*, are of the same order,
+from memory); see docs/verification.md, "Required ratios". The required values are editable.
 """
 
 from __future__ import annotations

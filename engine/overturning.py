@@ -3,8 +3,10 @@
 Source: statics of a rigid body tipping about the edge of its base; the ratio of resisting to
 overturning moment about the toe, e.g. Das, *Principles of Foundation Engineering*, retaining-wall
 stability (FS_overturning = sum M_R / sum M_O); for shear walls on footings with ASCE 7-16 2.4.1
-combination 7 (0.6D + 0.6W) the required ratio is 1.0 (``../shared/reference/engineering-refs.md``
-section 5).
+combination 7 (0.6D + 0.6W) the required ratio is 1.0, the 0.6 on dead load carrying the margin
+(Breyer et al., *Design of Wood Structures - ASD*, 5th ed., p. 2.37, read in a secondary quotation;
+see docs/verification.md, "Required ratios"). With every resisting load centred the ratio is L/(2e)
+(docs/verification.md, case 1).
 
 Vertical loads resist when downward and overturn when upward; lateral loads overturn with
 f*H*(height + D), their arm measured from the base of the footing.

@@ -4,7 +4,8 @@ Source: the classical linear contact-pressure solution (P/A +- M/S with S = B L^
 resultant is inside the kern; a triangular block of length 3(L/2 - e) beyond it), e.g. Das,
 *Principles of Foundation Engineering*, section on eccentrically loaded foundations (q_max =
 4P / (3B(L - 2e)) beyond the kern) and Bowles, *Foundation Analysis and Design*, 5th ed.,
-section 4-8; restated in ``../shared/reference/engineering-refs.md`` section 1.
+section 4-8 (both cited from memory); checked against published worked examples in
+docs/verification.md, cases 2 to 7.
 
 Every function takes floats or numpy arrays and broadcasts, so the same code serves a single check
 and the sizing grid.

@@ -1,9 +1,11 @@
 """Canary for the PySide6 6.12.0 / Python 3.11 bool_dealloc abort.
 
-PySide6 6.12.0 drops a reference to True/False on every Signal.emit() made from Python; after a few
-hundred emits the interpreter aborts with "Fatal Python error: bool_dealloc" (see
-../shared/reference/stack-notes.md; pyqtgraph emits such signals on every redraw). The emits run in a
-child process, so an abort fails this test with its message instead of killing the whole run.
+PySide6 (shiboken6) 6.12.0 on Python 3.11 drops a reference to True/False on every Signal.emit()
+made from Python; after a few hundred emits the interpreter aborts with "Fatal Python error:
+bool_dealloc". Measured here: the same emit loop aborts on 6.12.0 and runs on 6.11.3 and 6.10.3, hence
+the pin PySide6-Essentials >=6.10,<6.12. pyqtgraph emits such signals on every redraw, so a live plot
+dies after a few hundred redraws. The emits run in a child process, so an abort fails this test with
+its message instead of killing the whole run.
 """
 
 from __future__ import annotations

@@ -1,7 +1,8 @@
 """Properties of the rigid-footing soil pressure (no tension), checked with hypothesis.
 
-The formulas are those of ``engine.soil_pressure`` (the classical linear solution,
-``../shared/reference/engineering-refs.md`` section 1, status R); the properties are statics:
+The formulas are those of ``engine.soil_pressure`` (the classical linear solution, e.g. Das,
+*Principles of Foundation Engineering*, eccentrically loaded foundations; status R through the worked
+examples of docs/verification.md, cases 2 to 7); the properties are statics:
 the pressure block must carry N with its resultant at e, vary continuously through the kern limit
 e = L/6, grow without bound as e -> L/2, and never rise when the footing is made wider.
 """

@@ -1,6 +1,6 @@
 """Properties of the stability checks of a whole wall, checked with hypothesis.
 
-Statics behind each (``../shared/reference/engineering-refs.md`` section 1, status D, and the issue's
+Statics behind each (status D; docs/verification.md, "Property tests" and case 1, and the issue's
 "Mechanics" contract): a wall and its loads that are symmetric about the wall's mid-length give the
 same ratios when the lateral load acts either way; adding dead load adds resisting moment about the
 toe and so never lowers the overturning ratio; with centred resisting loads FS = L/(2e); with the

@@ -1,15 +1,15 @@
 """Continuous wall footing sized for several service combinations (ACI design handbook).
 
-Source: ACI SP-17(09), *The Reinforced Concrete Design Handbook*, Chapter 5 "Footing Design"
-(Mirza & Brant), FOOTINGS EXAMPLE 1, "Design of a continuous (wall) footing" (status R in
-``../shared/reference/engineering-refs.md`` section 8.2).
+Source: American Concrete Institute, SP-17(09), *The Reinforced Concrete Design Handbook*, Chapter 5
+"Footing Design" (Mirza & Brant), FOOTINGS EXAMPLE 1, "Design of a continuous (wall) footing" (status
+R; docs/verification.md, case 9).
 
 Inputs: 12 in bearing wall; D = 25 k/ft, L = 12.5 k/ft, W overturning axial = 4 k/ft, E overturning
 axial = 5 k/ft; allowable bearing 3 ksf for D, 4 ksf for D + L, 5 ksf for D + L + (W or E); footing
 self weight ignored. Required widths: D 8.3 ft, D + L 9.4 ft (governs), D + L + W 8.3 ft,
 D + L + E 8.5 ft. Factored pressures on the chosen B = 10 ft (the handbook's ACI 318-05 factors):
 1.4D 3.50 ksf, 1.2D + 1.6L 5.00 ksf, 1.2D + 1.6W + L 4.89 ksf, 0.9D + 1.6W 2.89 ksf; 1.2D + E + L
-47.5 k/ft is the reference's recomputation (D) where the page text stops.
+47.5 k/ft is recomputed here (D) where the page text stops.
 
 Modelled as a Kernline project: a 12 in wall 10 ft long with uniform line loads (W and E as vertical
 loads; no lateral load, so every case is checked once), the footing's unit weight 0 pcf. The project

@@ -1,10 +1,9 @@
 """Strip footing with an eccentric load inside the kern (arizval.app example).
 
-Source: arizval.app, "Principles of RC - footings", interactive example,
-``../shared/reference/engineering-refs.md`` check value 1.5 (status R; the average pressure
-P/A = 300 kPa is inferred from the page, D): strip of width 2.0 m in the direction of the
-eccentricity, e = 0.125 m, P = 600 kN per metre; B/6 = 0.333 m; q_max = 412.5 kPa,
-q_min = 187.5 kPa; the peak exceeds q_allow = 250 kPa.
+Source: arizval.app, "Principles of RC - footings", interactive example (docs/verification.md,
+case 6; status R; the average pressure P/A = 300 kPa is inferred from the page, D): strip of width
+2.0 m in the direction of the eccentricity, e = 0.125 m, P = 600 kN per metre; B/6 = 0.333 m;
+q_max = 412.5 kPa, q_min = 187.5 kPa; the peak exceeds q_allow = 250 kPa.
 
 The source's strip is analysed per metre of wall with the eccentricity across it, so here the 2.0 m
 is the footing dimension along the eccentricity (``length``) and the per-metre run is the other

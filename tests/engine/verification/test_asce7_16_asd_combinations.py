@@ -3,15 +3,14 @@
 Source: ASCE/SEI 7-16, *Minimum Design Loads and Associated Criteria for Buildings and Other
 Structures*, section 2.4.1 (basic ASD combinations) with the seismic forms of 2.4.5 and the
 vertical seismic effect Ev = 0.2 S_DS D of 12.4.2.2 (Eq. 12.4-4a). The combination list is status R2
-(secondary quotations, ``../shared/reference/engineering-refs.md`` section 3.2); the 2.4.5 seismic
-forms and Eq. 12.4-4a are M (from memory). The check values are the "Check values: combination
-arithmetic" rows of section 3 (status D, plain arithmetic), for D = 10, L = 5, Lr = 2, S = 3, R = 0,
-W = 8 (lateral), Eh = 6 (lateral), S_DS = 1.0, hence Ev = 0.2 x 1.0 x 10 = 2.
+(secondary quotations of the standard); the 2.4.5 seismic forms and Eq. 12.4-4a are M (from memory).
+The check values are plain arithmetic (status D; docs/verification.md, case 10), for D = 10, L = 5,
+Lr = 2, S = 3, R = 0, W = 8 (lateral), Eh = 6 (lateral), S_DS = 1.0, hence Ev = 0.2 x 1.0 x 10 = 2.
 
 Kernline's preset (the issue's contract) carries Ev on the dead load in the 0.7E combinations, so
-ASD 10 is the "with Ev" row (V = 4.6), not the soil-interface row with Ev = 0 (V = 6.0). Rows the
-reference does not tabulate (combinations 1 to 3 and the Lr and R branches of 4 and 6) are derived
-here the same way from the 2.4.1 list (D).
+ASD 10 is the "with Ev" row (V = 4.6), not the soil-interface row with Ev = 0 (V = 6.0). Every row,
+including combinations 1 to 3 and the Lr and R branches of 4 and 6, is derived the same way from the
+2.4.1 list (D).
 """
 
 from __future__ import annotations
@@ -59,7 +58,7 @@ def test_asd_preset_has_the_sixteen_combinations_of_the_contract():
 
 @pytest.mark.parametrize(("index", "row"), list(enumerate(EXPECTED)), ids=IDS)
 def test_asd_combination_vertical_total(index, row):
-    """V = sum of factor x load over the vertical cases (section 3 check values)."""
+    """V = sum of factor x load over the vertical cases (case 10 check values, D)."""
     _, expected_v, _, _status = row
     combo = asce7_16_asd(SDS)[index]
     vertical = sum(combo.factor(case) * value for case, value in LOADS.items())
@@ -68,7 +67,7 @@ def test_asd_combination_vertical_total(index, row):
 
 @pytest.mark.parametrize(("index", "row"), list(enumerate(EXPECTED)), ids=IDS)
 def test_asd_combination_lateral_total(index, row):
-    """H = factor on W x 8 + factor on E x 6 (section 3 check values)."""
+    """H = factor on W x 8 + factor on E x 6 (case 10 check values, D)."""
     _, _, expected_h, _status = row
     combo = asce7_16_asd(SDS)[index]
     lateral = combo.factor(LoadCase.W) * W_LATERAL + combo.factor(LoadCase.E) * EH_LATERAL

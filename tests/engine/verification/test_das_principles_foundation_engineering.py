@@ -2,9 +2,9 @@
 
 Source: B. M. Das, *Principles of Foundation Engineering*, section on eccentrically loaded
 foundations (one-way eccentricity): with e > B/6, q_max = 4Q / (3L(B - 2e)), B being the dimension in
-the direction of e and L the other. The form is quoted from memory (status M in
-``../shared/reference/engineering-refs.md`` section 1); it is identical to 2Q / (3L(B/2 - e)).
-Check value 1.7 (identity, status D): Q = 100, B = 10, L = 1, e = 3 gives 33.33.
+the direction of e and L the other. Edition and publisher not recorded: the form is quoted from
+memory (status M); it is identical to 2Q / (3L(B/2 - e)). Identity check (status D;
+docs/verification.md, case 2): Q = 100, B = 10, L = 1, e = 3 gives 33.33.
 """
 
 from __future__ import annotations

@@ -1,10 +1,11 @@
 """Integrated seismic scenario: a strip footing under a shear wall, ASD combinations 8 and 10.
 
-Source: ``../shared/reference/engineering-refs.md`` section 8.4 (status D: derived by statics, not
-published), built on IBC Table 1806.2 class 4 soil (q_a = 2,000 psf, friction 0.25, lateral bearing
-150 psf/ft; status R via Day's handbook) and ASCE 7-16 2.4.5 combinations 8 (D + 0.7Ev + 0.7Eh) and
-10 (0.6D + 0.7Eh with Ev = 0 at the soil interface, 12.4.2.2 exception; R2/M), with check value 7.4
-for sliding.
+Source: docs/verification.md, case 12 (status D: derived here by statics, not published), built on
+International Building Code Table 1806.2 class 4 soil (q_a = 2,000 psf, friction 0.25, lateral
+bearing 150 psf/ft; status R as reproduced in R. W. Day, *Geotechnical Earthquake Engineering
+Handbook*, Table 14.6) and ASCE/SEI 7-16 2.4.5 combinations 8 (D + 0.7Ev + 0.7Eh) and 10
+(0.6D + 0.7Eh with Ev = 0 at the soil interface, 12.4.2.2 exception; R2/M), including the sliding
+check of that case.
 
 Scenario: wall 20 ft long, D = 30 k centred; footing 24 ft x 3 ft x 1.5 ft at 150 pcf
 (W_f = 16.2 k, D_total = 46.2 k); top of footing 1 ft below grade, soil over the footing ignored;
@@ -96,13 +97,13 @@ def test_case_10_moment():
 
 def test_case_10_eccentricity_outside_kern():
     """e = 113.4 / 27.72 = 4.0909 ft > L/6 = 4.0 ft (D)."""
-    # the reference rounds 4.090909 to 4.0909
+    # case 12 rounds 4.090909 to 4.0909
     assert _combination_10()[1].bearing.eccentricity == pytest.approx(4.0909 * FOOT, rel=3e-5)
 
 
 def test_case_10_peak_pressure():
     """q_max = 2 x 27.72 / (3 x 3 x (12 - 4.0909)) = 0.7789 ksf (D)."""
-    # the reference rounds 0.77886 to 0.7789
+    # case 12 rounds 0.77886 to 0.7789
     assert _combination_10()[1].bearing.q_max == pytest.approx(0.7789 * KSF, rel=1e-4)
 
 
@@ -113,37 +114,37 @@ def test_case_10_least_pressure():
 
 def test_case_10_contact_length():
     """Contact 3 x (12 - 4.0909) = 23.727 ft (D)."""
-    # the reference rounds 23.7273 to 23.727
+    # case 12 rounds 23.7273 to 23.727
     assert _combination_10()[1].bearing.contact_length == pytest.approx(23.727 * FOOT, rel=3e-5)
 
 
 def test_case_10_overturning_about_toe():
     """FS_OT = 27.72 x 12 / 113.4 = 2.933 (D)."""
-    # the reference rounds 2.93333 to 2.933
+    # case 12 rounds 2.93333 to 2.933
     assert _combination_10()[1].overturning.ratio == pytest.approx(2.933, rel=2e-4)
 
 
 def test_case_10_sliding_friction():
-    """Friction 0.25 x 27.72 = 6.93 k (check value 7.4, D)."""
+    """Friction 0.25 x 27.72 = 6.93 k (case 12, D)."""
     assert _combination_10()[1].sliding.friction == pytest.approx(6.93 * KIP, rel=1e-12)
 
 
 def test_case_10_sliding_lateral_bearing():
-    """Lateral bearing 150 x (2.5^2 - 1^2) x 3 / 2 = 1.18 k (check value 7.4, D)."""
-    # the reference rounds 1.18125 to 1.18
+    """Lateral bearing 150 x (2.5^2 - 1^2) x 3 / 2 = 1.18 k (case 12, D)."""
+    # case 12 rounds 1.18125 to 1.18
     assert _combination_10()[1].sliding.passive == pytest.approx(1.18 * KIP, rel=2e-3)
 
 
 def test_case_10_sliding_resistance():
-    """6.93 + 1.18 = 8.11 k against 8.40 k (check value 7.4, D)."""
-    # the reference rounds 8.11125 to 8.11
+    """6.93 + 1.18 = 8.11 k against 8.40 k (case 12, D)."""
+    # case 12 rounds 8.11125 to 8.11
     assert _combination_10()[1].sliding.resistance == pytest.approx(8.11 * KIP, rel=2e-4)
 
 
 def test_case_10_sliding_fails():
-    """FS = 8.11 / 8.40 = 0.966 < 1.0: the design fails in sliding (check value 7.4, D)."""
+    """FS = 8.11 / 8.40 = 0.966 < 1.0: the design fails in sliding (case 12, D)."""
     result, case = _combination_10()
-    # the reference rounds 0.96563 to 0.966
+    # case 12 rounds 0.96563 to 0.966
     assert case.sliding.ratio == pytest.approx(0.966, rel=5e-4)
     assert not case.sliding.passes
     assert not result.governing[Check.SLIDING].passes
@@ -156,23 +157,23 @@ def test_case_8_vertical_load():
 
 def test_case_8_eccentricity_inside_kern():
     """e = 113.4 / 52.668 = 2.1531 ft < 4.0 ft (D)."""
-    # the reference rounds 2.15311 to 2.1531
+    # case 12 rounds 2.15311 to 2.1531
     assert _combination_8().bearing.eccentricity == pytest.approx(2.1531 * FOOT, rel=3e-5)
 
 
 def test_case_8_peak_pressure():
     """q_max = 52.668 / 72 x (1 + 6 x 2.1531 / 24) = 1.1252 ksf (D)."""
-    # the reference rounds 1.12525 to 1.1252
+    # case 12 rounds 1.12525 to 1.1252
     assert _combination_8().bearing.q_max == pytest.approx(1.1252 * KSF, rel=1e-4)
 
 
 def test_case_8_least_pressure():
     """q_min = 52.668 / 72 x (1 - 6 x 2.1531 / 24) = 0.3378 ksf (D)."""
-    # the reference rounds 0.33775 to 0.3378
+    # case 12 rounds 0.33775 to 0.3378
     assert _combination_8().bearing.q_min == pytest.approx(0.3378 * KSF, rel=3e-4)
 
 
 def test_case_8_overturning_about_toe():
     """FS_OT = 52.668 x 12 / 113.4 = 5.573 (D)."""
-    # the reference rounds 5.5733 to 5.573
+    # case 12 rounds 5.5733 to 5.573
     assert _combination_8().overturning.ratio == pytest.approx(5.573, rel=1e-4)

@@ -1,10 +1,10 @@
 """Sliding resistance from the IBC presumptive values (Table 1806.2 and section 1806.3).
 
-Source: International Building Code, Table 1806.2 "Presumptive load-bearing values" (status R:
-IBC 2012 as reproduced in Day, *Geotechnical Earthquake Engineering Handbook*, Table 14.6; 2015 to
-2021 unchanged, M) and 1806.3.1 (friction and lateral bearing may be combined, M), 1806.3.2
-(cohesion-type resistance at most one-half the dead load, R2). Check values 4.1, 4.2, 4.3 and 4.6 of
-``../shared/reference/engineering-refs.md`` section 4 (all D):
+Source: International Code Council, *International Building Code*, Table 1806.2 "Presumptive
+load-bearing values" (status R: IBC 2012 as reproduced in R. W. Day, *Geotechnical Earthquake
+Engineering Handbook*, McGraw-Hill, Table 14.6; 2015 to 2021 unchanged, M) and 1806.3.1 (friction
+and lateral bearing may be combined, M), 1806.3.2 (cohesion-type resistance at most one-half the dead
+load, R2). Check values (all D; docs/verification.md, case 11):
 
 * 4.1 Class 4 (lateral bearing 150 psf/ft), face from grade to 2 ft, per ft of face: 300 lb/ft.
 * 4.2 Class 4, face from 1 ft to 2.5 ft below grade, 3 ft wide: 150 x (2.5^2 - 1^2) x 3 / 2 = 1,181 lb.
@@ -38,7 +38,7 @@ def test_check_value_4_1_lateral_bearing_from_grade():
 def test_check_value_4_2_lateral_bearing_below_cover():
     """1/2 x 150 x (2.5^2 - 1^2) x 3 = 1,181 lb (D)."""
     force = passive_resistance(150.0 * PCF, 3.0 * FOOT, 1.0 * FOOT, 1.5 * FOOT, 0.0)
-    # the reference rounds 1,181.25 to 1,181
+    # case 11 rounds 1,181.25 to 1,181
     assert float(force) == pytest.approx(1181.0 * LBF, rel=3e-4)
 
 
@@ -60,7 +60,7 @@ def test_check_value_4_6_friction_times_dead_load():
 
 
 def _class_5_wall():
-    # check value 4.3 as a wall: 3 ft wide strip, 10 ft long, D = 600 plf, footing weight off
+    # the class 5 cohesion check as a wall: 3 ft wide strip, 10 ft long, D = 600 plf, footing weight off
     raw = {
         "format": "kernline-project",
         "version": 1,
@@ -89,7 +89,7 @@ def test_check_value_4_3_through_a_wall():
 
 
 def _class_4_wall():
-    # check value 4.2 as a wall: top of footing 1 ft below grade, 1.5 ft thick, 3 ft wide
+    # the class 4 lateral bearing check as a wall: top of footing 1 ft below grade, 1.5 ft thick, 3 ft wide
     raw = {
         "format": "kernline-project",
         "version": 1,
@@ -114,7 +114,7 @@ def _class_4_wall():
 
 def test_check_value_4_2_through_a_wall():
     """The end face of the footing from 1 ft to 2.5 ft below grade: 1,181 lb (D)."""
-    # the reference rounds 1,181.25 to 1,181
+    # case 11 rounds 1,181.25 to 1,181
     assert _class_4_wall().sliding.passive == pytest.approx(1181.0 * LBF, rel=3e-4)
 
 

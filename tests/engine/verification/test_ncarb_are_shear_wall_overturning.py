@@ -3,9 +3,9 @@
 Source: NCARB, *ARE Structural Systems* exam guide, sample question on the overturning of a concrete
 shear wall on a continuous footing (question 28 or 31 depending on the edition); the solution is
 reproduced consistently in two public forum threads (ARE 5 community "Structures" and the arecoach
-forum). Inputs and answer status R in ``../shared/reference/engineering-refs.md`` section 8.1; the
-extensions (eccentricity, soil pressures, 0.6D, sliding, the L/(2e) identity) are derived there by
-plain statics, status D.
+forum; addresses in docs/verification.md, case 8). Inputs and answer status R; the extensions
+(eccentricity, soil pressures, 0.6D, sliding, the L/(2e) identity) are derived by plain statics,
+status D.
 
 Inputs (R): wall 16 ft long x 40 ft high x 1.5 ft thick, 150 pcf -> 144 k; footing 20 ft x 6 ft x
 2 ft -> 36 k; superimposed dead load 240 k, centred; lateral force 24 k at the top of the wall,

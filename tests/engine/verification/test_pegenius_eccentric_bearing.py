@@ -3,15 +3,17 @@
 Sources:
 * pegenius.com, "Eccentrically Loaded Foundation Bearing Pressure", daily question 173: P = 120 kips
   on a 6 ft x 14 ft footing with e = 1 ft along the 6 ft side, which is exactly the kern limit
-  (``../shared/reference/engineering-refs.md`` check value 1.1; inputs and the kern check R, the
-  pressures D because the published answer was not visible).
+  (https://pegenius.com/daily-question/173/eccentrically-loaded-foundation-bearing-pressure; inputs
+  and the kern check R, the pressures D because the published answer was not visible).
 * pegenius.com, "Bearing Capacity Factor of Safety", daily question 13: 12 ft square footing,
   P = 300 kips (footing and overburden included), M = 700 kip-ft, net bearing capacity 15 ksf
-  (check value 1.6; inputs R, outputs D). Which pressure method the source intends is unknown; the
-  linear (no-tension) method is the one Kernline uses, so its numbers are the ones checked.
+  (https://pegenius.com/daily-question/13/bearing-capacity-factor-of-safety; inputs R, outputs D).
+  Which pressure method the source intends is unknown; the linear (no-tension) method is the one
+  Kernline uses, so its numbers are the ones checked.
 
 Pressures from the classical rigid-footing solution: q = P/(BL)(1 +- 6e/L) in the kern, and beyond
-it a triangle of length 3(L/2 - e) with q_max = 2P / (3B(L/2 - e)) (engineering-refs section 1, R).
+it a triangle of length 3(L/2 - e) with q_max = 2P / (3B(L/2 - e)) (R; docs/verification.md,
+"Symbols and the rigid-footing solution", and case 4).
 """
 
 from __future__ import annotations

@@ -1,9 +1,10 @@
 """Overturning and eccentricity are one check when the resisting loads are centred.
 
-Source: statics of a rigid footing, ``../shared/reference/engineering-refs.md`` section 1 (status D):
+Source: statics of a rigid footing (status D; docs/verification.md, case 1):
 with every resisting vertical load at the footing's centre, FS_OT = (N L/2) / (N e) = L / (2e), so
 FS = 3 is the kern limit e = L/6, FS = 2 is e = L/4 and FS = 1.5 is e = L/3. The pressure at each
-follows from the rigid-footing solution of section 1 (R): at e = L/6 a full triangle, q_max = 2N/(BL);
+follows from the classical rigid-footing solution (R; e.g. Das, *Principles of Foundation
+Engineering*, eccentrically loaded foundations): at e = L/6 a full triangle, q_max = 2N/(BL);
 beyond it a triangle 3(L/2 - e) long.
 
 A Kernline wall: N = 100 kip centred on a 24 ft footing 2 ft wide (self weight off), with a lateral

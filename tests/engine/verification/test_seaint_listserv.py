@@ -1,14 +1,15 @@
 """Posts on the SEAINT structural engineers' listserv: beyond-kern pressure and the sliding ratio.
 
-Sources (``../shared/reference/engineering-refs.md`` sections 1 and 7):
+Sources (the SEAINT mail list's public archive, seaintarchive.org; docs/verification.md, case 3):
 * W. C. Sherman, SEAINT listserv, 22 April 2004: beyond the kern the contact length is
   Y = 3(L/2 - e) and q_max = 2P / (Y B) (status R).
 * H. Brooks, SEAINT listserv, 1999: the per-foot form q_max = P / (0.75 W - 1.5 e), W being the
   footing dimension along e (status R); algebraically the same.
-* SEAINT listserv thread "Sliding factor of safety for retaining walls", September 1997, check
-  value 7.1 (status R): active 2,000 lb, passive 400 lb, base friction 2,400 lb. Method 1 (net force)
-  gives 2,400 / 1,600 = 1.50; method 2 (Bowles, *Foundation Analysis and Design*, 2nd ed., p. 380:
-  friction + passive over driving) gives 2,800 / 2,000 = 1.40. Kernline uses method 2 (its ratio is
+* SEAINT listserv thread "Sliding factor of safety for retaining walls", September 1997,
+  http://seaintarchive.org/mailarchive/1997b/msg00588.html (status R): active 2,000 lb, passive
+  400 lb, base friction 2,400 lb. Method 1 (net force) gives 2,400 / 1,600 = 1.50; method 2 (Bowles,
+  *Foundation Analysis and Design*, 2nd ed., p. 380, as quoted in the thread, R2: friction + passive
+  over driving) gives 2,800 / 2,000 = 1.40. Kernline uses method 2 (its ratio is
   resistance / |V| with the passive resistance in the resistance).
 """
 

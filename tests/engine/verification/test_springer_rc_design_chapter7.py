@@ -1,9 +1,8 @@
 """Footing problems 7.2 and 7.3 of a Springer reinforced-concrete design text (solution set).
 
 Source: the solutions to chapter 7 (footings) of a Springer reinforced-concrete design textbook,
-ISBN 978-1-4614-3261-6 (the title was not confirmed), ``../shared/reference/engineering-refs.md``
-check values 1.3 and 1.4 (status R, rechecked D). Problem 7.1 of the same set is internally
-inconsistent and is deliberately not used.
+ISBN 978-1-4614-3261-6 (the title was not confirmed); docs/verification.md, case 5 (status R,
+rechecked D). Problem 7.1 of the same set is internally inconsistent and is deliberately not used.
 
 * Problem 7.2: B = L = 3 m; P_u = 1.2(200) + 1.6(250) = 640 kN; M_u = 64 kN*m; e = 0.1 m < L/6;
   q_u,max = 85.32 kN/m^2 and q_u,min = 56.88 kN/m^2 as printed (exact 85.333 and 56.889).

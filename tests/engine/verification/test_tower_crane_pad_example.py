@@ -1,10 +1,11 @@
 """Tower-crane pad foundation with the resultant beyond the kern (anonymous web page).
 
-Source: a tower-crane foundation worked example on an anonymous public web page (low authority),
-``../shared/reference/engineering-refs.md`` check value 1.2: a 7 m x 7 m x 1.5 m pad of concrete at
-25 kN/m^3 (W = 1837.5 kN), N_total = 2687.5 kN, M = 4200 kN*m. Numbers R; the exact recomputation D.
-The page prints q_max = 132.2 kPa; the exact value is 132.12 kPa, and the reference says to allow
-+-0.1 kPa.
+Source: "Tower Crane Foundation Design Calculation Example", an anonymous public web page copied
+across several hosts (low authority; one copy seen at
+http://52.66.173.41/tower-crane-foundation-design-calculation-example; docs/verification.md, case 7):
+a 7 m x 7 m x 1.5 m pad of concrete at 25 kN/m^3 (W = 1837.5 kN), N_total = 2687.5 kN,
+M = 4200 kN*m. Numbers R; the exact recomputation D. The page prints q_max = 132.2 kPa; the exact
+value is 132.12 kPa, so the test allows +-0.1 kPa.
 
 Modelled as a Kernline project: a 7 m "wall" on a 7 m x 7 m x 1.5 m footing at 25 kN/m^3; the rest
 of the vertical load (2687.5 - 1837.5 = 850 kN) as a centred D point load; the moment as a lateral
@@ -76,7 +77,7 @@ def test_crane_pad_contact_length():
 
 
 def test_crane_pad_peak_pressure():
-    """q_max = 2N / (3B(L/2 - e)) = 132.2 kPa as printed, 132.12 exact (R; tolerance +-0.1 kPa per the reference)."""
+    """q_max = 2N / (3B(L/2 - e)) = 132.2 kPa as printed, 132.12 exact (R; tolerance +-0.1 kPa for the page's rounding)."""
     _, case = _case()
     assert case.bearing.q_max == pytest.approx(132.2e3, rel=0.1 / 132.2)
 
