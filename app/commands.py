@@ -160,7 +160,7 @@ class RawEdit(QUndoCommand):
         self.focus_path = tuple(focus_path)
         self.select_after = select_after
         self.select_before = select_before
-        self.prepared: Project | None = None
+        self.prepared: tuple[Project, dict[RawPath, str]] | None = None  # set by ProjectDocument.push
 
     def apply_changes(self) -> None:
         for change in self.changes:
@@ -172,11 +172,11 @@ class RawEdit(QUndoCommand):
 
     def redo(self) -> None:
         if self.prepared is not None:  # applied and parsed by ProjectDocument.push
-            project, self.prepared = self.prepared, None
+            parsed, self.prepared = self.prepared, None
         else:
             self.apply_changes()
-            project = self.document._reparse()
-        self.document._commit(project, self.select_after)
+            parsed = self.document._reparse()
+        self.document._commit(parsed, self.select_after)
 
     def undo(self) -> None:
         self.revert_changes()

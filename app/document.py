@@ -13,7 +13,8 @@ from __future__ import annotations
 
 import copy
 import json
-from collections.abc import Iterable
+import os
+from collections.abc import Callable, Iterable
 from dataclasses import dataclass
 from pathlib import Path
 from typing import Any
@@ -27,6 +28,8 @@ from engine.project_file import FORMAT, VERSION, atomic_write_text, dumps_projec
 from engine.resources import resource_path
 from engine.results import WallResult, check_wall
 from engine.sizing import SizingResult
+
+from .recovery import new_session
 
 PathKey = str | int
 RawPath = tuple[PathKey, ...]
@@ -77,8 +80,8 @@ def get_at(raw: Any, path: RawPath, default: Any = MISSING) -> Any:
 
 # ---- templates ---------------------------------------------------------------------------------------
 
-# Starting values of a new wall and a new project. They are placeholders to be replaced by the
-# engineer's own values; soil values echo the engine's defaults (see the project-file format).
+# Starting values of a new wall: placeholders the engineer replaces with the wall's own values. A new
+# project's site values are left out (see new_project_raw).
 _WALL_TEMPLATE = {
     "US": {
         "length": "10 ft",
@@ -134,37 +137,117 @@ def wall_template(wall_id: str, units: str) -> dict[str, Any]:
 
 
 def new_project_raw(units: str = "US") -> dict[str, Any]:
-    """The raw document of File > New: one wall, the ASCE 7-16 ASD preset, default soil values."""
+    """The raw document of File > New: one wall, the ASCE 7-16 ASD preset, and no site values.
+
+    The allowable bearing, the friction coefficient or cohesion, and the soil unit weight come from the
+    geotechnical report, so a new project leaves them out: the window shows those fields in error and
+    checks nothing until the engineer enters them (see :data:`SITE_VALUES`). S_DS is left out too; it is
+    asked for once a wall carries an E load. Passive resistance starts at zero (none counted).
+    """
     soil = (
-        {
-            "allowable_bearing": "2000 psf",
-            "bearing_basis": "gross",
-            "friction": 0.35,
-            "cohesion": "0 psf",
-            "passive": "0 pcf",
-            "passive_ignore": "12 in",
-            "unit_weight": "110 pcf",
-        }
+        {"bearing_basis": "gross", "passive": "0 pcf", "passive_ignore": "12 in"}
         if units != "SI"
-        else {
-            "allowable_bearing": "95 kPa",
-            "bearing_basis": "gross",
-            "friction": 0.35,
-            "cohesion": "0 kPa",
-            "passive": "0 kPa/m",
-            "passive_ignore": "300 mm",
-            "unit_weight": "17.3 kN/m^3",
-        }
+        else {"bearing_basis": "gross", "passive": "0 kPa/m", "passive_ignore": "300 mm"}
     )
     return {
         "format": FORMAT,
         "version": VERSION,
         "project": {"name": "Untitled project", "number": "", "engineer": "", "client": "", "address": "", "notes": ""},
         "units": units,
-        "criteria": {"method": "asce7-16-asd", "sds": 0.0, "bearing_increase": 1.0},
+        "criteria": {"method": "asce7-16-asd", "bearing_increase": 1.0},
         "soil": soil,
         "walls": [wall_template("W1", units)],
     }
+
+
+# ---- site values -------------------------------------------------------------------------------------
+
+# Values only the site can give. A project without them cannot be checked: the window shows the field
+# in error with these words and checks nothing until the engineer enters them; it never guesses them.
+# (The project-file reader refuses such a file the same way.)
+SITE_VALUES: dict[RawPath, str] = {
+    ("soil", "allowable_bearing"): "enter the allowable bearing pressure from the geotechnical report",
+    ("soil", "friction"): "enter the friction coefficient or the cohesion (or both) from the geotechnical report",
+    ("soil", "cohesion"): "enter the friction coefficient or the cohesion (or both) from the geotechnical report",
+    ("soil", "unit_weight"): "enter the soil unit weight from the geotechnical report",
+    ("criteria", "sds"): "enter S_DS from the site's seismic data (a wall carries E loads)",
+}
+
+# Stand-ins put in the place of missing site values only so that the walls can be read and drawn
+# while the soil values are still to come. They are never shown, saved or used for a result.
+_STAND_INS: dict[RawPath, Any] = {
+    ("soil", "allowable_bearing"): "1 psf",
+    ("soil", "friction"): 0.0,
+    ("soil", "unit_weight"): "0 pcf",
+    ("criteria", "sds"): 0.0,
+}
+
+
+def _blank(obj: Any, key: str) -> bool:
+    if not isinstance(obj, dict) or key not in obj:
+        return True
+    value = obj[key]
+    return value is None or (isinstance(value, str) and not value.strip())
+
+
+def _carries_e(raw: dict[str, Any]) -> bool:
+    walls = raw.get("walls")
+    if not isinstance(walls, list):
+        return False
+    for wall in walls:
+        loads = wall.get("loads") if isinstance(wall, dict) else None
+        if isinstance(loads, list) and any(isinstance(ld, dict) and ld.get("case") == "E" for ld in loads):
+            return True
+    return False
+
+
+def site_gaps(raw: Any) -> dict[RawPath, str]:
+    """The site values the raw document lacks (absent or blank), each with the words its field shows."""
+    if not isinstance(raw, dict):
+        return {}
+    soil = raw.get("soil", {})
+    criteria = raw.get("criteria", {})
+    if not isinstance(soil, dict) or not isinstance(criteria, dict):
+        return {}  # the reader names that problem itself
+    gaps: dict[RawPath, str] = {}
+    for key in ("allowable_bearing",):
+        if _blank(soil, key):
+            gaps[("soil", key)] = SITE_VALUES[("soil", key)]
+    if _blank(soil, "friction") and _blank(soil, "cohesion"):
+        gaps[("soil", "friction")] = SITE_VALUES[("soil", "friction")]
+        gaps[("soil", "cohesion")] = SITE_VALUES[("soil", "cohesion")]
+    if _blank(soil, "unit_weight"):
+        gaps[("soil", "unit_weight")] = SITE_VALUES[("soil", "unit_weight")]
+    if _carries_e(raw) and _blank(criteria, "sds"):
+        gaps[("criteria", "sds")] = SITE_VALUES[("criteria", "sds")]
+    return gaps
+
+
+def parse_for_window(raw: Any) -> tuple[Project, dict[RawPath, str]]:
+    """Parse the raw document; missing site values are reported, not guessed.
+
+    Returns the model and the site gaps. With gaps, the model is read from a copy in which stand-ins
+    fill the gaps, so the walls can be edited and drawn; the document then holds no results.
+    Raises InputError for any other problem, as the reader does.
+    """
+    gaps = site_gaps(raw)
+    if not gaps:
+        return parse_project(raw), gaps
+    filled = copy.deepcopy(raw)
+    for path in gaps:
+        if path in _STAND_INS:
+            section = filled.setdefault(path[0], {})
+            if _blank(section, path[1]):
+                section[path[1]] = _STAND_INS[path]
+    for key in ("cohesion",):  # a blank cohesion beside a stand-in friction is left out
+        if _blank(filled["soil"], key):
+            filled["soil"].pop(key, None)
+    return parse_project(filled), gaps
+
+
+def absolute(path: str | Path) -> Path:
+    """The path made absolute (against the working folder now, so a later change of folder cannot move it)."""
+    return Path(os.path.abspath(os.fspath(path)))
 
 
 def unique_wall_id(raw: dict[str, Any], stem: str) -> str:
@@ -216,6 +299,7 @@ class ProjectDocument(QObject):
     current_wall_changed = Signal(int)
     case_choice_changed = Signal()
     edit_refused = Signal(str, str)  # field path text, message
+    basis_changed = Signal(str)  # a project-wide design value was edited: "Allowable is: gross → net of overburden"
     path_changed = Signal()
     dirty_changed = Signal(bool)
     sizing_changed = Signal(str)  # wall id
@@ -225,9 +309,13 @@ class ProjectDocument(QObject):
         self.undo_stack = QUndoStack(self)
         self.undo_stack.cleanChanged.connect(self._on_clean_changed)
         self.raw: dict[str, Any] = new_project_raw()
-        self.project: Project = parse_project(self.raw)
+        self.project, self.site_gaps = parse_for_window(self.raw)
         self.results: dict[str, WallResult] = {}
         self.path: Path | None = None
+        self.session = new_session()
+        # asked before the selection moves to another wall (the window checks for entries not applied);
+        # it returns False to stay on the current wall
+        self.leave_wall_guard: Callable[[int], bool] | None = None
         self.is_demo = False
         self.current_index = 0
         self.case_choice: CaseChoice = GOVERNING_BEARING
@@ -252,12 +340,20 @@ class ProjectDocument(QObject):
         demo: bool = False,
         recovered: bool = False,
     ) -> None:
-        """Make ``raw`` the open project (clears undo history, sizing and selection)."""
-        project = project if project is not None else parse_project(raw)
+        """Make ``raw`` the open project (clears undo history, sizing and selection).
+
+        ``path`` is made absolute. Missing site values are held as :attr:`site_gaps` (nothing is
+        checked until they are entered); any other problem raises InputError.
+        """
+        gaps = site_gaps(raw)
+        if project is None or gaps:
+            project, gaps = parse_for_window(raw)
         self._loaded_text = None
         self.undo_stack.clear()
         self.raw = raw
-        self.path = Path(path) if path is not None else None
+        self.site_gaps = gaps
+        self.session = new_session()
+        self.path = absolute(path) if path is not None else None
         self.is_demo = demo
         self.current_index = 0
         self.case_choice = GOVERNING_BEARING
@@ -278,9 +374,20 @@ class ProjectDocument(QObject):
         self.replace(new_project_raw(units), None)
 
     def open(self, path: str | Path) -> None:
-        """Open a project file. Raises InputError with a readable message when it cannot be used."""
-        doc = load_project(path)
-        self.replace(doc.raw, Path(path), project=doc.project)
+        """Open a project file. Raises InputError with a readable message when it cannot be used.
+
+        A file that lacks only site values (the soil values of the geotechnical report, S_DS) opens
+        with those fields in error, so the engineer can enter them.
+        """
+        try:
+            doc = load_project(path)
+        except InputError:
+            raw = _read_json(path)
+            if raw is None or not site_gaps(raw):
+                raise
+            self.replace(raw, Path(path))
+        else:
+            self.replace(doc.raw, Path(path), project=doc.project)
         try:
             self._loaded_text = Path(path).read_text(encoding="utf-8")
         except (OSError, UnicodeDecodeError):  # pragma: no cover - it was just read
@@ -293,7 +400,7 @@ class ProjectDocument(QObject):
 
     def save(self, path: str | Path | None = None) -> Path:
         """Write the raw document (atomically) to ``path`` or the current path; mark it clean."""
-        target = Path(path) if path is not None else self.path
+        target = absolute(path) if path is not None else self.path
         if target is None:
             raise InputError("", "the project has no file yet; choose where to save it")
         if self._loaded_text is not None and _same_document(self._loaded_text, self.raw):
@@ -336,18 +443,35 @@ class ProjectDocument(QObject):
         return self.project.walls[self.current_index]
 
     @property
-    def current_result(self) -> WallResult:
-        return self.results[self.current_wall.id]
+    def checkable(self) -> bool:
+        """Whether every site value is there, so the walls are checked (else :attr:`results` is empty)."""
+        return not self.site_gaps
 
-    def result_of(self, wall: Wall) -> WallResult:
-        return self.results[wall.id]
+    @property
+    def current_result(self) -> WallResult | None:
+        """The current wall's results; None while site values are missing."""
+        return self.results.get(self.current_wall.id)
+
+    def result_of(self, wall: Wall) -> WallResult | None:
+        return self.results.get(wall.id)
+
+    def missing_labels(self) -> list[str]:
+        """The words beside each missing site value ("Allowable bearing", "Friction coefficient or Cohesion")."""
+        labels = [self.field_labels.get(path_text(p), path_text(p)) for p in self.site_gaps]
+        friction, cohesion = (self.field_labels.get(k, k) for k in ("soil.friction", "soil.cohesion"))
+        if friction in labels and cohesion in labels:
+            labels[labels.index(friction)] = f"{friction} or {cohesion}"
+            labels.remove(cohesion)
+        return labels
 
     def wall_path(self, *rest: PathKey) -> RawPath:
         return ("walls", self.current_index, *rest)
 
     def chosen_case_index(self) -> int:
-        """Index into the current wall's cases of the case the drawings show."""
+        """Index into the current wall's cases of the case the drawings show (0 while nothing is checked)."""
         result = self.current_result
+        if result is None:
+            return 0
         choice = self.case_choice
         if choice[0] == "governing":
             return result.governing[choice[1]].case_index  # type: ignore[index]
@@ -365,11 +489,15 @@ class ProjectDocument(QObject):
 
     # ---- changes that are not edits of the file ------------------------------------------------
 
-    def set_current_index(self, index: int) -> None:
+    def set_current_index(self, index: int) -> bool:
+        """Select another wall, unless :attr:`leave_wall_guard` says to stay; True when the selection is ``index``."""
         index = max(0, min(index, len(self.project.walls) - 1))
         if index != self.current_index:
+            if self.leave_wall_guard is not None and not self.leave_wall_guard(index):
+                return False
             self.current_index = index
             self.current_wall_changed.emit(index)
+        return True
 
     def set_case_choice(self, choice: CaseChoice) -> None:
         if choice != self.case_choice:
@@ -383,17 +511,18 @@ class ProjectDocument(QObject):
 
     # ---- edits ---------------------------------------------------------------------------------
 
-    def push(self, command: Any, *, quiet: bool = False) -> str | None:
+    def push(self, command: Any, *, quiet: bool = False, announce: str | Callable[[], str] | None = None) -> str | None:
         """Apply an edit command if the engine accepts the result; return the refusal message if not.
 
         The command's changes are applied to the raw dict and the whole project re-parsed; when the
         engine raises InputError the changes are reverted, ``edit_refused`` is emitted and nothing
         reaches the undo stack. ``quiet`` refusals (a live attempt while the user is still typing)
-        emit nothing.
+        emit nothing. ``announce`` (the edit of a project-wide design value in words) is emitted with
+        ``basis_changed`` once the edit is applied (a callable is asked for its words then).
         """
         command.apply_changes()
         try:
-            project = parse_project(self.raw)
+            project, gaps = parse_for_window(self.raw)
         except InputError as err:
             command.revert_changes()
             message = readable(err, self.field_labels)
@@ -402,15 +531,19 @@ class ProjectDocument(QObject):
                 self.last_error = message
                 self.edit_refused.emit(path_text(command.focus_path), message)
             return message
-        command.prepared = project
+        command.prepared = (project, gaps)
         self.last_error = None
         self.last_refusal = None
         self.undo_stack.push(command)
+        if announce:
+            self.basis_changed.emit(announce() if callable(announce) else announce)
         return None
 
-    def _commit(self, project: Project, select: int | None) -> None:
-        """Called by commands: the raw dict now parses to ``project``."""
-        previous, self.project = self.project, project
+    def _commit(self, parsed: tuple[Project, dict[RawPath, str]], select: int | None) -> None:
+        """Called by commands: the raw dict now parses to ``parsed`` (the model and the site gaps)."""
+        previous, self.project = self.project, parsed[0]
+        self.site_gaps = parsed[1]
+        project = self.project
         self._recompute(previous)
         if select is not None:
             self.current_index = max(0, min(select, len(project.walls) - 1))
@@ -420,12 +553,15 @@ class ProjectDocument(QObject):
         self.results_changed.emit()
         self.current_wall_changed.emit(self.current_index)
 
-    def _reparse(self) -> Project:
-        return parse_project(self.raw)
+    def _reparse(self) -> tuple[Project, dict[RawPath, str]]:
+        return parse_for_window(self.raw)
 
     def _recompute(self, previous: Project | None) -> None:
-        """Check every wall whose inputs changed (the engine does all the engineering)."""
+        """Check every wall whose inputs changed (the engine does all the engineering); none while site values are missing."""
         project = self.project
+        if self.site_gaps:
+            self.results = {}
+            return
         old_results = self.results
         same_basis = previous is not None and previous.soil == project.soil and previous.criteria == project.criteria
         old_walls = {w.id: w for w in previous.walls} if previous is not None else {}
@@ -440,6 +576,13 @@ class ProjectDocument(QObject):
 
     def _on_clean_changed(self, clean: bool) -> None:
         self.dirty_changed.emit(self.dirty)
+
+
+def _read_json(path: str | Path) -> Any:
+    try:
+        return json.loads(Path(path).read_text(encoding="utf-8"))
+    except (OSError, UnicodeDecodeError, ValueError):
+        return None
 
 
 def _same_document(text: str, raw: dict[str, Any]) -> bool:
@@ -492,6 +635,8 @@ __all__ = [
     "get_at",
     "new_project_raw",
     "next_wall_id",
+    "parse_for_window",
+    "site_gaps",
     "path_text",
     "readable",
     "unique_wall_id",

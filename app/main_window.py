@@ -11,11 +11,9 @@ is open. File > Export calculation package writes the PDF on a worker (:class:`r
 
 from __future__ import annotations
 
-import json
 import os
 import re
 import sys
-import time
 from collections.abc import Mapping
 from pathlib import Path
 from typing import Any
@@ -39,27 +37,28 @@ from PySide6.QtWidgets import (
 
 from engine import CAUTION, __version__
 from engine.errors import InputError
-from engine.project_file import EXTENSION, atomic_write_text, dumps_project
+from engine.project_file import EXTENSION
 from engine.schedule import write_schedule
 from engine.units import format_length
 
-from . import commands
-from .document import ProjectDocument
+from . import commands, recovery
+from .document import ProjectDocument, absolute
+from .recovery import Orphan, RecoverySlot
 from .runner import PackageOutcome, PackageWriter, SizingBatch, SizingRunner
 from .style import STYLE_SHEET, configure_pyqtgraph
 from .views.cases import CasesTable
 from .views.design_map import DesignMapView
 from .views.drawings import DrawingsPanel
+from .views.fields import guard_wheel
 from .views.forms import ProjectForm, WallForm
+from .views.recovery_dialog import RecoveryDialog
 from .views.schedule import ScheduleView
 from .views.verdict import VerdictView
 from .views.walls import WallsView
 from .views.welcome import WelcomePanel
 
-AUTOSAVE_MS = 60_000
+AUTOSAVE_MS = 15_000  # an edit reaches the recovery file within this time
 RECENT_LIMIT = 8
-RECOVERY_NAME = "autosave.kernline-recovery"
-RECOVERY_FORMAT = "kernline-recovery"
 FILE_FILTER = f"Kernline projects (*{EXTENSION});;All files (*)"
 PDF_FILTER = "PDF (*.pdf);;All files (*)"
 EXIT_AFTER_VARIABLE = "KERNLINE_EXIT_AFTER_MS"  # the frozen build's smoke check: quit this many ms after showing
@@ -82,8 +81,17 @@ def package_file_name(project_name: str) -> str:
 
 
 def default_recovery_dir() -> Path:
+    """Where recovery files live: Kernline/recovery in the user's data folder (see :mod:`app.recovery`).
+
+    Linux ~/.local/share/Kernline/recovery; macOS ~/Library/Application Support/Kernline/recovery;
+    Windows %LOCALAPPDATA%\\Kernline\\recovery.
+    """
     base = QStandardPaths.writableLocation(QStandardPaths.StandardLocation.GenericDataLocation) or str(Path.home())
     return Path(base) / "Kernline" / "recovery"
+
+
+# windows opened by another window (restored documents) are kept here so they outlive the call that made them
+_OTHER_WINDOWS: list[MainWindow] = []
 
 
 class MainWindow(QMainWindow):
@@ -96,6 +104,9 @@ class MainWindow(QMainWindow):
         super().__init__()
         self.settings = settings if settings is not None else QSettings("Kernline", "Kernline")
         self.recovery_dir = Path(recovery_dir) if recovery_dir is not None else default_recovery_dir()
+        self.recovery_slot: RecoverySlot | None = None
+        self.spawned: list[MainWindow] = []  # windows this one opened (restored documents)
+        self._autosave_ms = autosave_ms
         self.document = ProjectDocument(self)
         self.runner = SizingRunner(self)
         self.package_writer = PackageWriter(self)
@@ -105,10 +116,13 @@ class MainWindow(QMainWindow):
         self._build_views()
         self._build_actions()
         self._connect()
+        # one write per pause: started by the first unsaved edit, it writes when it runs out
         self.autosave_timer = QTimer(self)
+        self.autosave_timer.setSingleShot(True)
         self.autosave_timer.setInterval(autosave_ms)
         self.autosave_timer.timeout.connect(self.autosave_now)
-        self.autosave_timer.start()
+        self.document.leave_wall_guard = self._may_leave_wall
+        guard_wheel(self)
         self._rendered_index = -1
         self._on_document_replaced()
         self._update_title()
@@ -320,6 +334,9 @@ class MainWindow(QMainWindow):
         doc.dirty_changed.connect(self._on_dirty_changed)
         doc.path_changed.connect(self._update_title)
         doc.edit_refused.connect(self._on_edit_refused)
+        doc.basis_changed.connect(self._on_basis_changed)
+        doc.undo_stack.indexChanged.connect(self._schedule_autosave)
+        doc.path_changed.connect(self._sync_recovery_slot)
         doc.sizing_changed.connect(self._on_sizing_changed)
         self.runner.finished.connect(self._on_sizing_finished)
         self.cases_table.case_activated.connect(self._on_case_activated)
@@ -348,6 +365,7 @@ class MainWindow(QMainWindow):
 
     def _on_document_replaced(self) -> None:
         self._rendered_index = -1
+        self._sync_recovery_slot()
         self.show_editor()
         self.wall_form.refresh(force=True)
         self.project_form.refresh(force=True)
@@ -369,6 +387,29 @@ class MainWindow(QMainWindow):
     def _on_results_changed(self) -> None:
         self._render_results()
 
+    def _may_leave_wall(self, index: int) -> bool:
+        """Before another wall is shown: an entry of this wall that is not valid is dropped only when the user says so."""
+        self.flush_typing()
+        group = self.wall_form.group
+        pending = [f for f in group.fields if f.invalid]
+        if not pending:
+            return True
+        doc = self.document
+        entries = "; ".join(f'"{f.edit.text().strip()}" in {f.spec.label}' for f in pending)
+        target = doc.project.walls[index].id if 0 <= index < len(doc.project.walls) else "another wall"
+        answer = QMessageBox.question(
+            self,
+            "Entry not valid",
+            f"Wall {doc.current_wall.id} holds an entry that is not valid: {entries}.\n\n"
+            f"Discard it and show wall {target}, or stay to correct it?",
+            QMessageBox.StandardButton.Discard | QMessageBox.StandardButton.Cancel,
+            QMessageBox.StandardButton.Cancel,
+        )
+        if answer == QMessageBox.StandardButton.Discard:
+            return True
+        pending[0].edit.setFocus()
+        return False
+
     def _on_current_wall_changed(self, index: int) -> None:
         if index == self._rendered_index:
             return
@@ -386,10 +427,14 @@ class MainWindow(QMainWindow):
         self._rendered_index = doc.current_index
         self.walls_view.refresh()
         self.drawings.render()
-        self.verdict.render(doc.current_wall, doc.current_result)
+        result = doc.current_result
+        if result is None:
+            self.verdict.render_unchecked(doc.current_wall, doc.missing_labels())
+        else:
+            self.verdict.render(doc.current_wall, result)
         current = self.tabs.currentWidget()
         if current is self.cases_table:
-            self.cases_table.set_result(doc.current_result, doc.units)
+            self.cases_table.set_result(result, doc.units)
         elif current is self.schedule:
             self.schedule.refresh()
         elif current is self.design_map:
@@ -399,7 +444,7 @@ class MainWindow(QMainWindow):
         doc = self.document
         wall = doc.current_wall
         entry, fresh = doc.sizing_for(wall)
-        if auto_size and not fresh:
+        if auto_size and not fresh and doc.checkable:
             self._request_wall_sizing()
         self.design_map.busy = self.runner.busy(f"wall:{wall.id}") or self.runner.busy("all")
         self.design_map.render()
@@ -430,11 +475,22 @@ class MainWindow(QMainWindow):
             self.right_splitter.setSizes([int(0.54 * total), total - int(0.54 * total)])
 
     def _on_case_activated(self, index: int) -> None:
-        case = self.document.current_result.table.cases[index]
+        result = self.document.current_result
+        if result is None:
+            return
+        case = result.table.cases[index]
         self.document.set_case_choice(("case", case.combination.name, case.direction.value))
 
-    def _on_dirty_changed(self, _dirty: bool) -> None:
+    def _schedule_autosave(self, _index: int = 0) -> None:
+        """An edit, undo or redo: unsaved work reaches the recovery record when the autosave timer runs out."""
+        if self.document.dirty and not self.autosave_timer.isActive():
+            self.autosave_timer.start()
+
+    def _on_dirty_changed(self, dirty: bool) -> None:
         self._update_title()
+        if not dirty:  # saved, or undone back to the saved state: nothing to recover
+            self.autosave_timer.stop()
+            self.remove_recovery()
 
     _notice: str | None = None
 
@@ -445,6 +501,10 @@ class MainWindow(QMainWindow):
 
     def _on_edit_refused(self, field: str, message: str) -> None:
         self._show_notice(f"Not applied — {message}")
+
+    def _on_basis_changed(self, text: str) -> None:
+        """A project-wide design value changed: say which, from what to what, and how to take it back."""
+        self.statusBar().showMessage(f"{text} — Ctrl+Z undoes", 12000)
 
     def _update_title(self) -> None:
         self.setWindowTitle(f"{self.document.display_name}[*] — Kernline")
@@ -471,17 +531,34 @@ class MainWindow(QMainWindow):
         self.design_map.busy = True
         return self.runner.request(f"wall:{wall.id}", doc.project, [wall])
 
+    def _refuse_unchecked(self, what: str) -> bool:
+        """While site values are missing nothing can be checked: say so (True) instead of doing ``what``."""
+        doc = self.document
+        if doc.checkable:
+            return False
+        self.statusBar().showMessage(
+            f"Cannot {what} yet: enter {', '.join(doc.missing_labels())} from the geotechnical report first.", 10000
+        )
+        return True
+
     def size_current(self) -> int:
-        """Size the selected wall and show the design map."""
+        """Size the selected wall and show the design map (-1 when it cannot be sized yet)."""
+        self.flush_typing()
         self.tabs.setCurrentWidget(self.design_map)
+        if self._refuse_unchecked("size the footing"):
+            return -1
         seq = self._request_wall_sizing()
         self.design_map.busy = self.runner.busy(f"wall:{self.document.current_wall.id}")
         self.design_map.render()
         return seq
 
     def size_all(self) -> int:
-        """Size every wall (on a worker when it is more than a frame's work)."""
+        """Size every wall (on a worker when it is more than a frame's work); -1 when they cannot be sized yet."""
+        self.flush_typing()
         doc = self.document
+        if self._refuse_unchecked("size the walls"):
+            self.tabs.setCurrentWidget(self.design_map)
+            return -1
         self.statusBar().showMessage(f"Sizing {len(doc.project.walls)} walls…")
         self.tabs.setCurrentWidget(self.design_map)
         return self.runner.request("all", doc.project, doc.project.walls)
@@ -519,11 +596,16 @@ class MainWindow(QMainWindow):
     # ---- files ---------------------------------------------------------------------------------
 
     def start(self, path: str | None = None, demo: bool = False, recover: bool = True) -> None:
-        """What the window opens with: a recovered project, the file, the demo, or else the welcome panel.
+        """What the window opens with: restored work, the file, the demo, or else the welcome panel.
 
-        ``recover=False`` skips the offer to restore autosaved work (the smoke check must not wait on a question).
+        Work restored after a crash comes first (into this window; further documents into windows of
+        their own); a file asked for as well then opens in a window of its own, unless it was among
+        the restored. ``recover=False`` skips the offer (the smoke check must not wait on a question).
         """
-        if recover and self.offer_recovery():
+        restored = self.offer_recovery() if recover else []
+        if restored:
+            if path and not any(p is not None and p == absolute(path) for p in restored):
+                self.open_in_new_window(path)
             return
         if path:
             if self.open_path(path, confirm=False):
@@ -623,18 +705,52 @@ class MainWindow(QMainWindow):
         return True
 
     def flush_typing(self) -> None:
-        """Apply any field whose typing has not yet paused long enough to be applied."""
+        """Apply typing not yet applied in every field, as Enter would: a valid entry becomes an edit,
+        an invalid one is marked at its field with the reason."""
         for field in self.wall_form.group.fields + self.project_form.group.fields:
             field.flush()
 
+    def refuse_invalid(self, what: str) -> bool:
+        """When a field holds an entry that is not valid, say which (field and reason) and return True."""
+        problems = self.invalid_problems()
+        if not problems:
+            return False
+        listing = "\n".join(f"• {label}: {problem}" for label, problem in problems)
+        first = problems[0][0]
+        self.statusBar().showMessage(f"Not {what}: {first} holds an entry that is not valid; correct it first.", 12000)
+        QMessageBox.warning(
+            self,
+            f"Not {what}",
+            f"Not {what}: {'this field holds' if len(problems) == 1 else 'these fields hold'} an entry that is not valid.\n\n"
+            f"{listing}\n\nCorrect the entry (or undo it with Ctrl+Z in the field), then try again.",
+        )
+        self._focus_first_invalid()
+        return True
+
+    def invalid_problems(self) -> list[tuple[str, str]]:
+        """(label, reason) of each field holding text the engine refused (the model keeps its last valid value)."""
+        fields = self.wall_form.group.fields + self.project_form.group.fields
+        return [(f.spec.label, f.error.text()) for f in fields if f.invalid]
+
+    def _focus_first_invalid(self) -> None:
+        for f in self.wall_form.group.fields + self.project_form.group.fields:
+            if f.invalid:
+                self.forms_scroll.ensureWidgetVisible(f)
+                f.edit.setFocus()
+                return
+
     def save(self) -> bool:
         self.flush_typing()
+        if self.refuse_invalid("saved"):
+            return False
         if self.document.path is None:
             return self.save_as()
         return self._save_to(self.document.path)
 
     def save_as(self) -> bool:
         self.flush_typing()
+        if self.refuse_invalid("saved"):
+            return False
         doc = self.document
         suggestion = str(doc.path) if doc.path else (doc.project.info.name.strip() or "project") + EXTENSION
         path, _ = QFileDialog.getSaveFileName(self, "Save the project as", suggestion, FILE_FILTER)
@@ -652,17 +768,27 @@ class MainWindow(QMainWindow):
             return False
         self.remove_recovery()
         self._add_recent(path)
-        self.statusBar().showMessage(f"Saved {path}", 5000)
+        saved = self.document.path
+        if self.document.checkable:
+            self.statusBar().showMessage(f"Saved {saved}", 5000)
+        else:
+            self.statusBar().showMessage(
+                f"Saved {saved} — still to enter: {', '.join(self.document.missing_labels())}; nothing is checked until then.",
+                10000,
+            )
         return True
 
     def export_schedule(self) -> bool:
+        self.flush_typing()
+        if self._refuse_unchecked("write the schedule"):
+            return False
         doc = self.document
         suggestion = str(doc.path.with_suffix("") if doc.path else Path("schedule")) + "-schedule.csv"
         path, _ = QFileDialog.getSaveFileName(self, "Export the footing schedule", suggestion, "CSV (*.csv)")
         if not path:
             return False
         try:
-            write_schedule(doc.project, path, [doc.results[w.id] for w in doc.project.walls])
+            write_schedule(doc.project, path, [doc.results[w.id] for w in doc.project.walls])  # all checked
         except OSError as err:
             QMessageBox.warning(self, "Cannot write the schedule", f"{path}\n\n{err}")
             return False
@@ -683,6 +809,8 @@ class MainWindow(QMainWindow):
         """
         self.flush_typing()
         doc = self.document
+        if self._refuse_unchecked("write the calculation package"):
+            return False
         if self.package_writer.busy:
             self.statusBar().showMessage("A calculation package is still being written.", 5000)
             return False
@@ -764,69 +892,126 @@ class MainWindow(QMainWindow):
 
     @property
     def recovery_path(self) -> Path:
-        return self.recovery_dir / RECOVERY_NAME
+        """This window's recovery record (it exists only while there is unsaved work)."""
+        self._sync_recovery_slot()
+        assert self.recovery_slot is not None
+        return self.recovery_slot.record
+
+    def _sync_recovery_slot(self) -> None:
+        """Give the open document its own recovery slot (lock taken at once), keyed by its path and session.
+
+        A document that gets another file (Save As) or is replaced moves to a new slot; the old
+        slot's record and lock go (its work was saved or deliberately dropped).
+        """
+        doc = self.document
+        slot = self.recovery_slot
+        if slot is not None and slot.path == doc.path and slot.session == doc.session:
+            return
+        if slot is not None:
+            slot.release()
+        self.recovery_slot = RecoverySlot(self.recovery_dir, doc.path, doc.session)
+        self.recovery_slot.acquire()
+        if doc.dirty and slot is not None:
+            self.autosave_now()  # the work moved to the new slot at once
 
     def autosave_now(self) -> bool:
-        """Write the unsaved project to the recovery file (nothing when there is nothing unsaved)."""
+        """Write the unsaved project to this window's recovery record (nothing when there is nothing unsaved)."""
         doc = self.document
-        if not doc.dirty:
+        if not doc.dirty or self.recovery_slot is None:
             return False
-        record = {
-            "format": RECOVERY_FORMAT,
-            "version": 1,
-            "saved": time.strftime("%Y-%m-%d %H:%M:%S"),
-            "path": str(doc.path) if doc.path else None,
-            "demo": doc.is_demo,
-            "project": doc.raw,
-        }
+        self._sync_recovery_slot()
         try:
-            self.recovery_dir.mkdir(parents=True, exist_ok=True)
-            atomic_write_text(self.recovery_path, dumps_project(record))
+            self.recovery_slot.write(doc.raw, demo=doc.is_demo, name=doc.project.info.name)
         except OSError as err:
             self.statusBar().showMessage(f"Autosave failed: {err}", 8000)
             return False
         return True
 
     def remove_recovery(self) -> None:
-        try:
-            self.recovery_path.unlink()
-        except FileNotFoundError:
-            pass
-        except OSError:
-            pass
+        """Delete this window's recovery record (the document was saved, dropped, or is as saved)."""
+        if self.recovery_slot is not None:
+            self.recovery_slot.remove()
 
-    def offer_recovery(self) -> bool:
-        """If the last session ended without closing, offer its autosaved project. True if restored."""
-        path = self.recovery_path
-        if not path.is_file():
-            return False
+    def offer_recovery(self) -> list[Path | None]:
+        """After a crash, offer every orphaned document (owner gone) of the recovery folder.
+
+        Records of live windows (in this or another process) are left alone. Unreadable records are
+        set aside as ``*.corrupt`` and named in the status bar. Returns the paths (None: never saved)
+        of the documents restored; the first is in this window.
+        """
+        found = recovery.scan(self.recovery_dir)
+        notes = []
+        if found.set_aside:
+            names = ", ".join(str(p) for p in found.set_aside)
+            notes.append(f"A damaged recovery file was set aside and not restored: {names}")
+        restored: list[Path | None] = []
+        if found.orphans:
+            choice = RecoveryDialog.ask(self, found.orphans)
+            for orphan in choice.discard:
+                lock = recovery.claim(orphan)
+                if lock is not None:
+                    recovery.discard(orphan, lock)
+            for orphan in choice.restore:
+                target = self if not restored else self.open_in_new_window(None)
+                note = target.restore(orphan)
+                if note is None:
+                    restored.append(orphan.path)
+                else:
+                    notes.append(note)
+                    if target is not self:
+                        target.document.undo_stack.setClean()
+                        target.close()
+        if restored:
+            more = f" and {len(restored) - 1} more in windows of their own" if len(restored) > 1 else ""
+            notes.insert(0, f"Restored unsaved work{more}; save it to keep it.")
+        if notes:
+            self.statusBar().showMessage(" ".join(notes), 20000)
+        return restored
+
+    def restore(self, orphan: Orphan) -> str | None:
+        """Bring an orphaned document into this window; None when done, else what went wrong (in words).
+
+        The document keeps its absolute file path, so Save writes to that file. Its work is written
+        to this window's own record before the orphan's record is deleted, so it is never without one.
+        """
+        lock = recovery.claim(orphan)
+        if lock is None:
+            return None if not orphan.record.exists() else f"{orphan.title} is being restored by another window."
         try:
-            record = json.loads(path.read_text(encoding="utf-8"))
-            if record.get("format") != RECOVERY_FORMAT or not isinstance(record.get("project"), dict):
-                raise ValueError("not a recovery file")
-        except (OSError, ValueError):
-            self.remove_recovery()
-            return False
-        name = record.get("path") or "an unsaved project"
-        answer = QMessageBox.question(
-            self,
-            "Restore unsaved work?",
-            f"Kernline did not close normally. Restore the changes to {name} autosaved at {record.get('saved', '?')}?",
-            QMessageBox.StandardButton.Yes | QMessageBox.StandardButton.No,
-            QMessageBox.StandardButton.Yes,
-        )
-        if answer != QMessageBox.StandardButton.Yes:
-            self.remove_recovery()
-            return False
-        try:
-            original = Path(record["path"]) if record.get("path") else None
-            self.document.replace(record["project"], original, demo=bool(record.get("demo")), recovered=True)
-        except InputError as err:
-            QMessageBox.warning(self, "Cannot restore", f"The autosaved project cannot be used:\n\n{err.message}")
-            self.remove_recovery()
-            return False
-        self.statusBar().showMessage("Restored the autosaved project; save it to keep it.", 10000)
-        return True
+            self.document.replace(orphan.raw, orphan.path, demo=orphan.demo, recovered=True)
+        except (InputError, ValueError, TypeError, KeyError, AttributeError) as err:
+            message = err.message if isinstance(err, InputError) else str(err)
+            lock.release()
+            try:
+                kept = recovery.set_aside(orphan.record)
+            except OSError:
+                kept = orphan.record
+            QMessageBox.warning(
+                self,
+                "Cannot restore",
+                f"The autosaved copy of {orphan.title} cannot be used:\n\n{message}\n\nIt is kept at {kept}.",
+            )
+            return f"The autosaved copy of {orphan.title} could not be used; it is kept at {kept}."
+        self.show_editor()
+        if self.autosave_now():
+            recovery.discard(orphan, lock)
+        else:
+            lock.release()  # this window could not write its own record: keep the orphan for the next launch
+        if orphan.path is not None and not orphan.path.parent.is_dir():
+            return f"The folder of {orphan.path} no longer exists; use Save As."
+        return None
+
+    def open_in_new_window(self, path: str | Path | None) -> MainWindow:
+        """A further window of this process (same settings and recovery folder), shown; opens ``path`` when given."""
+        window = MainWindow(settings=self.settings, recovery_dir=self.recovery_dir, autosave_ms=self._autosave_ms)
+        window.setAttribute(Qt.WidgetAttribute.WA_DeleteOnClose, True)
+        self.spawned.append(window)
+        _OTHER_WINDOWS.append(window)
+        window.destroyed.connect(lambda _obj=None, w=window: _forget(w))
+        if path is not None:
+            window.start(str(path), recover=False)
+        window.show()
+        return window
 
     # ---- about, closing ------------------------------------------------------------------------
 
@@ -849,7 +1034,9 @@ class MainWindow(QMainWindow):
         self.autosave_timer.stop()
         self.runner.wait()
         self.package_writer.wait()
-        self.remove_recovery()
+        if self.recovery_slot is not None:
+            self.recovery_slot.release()
+            self.recovery_slot = None
         event.accept()
 
     def quit_for_smoke_check(self) -> None:
@@ -859,6 +1046,11 @@ class MainWindow(QMainWindow):
         self.package_writer.wait()
         self.hide()
         QApplication.instance().exit(0)
+
+
+def _forget(window: MainWindow) -> None:
+    if window in _OTHER_WINDOWS:
+        _OTHER_WINDOWS.remove(window)
 
 
 def launch(path: str | None = None, demo: bool = False) -> int:

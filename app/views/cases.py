@@ -150,7 +150,11 @@ class CasesTable(QTableView):
         self.activated.connect(self._on_activated)
         self.doubleClicked.connect(self._on_activated)
 
-    def set_result(self, result: WallResult, units: str) -> None:
+    def set_result(self, result: WallResult | None, units: str) -> None:
+        """Show ``result``; None (nothing checked yet) empties the table."""
+        if result is None:
+            self.cases_model.clear()
+            return
         if self.cases_model.set_result(result, units):
             self.resizeColumnsToContents()  # measured once per shape, not per edit
 

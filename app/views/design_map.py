@@ -188,7 +188,9 @@ class DesignMapView(QWidget):
             item.setLabel("left", f"footing thickness D ({unit})")
             self._units = doc.units
             self._grid_key = None
-        self.adopt_all_button.setEnabled(bool(self.adoptable_sizes()))
+        if not doc.checkable:  # site values missing: nothing to size against
+            entry = self.entry = None
+        self.adopt_all_button.setEnabled(doc.checkable and bool(self.adoptable_sizes()))
         if entry is None:
             self.image.clear()
             for curve in self.boundaries:
@@ -198,7 +200,14 @@ class DesignMapView(QWidget):
             self.chosen.setData([], [])
             self.current.setData([], [])
             self.adopt_button.setEnabled(False)
-            self.message.setText("Sizing…" if self.busy else f"Wall {wall.id} has not been sized yet. Press “Size this footing”.")
+            if not doc.checkable:
+                self.message.setText(
+                    "Nothing to size against yet: enter " + ", ".join(doc.missing_labels()) + " (Soil, all walls)."
+                )
+            else:
+                self.message.setText(
+                    "Sizing…" if self.busy else f"Wall {wall.id} has not been sized yet. Press “Size this footing”."
+                )
             return
         s = entry.result
         widths, thicknesses = s.widths / f, s.thicknesses / f

@@ -98,8 +98,12 @@ class DrawingsPanel(QWidget):
         wall = doc.current_wall
         result = doc.current_result
         index = doc.chosen_case_index()
-        direction = result.table.cases[index].direction.value
-        self.picker.fill(result, doc.case_choice)
+        direction = result.table.cases[index].direction.value if result is not None else "+"
+        if result is not None:
+            self.picker.fill(result, doc.case_choice)
+        else:
+            self.picker.clear()
+        self.picker.setEnabled(result is not None)
         self.elevation.render(wall, doc.units, direction)
         units = doc.units
         ft = wall.footing
@@ -108,5 +112,9 @@ class DrawingsPanel(QWidget):
             f"footing L {format_length(wall.footing_length, units)} × B {format_length(ft.width, units)} × "
             f"D {format_length(ft.thickness, units)}{grade}; {lateral_note(wall, direction)}"
         )
+        if result is None:
+            self.pressure.render_unchecked(wall, doc.units, doc.missing_labels())
+            self.caption.setText("No soil pressure until the soil values are entered.")
+            return
         self.pressure.render(wall, result, index, doc.units)
         self.caption.setText(PressurePlot.caption(result, index, doc.units))

@@ -14,9 +14,18 @@ from collections.abc import Callable
 from dataclasses import dataclass
 from typing import Any
 
-from PySide6.QtCore import Qt, QTimer, Signal
+from PySide6.QtCore import QEvent, QObject, Qt, QTimer, Signal
 from PySide6.QtGui import QContextMenuEvent, QKeyEvent, QKeySequence
-from PySide6.QtWidgets import QLabel, QLineEdit, QSizePolicy, QToolButton, QVBoxLayout, QWidget
+from PySide6.QtWidgets import (
+    QAbstractSpinBox,
+    QComboBox,
+    QLabel,
+    QLineEdit,
+    QSizePolicy,
+    QToolButton,
+    QVBoxLayout,
+    QWidget,
+)
 
 from engine.errors import InputError
 from engine.model import Project, Wall
@@ -225,6 +234,7 @@ class QuantityField(QWidget):
         policy.setHeightForWidth(True)
         self.setSizePolicy(policy)
         self._shown = ""
+        self.missing = False  # a site value not entered yet: shown empty with what to enter, not as a typing error
         self._timer = QTimer(self)
         self._timer.setSingleShot(True)
         self._timer.setInterval(LIVE_DELAY_MS)
@@ -240,7 +250,18 @@ class QuantityField(QWidget):
 
     @property
     def invalid(self) -> bool:
-        return self.error.isVisible() or bool(self.edit.property("invalid"))
+        """Whether the field holds an entry the engine refused (a missing site value is not one)."""
+        return not self.missing and (self.error.isVisible() or bool(self.edit.property("invalid")))
+
+    def set_missing(self, message: str | None) -> None:
+        """Mark the field as a site value still to be entered (``message`` says what), or clear that mark."""
+        if message is None:
+            if self.missing:
+                self.missing = False
+                self.set_error(None)
+            return
+        self.set_error(message)
+        self.missing = True
 
     def set_display(self, text: str, force: bool = False) -> None:
         """Show the model's value, unless the user is typing into the field or it holds an error."""
@@ -253,6 +274,7 @@ class QuantityField(QWidget):
         self.edit.setModified(False)
 
     def set_error(self, message: str | None) -> None:
+        self.missing = False
         invalid = message is not None
         if bool(self.edit.property("invalid")) != invalid:
             self.edit.setProperty("invalid", invalid)
@@ -273,10 +295,14 @@ class QuantityField(QWidget):
         self._timer.start()
 
     def flush(self) -> None:
-        """Apply typing still waiting for its pause now (before a save, an export or a sizing)."""
-        if self._timer.isActive():
-            self._timer.stop()
-            self._on_pause()
+        """Apply typing not yet applied now, as Enter would (before a save, an export, a sizing or another wall).
+
+        A valid entry becomes an edit; one that is not valid is marked at the field with its reason.
+        """
+        pending = self._timer.isActive() or self.edit.isModified()
+        self._timer.stop()
+        if pending and self.edit.text() != self._shown:
+            self.commit_requested.emit(self.edit.text(), False)
 
     def _on_pause(self) -> None:
         if self.edit.text().strip() and self.edit.text() != self._shown:
@@ -287,6 +313,38 @@ class QuantityField(QWidget):
         if self.edit.text() != self._shown or self.invalid:
             self.commit_requested.emit(self.edit.text(), False)
         self.session += 1
+
+
+class WheelGuard(QObject):
+    """Keeps the mouse wheel from changing a choice box or spin box that does not have keyboard focus.
+
+    A wheel turned over such a box while scrolling the form would change a design value by accident;
+    the event is passed on to the parent (the scroll area scrolls). Click or Tab into the box first to
+    turn through its values with the wheel.
+    """
+
+    def eventFilter(self, watched: QObject, event: QEvent) -> bool:  # noqa: N802 - Qt's name
+        if event.type() == QEvent.Type.Wheel and isinstance(watched, QWidget) and not watched.hasFocus():
+            event.ignore()  # ignored and filtered: Qt offers the wheel to the parent widgets instead
+            return True
+        return False
+
+
+WHEEL_GUARD = WheelGuard()
+
+
+def guard_wheel(root: QWidget) -> int:
+    """Give every choice box and spin box under ``root`` strong focus and the wheel guard; returns how many.
+
+    Strong focus matters as much as the filter: Qt gives a wheel-focus widget (a choice box's default)
+    the focus on the first turn of the wheel, after which the guard would let the wheel through.
+    """
+    boxes = [*root.findChildren(QComboBox), *root.findChildren(QAbstractSpinBox)]
+    for box in boxes:
+        box.setFocusPolicy(Qt.FocusPolicy.StrongFocus)
+        box.removeEventFilter(WHEEL_GUARD)
+        box.installEventFilter(WHEEL_GUARD)
+    return len(boxes)
 
 
 class Section(QWidget):

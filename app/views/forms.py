@@ -87,15 +87,25 @@ class FieldGroup:
         ('"abc" in Footing width B'), so the window can say that it was discarded.
         """
         doc = self.document
-        project, wall = doc.project, doc.current_wall
         dropped = []
         for field in self.fields:
             if force:
                 if self.unapplied(field):
                     dropped.append(f'"{field.edit.text().strip()}" in {field.spec.label}')
                 field.reset()
-            field.set_display(display_text(field.spec, project, wall), force=force)
+            gap = doc.site_gaps.get(self.full_path(field.spec)) if field.spec.scope == "project" else None
+            if gap is not None:  # a site value not entered: empty, saying what to enter (never a stand-in)
+                if force or not (field.edit.isModified() or field.invalid):
+                    field.set_display("", force=True)
+                    field.set_missing(gap)
+                continue
+            field.set_missing(None)
+            field.set_display(self.display(field), force=force)
         return dropped
+
+    def display(self, field: QuantityField) -> str:
+        doc = self.document
+        return display_text(field.spec, doc.project, doc.current_wall)
 
     def unapplied(self, field: QuantityField) -> bool:
         """Whether the field holds text that never reached the model (refused, or typed and not valid)."""
@@ -139,20 +149,31 @@ class FieldGroup:
         """Turn the field's text into an edit; report a refusal at the field (not while typing)."""
         doc = self.document
         spec = field.spec
+        path = self.full_path(spec)
+        gap = doc.site_gaps.get(path) if spec.scope == "project" else None
+        if gap is not None and not text.strip():  # left empty: still to be entered
+            field.set_display("", force=True)
+            field.set_missing(gap)
+            return False
         try:
             value = to_raw(spec, text, doc.units)
         except InputError as err:
             if not live:
                 field.set_error(field_problem(err.problem, spec.kind, doc.units))
             return False
-        path = self.full_path(spec)
         if value == get_at(doc.raw, path):
             field.set_error(None)
             if not live:
                 field.set_display(display_text(spec, doc.project, doc.current_wall), force=True)
             return True
+        announce = None
+        if spec.scope == "project" and not spec.text:  # a design value of every wall: named in the status bar
+            before = field.shown_text or "not entered"
+            announce = lambda: f"{spec.label}: {before} → {self.display(field)}"  # noqa: E731 - read after the edit
         message = doc.push(
-            commands.SetField(doc, path, value, session=field.session, text=f"Set {_words(spec.label)}"), quiet=live
+            commands.SetField(doc, path, value, session=field.session, text=f"Set {_words(spec.label)}"),
+            quiet=live,
+            announce=announce,
         )
         if message is not None:
             if not live:
@@ -781,18 +802,20 @@ class ProjectForm(QWidget):
         self.sections["Project"] = Section("Project", box, False)
         layout.addWidget(self.sections["Project"])
 
-        self.method.activated.connect(
-            lambda _i: self._set_choice(("criteria", "method"), self.method.currentData(), "Set method")
-        )
+        self._shown_index: dict[tuple[str, ...], int] = {}
+        self.method.activated.connect(lambda _i: self._set_choice(self.method, ("criteria", "method"), "Method", "Set method"))
         self.basis.activated.connect(
-            lambda _i: self._set_choice(("soil", "bearing_basis"), self.basis.currentData(), "Set bearing basis")
+            lambda _i: self._set_choice(self.basis, ("soil", "bearing_basis"), "Allowable is", "Set bearing basis")
         )
 
-    def _set_choice(self, path: tuple[str, ...], value: str, text: str) -> None:
+    def _set_choice(self, box: QComboBox, path: tuple[str, ...], label: str, text: str) -> None:
         doc = self.document
+        value = box.currentData()
         if get_at(doc.raw, path, None) == value:
             return
-        doc.push(commands.SetField(doc, path, value, text=text))
+        before = box.itemText(self._shown_index.get(path, box.currentIndex()))
+        after = box.currentText()
+        doc.push(commands.SetField(doc, path, value, text=text), announce=f"{label}: {before} → {after}")
         self.refresh()
 
     def refresh(self, force: bool = False) -> list[str]:
@@ -800,6 +823,10 @@ class ProjectForm(QWidget):
         dropped = self.group.refresh(force)
         self.method.setCurrentIndex(max(0, self.method.findData(project.criteria.method.value)))
         self.basis.setCurrentIndex(max(0, self.basis.findData(project.soil.bearing_basis.value)))
+        self._shown_index = {
+            ("criteria", "method"): self.method.currentIndex(),
+            ("soil", "bearing_basis"): self.basis.currentIndex(),
+        }
         self.combinations.refresh()
         return dropped
 

@@ -145,6 +145,7 @@ class PressurePlot(pg.PlotWidget):
             self._units = units
         fq = unit_factor(q_unit, Kind.PRESSURE)
         fl = unit_factor(l_unit, Kind.LENGTH)
+        plot.showAxis("left")
         ev = result.evaluation
         vertical = float(ev.vertical[index])
         eccentricity = float(ev.eccentricity[index])
@@ -218,6 +219,29 @@ class PressurePlot(pg.PlotWidget):
         self._placements.append(Placement(self.allowable_label, allowable_spots, -1))
         self.layout_labels()
         return diagram
+
+    def render_unchecked(self, wall: Wall, units: str, missing: list[str]) -> None:
+        """Nothing is checked yet (site values missing): the footing line and a notice of what to enter."""
+        plot = self.getPlotItem()
+        l_unit = LONG[1] if units == "SI" else LONG[0]
+        length = wall.footing_length / unit_factor(l_unit, Kind.LENGTH)
+        self.diagram = None
+        self.shown_q = np.zeros(0)
+        for item in (self.block, self.contact, self.resultant):
+            item.setData([], [])
+        self.base.setData([0.0, length], [0.0, 0.0])
+        self.allowable_label.setText("")
+        self.allowable.setValue(-1e9)  # out of view
+        for line, x in zip(self.kern, (-1e9, -1e9), strict=True):
+            line.setValue(x)
+        for label in (*self.kern_labels, *self.end_labels, self.contact_label):
+            label.setText("")
+        self._y_range = (-0.25, 1.0)
+        plot.setYRange(*self._y_range, padding=0.0)
+        plot.hideAxis("left")  # no pressure: no pressure scale
+        self.notice.setText("Not checked: enter " + ", ".join(missing) + "\n(Soil, all walls) to see the soil pressure")
+        self._placements = [Placement(self.notice, [Spot(0.5 * length, 0.45, (0.5, 0.5))], 1)]
+        self.layout_labels()
 
     def layout_labels(self, *_args) -> None:
         """Place the labels clear of each other, of the allowable line (end values) and of the plot's edges."""

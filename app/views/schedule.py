@@ -23,6 +23,7 @@ from ..style import WARM
 
 # Shown first, so the verdict stays on screen in a narrow window; copy and CSV keep the engine's order.
 EARLY_COLUMNS = ("Wall", "Result", "Overturning ratio", "Sliding ratio", "Bearing ratio", "Footing width", "Footing thickness")
+NOTE = "Sizes as entered; ratios are the governing case of each check."
 
 
 class ScheduleView(QWidget):
@@ -44,8 +45,9 @@ class ScheduleView(QWidget):
         self.copy_button.setToolTip("Copy the schedule (tab-separated, with headers) to paste into a spreadsheet")
         self.export_button = QPushButton("Export CSV…")
         self.export_button.setToolTip("Write the schedule as a CSV file")
-        note = QLabel("Sizes as entered; ratios are the governing case of each check.")
+        self.note = note = QLabel(NOTE)
         note.setObjectName("hint")
+        note.setWordWrap(True)
         buttons = QHBoxLayout()
         buttons.addWidget(note, 1)
         buttons.addWidget(self.copy_button)
@@ -61,9 +63,15 @@ class ScheduleView(QWidget):
 
     def refresh(self) -> None:
         doc = self.document
-        results = [doc.results[w.id] for w in doc.project.walls]
         self.headers = schedule_headers(doc.units)
-        self.rows = schedule_rows(doc.project, results)
+        if not doc.checkable:  # nothing is checked until the site values are in
+            self.rows = []
+            self.note.setText("Not checked yet: enter " + ", ".join(doc.missing_labels()) + " (Soil, all walls).")
+        else:
+            self.rows = schedule_rows(doc.project, [doc.results[w.id] for w in doc.project.walls])
+            self.note.setText(NOTE)
+        self.copy_button.setEnabled(bool(self.rows))
+        self.export_button.setEnabled(bool(self.rows))
         self.table.setColumnCount(len(self.headers))
         self.table.setHorizontalHeaderLabels(self.headers)
         self._order_columns()

@@ -121,7 +121,27 @@ class VerdictView(QWidget):
         layout.addLayout(grid)
         layout.addWidget(self.hint)
 
+    def render_unchecked(self, wall: Wall, missing: list[str]) -> None:
+        """The project cannot be checked (site values missing): say so, and what to enter, in place of ratios."""
+        for row in self.rows.values():
+            for widget in row:
+                widget.hide()
+        self.headline.setText(f"Wall {wall.id}: not checked — the project's soil values are still to be entered")
+        _set_colour(self.headline, WARM, bold=True)
+        self.hint.setText(
+            "Enter " + ", ".join(missing) + " from the geotechnical report (Soil, all walls). Until then Kernline "
+            "checks nothing: it does not guess site values."
+        )
+        self.checked = False
+
+    checked = True
+
     def render(self, wall: Wall, result: WallResult) -> None:  # type: ignore[override]
+        if not self.checked:
+            for row in self.rows.values():
+                for widget in row:
+                    widget.show()
+            self.checked = True
         for check in ALL_CHECKS:
             g = result.governing[check]
             _name, bar, ratio, verdict, case = self.rows[check]

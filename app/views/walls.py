@@ -7,7 +7,7 @@ from __future__ import annotations
 
 import math
 
-from PySide6.QtCore import Qt
+from PySide6.QtCore import Qt, QTimer
 from PySide6.QtGui import QColor
 from PySide6.QtWidgets import (
     QAbstractItemView,
@@ -25,7 +25,7 @@ from engine.units import format_length
 
 from .. import commands
 from ..document import ProjectDocument
-from ..style import GRAPHITE, NG_MARK, OK_MARK, WARM
+from ..style import GRAPHITE, MUTED, NG_MARK, OK_MARK, WARM
 
 COLUMNS = ("Wall", "Footing B × D", "Worst")
 
@@ -111,9 +111,12 @@ class WallsView(QWidget):
                 self.tree.addTopLevelItem(item)
             for i, wall in enumerate(walls):
                 item = self.tree.topLevelItem(i)
-                result = doc.results[wall.id]
-                worst = result.worst
+                result = doc.result_of(wall)
                 size = f"{format_length(wall.footing.width, units)} × {format_length(wall.footing.thickness, units)}"
+                if result is None:  # site values missing: nothing is checked
+                    self._show_unchecked(item, wall.id, size, wall.label)
+                    continue
+                worst = result.worst
                 if math.isinf(worst.ratio):
                     worst_text = "no demand"
                 else:
@@ -138,6 +141,15 @@ class WallsView(QWidget):
         finally:
             self._refreshing = False
 
+    @staticmethod
+    def _show_unchecked(item: QTreeWidgetItem, wall_id: str, size: str, label: str) -> None:
+        for col, text in enumerate((wall_id, size, "not checked")):
+            if item.text(col) != text:
+                item.setText(col, text)
+        item.setForeground(2, QColor(MUTED))
+        item.setToolTip(0, label or wall_id)
+        item.setToolTip(2, "Not checked: the project's soil values are still to be entered")
+
     def _show(self, message: str | None) -> None:
         self.message.setText(message or "")
         self.message.setVisible(bool(message))
@@ -147,7 +159,8 @@ class WallsView(QWidget):
     def _on_current_item_changed(self, current: QTreeWidgetItem | None, _previous: QTreeWidgetItem | None) -> None:
         if self._refreshing or current is None:
             return
-        self.document.set_current_index(self.tree.indexOfTopLevelItem(current))
+        if not self.document.set_current_index(self.tree.indexOfTopLevelItem(current)):
+            QTimer.singleShot(0, self.refresh)  # staying on the wall: the list shows it selected again
 
     def _on_item_changed(self, item: QTreeWidgetItem, column: int) -> None:
         if self._refreshing or column != 0:

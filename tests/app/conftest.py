@@ -12,6 +12,7 @@ from pathlib import Path
 import pytest
 from PySide6.QtCore import QSettings
 from PySide6.QtWidgets import QFileDialog, QMessageBox
+from shiboken6 import isValid
 
 from engine.resources import resource_path
 
@@ -26,6 +27,10 @@ class Dialogs:
         self.answer = QMessageBox.StandardButton.Discard
         self.save_path: str = ""
         self.open_path: str = ""
+        # the launch question about work left by windows that did not close: "restore", "discard" or "later"
+        self.recovery_answer = "later"
+        self.recovery_untick: set[int] = set()  # rows left unticked when restoring
+        self.recovery_offers: list[list] = []  # the orphans offered, per question
 
     def question(self, _parent, title, text, *args, **kwargs):
         self.questions.append(f"{title}: {text}")
@@ -38,6 +43,18 @@ class Dialogs:
     def about(self, _parent, title, text):
         self.abouts.append(f"{title}: {text}")
 
+    def recovery(self, _parent, orphans):
+        from app.views.recovery_dialog import RecoveryChoice
+
+        orphans = list(orphans)
+        self.recovery_offers.append(orphans)
+        if self.recovery_answer == "restore":
+            ticked = tuple(o for i, o in enumerate(orphans) if i not in self.recovery_untick)
+            return RecoveryChoice(restore=ticked, discard=tuple(o for o in orphans if o not in ticked))
+        if self.recovery_answer == "discard":
+            return RecoveryChoice(discard=tuple(orphans))
+        return RecoveryChoice()
+
 
 @pytest.fixture(autouse=True)
 def dialogs(monkeypatch: pytest.MonkeyPatch) -> Dialogs:
@@ -45,6 +62,9 @@ def dialogs(monkeypatch: pytest.MonkeyPatch) -> Dialogs:
     monkeypatch.setattr(QMessageBox, "question", d.question)
     monkeypatch.setattr(QMessageBox, "warning", d.warning)
     monkeypatch.setattr(QMessageBox, "about", d.about)
+    from app.views.recovery_dialog import RecoveryDialog
+
+    monkeypatch.setattr(RecoveryDialog, "ask", staticmethod(d.recovery))
     monkeypatch.setattr(QFileDialog, "getSaveFileName", lambda *a, **k: (d.save_path, ""))
     monkeypatch.setattr(QFileDialog, "getOpenFileName", lambda *a, **k: (d.open_path, ""))
     return d
@@ -82,6 +102,10 @@ def make_window(qtbot, tmp_path: Path, settings: QSettings):
 
     yield make
     for window in made:
+        for other in list(window.spawned):  # windows it opened for restored documents
+            if isValid(other):
+                other.runner.wait()
+                other.close()
         window.runner.wait()
 
 

@@ -127,6 +127,8 @@ def test_the_undo_menu_keeps_the_labels_case(qtbot, window):
 def test_a_wall_without_lateral_load_says_so(qtbot, window):
     """A new project's wall (dead load only): the elevation says "no lateral load"; "no demand" is said once per row."""
     window.new_project()
+    for path, text in ((("soil", "allowable_bearing"), "2000"), (("soil", "friction"), "0.35"), (("soil", "unit_weight"), "110")):
+        type_into(qtbot, field(window, *path), text)
     assert "no lateral load" in window.drawings.elevation_caption.text()
     assert "direction" not in window.drawings.elevation_caption.text()
     ratio, mark, _case = window.verdict.texts()["overturning"]

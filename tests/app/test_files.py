@@ -1,5 +1,5 @@
-"""Project files from the window: open, save, save as, recent files, the unsaved-changes prompt,
-the modified marker, and recovery of autosaved work after a crash."""
+"""Project files from the window: open, save, save as, recent files, the unsaved-changes prompt and
+the modified marker (recovery after a crash: test_recovery.py)."""
 
 from __future__ import annotations
 
@@ -97,39 +97,3 @@ def test_recent_files_are_remembered_in_settings(make_window, demo_file, setting
     assert window.recent_files() == [str(demo_file.resolve())]
     assert settings.value("recent_files") == [str(demo_file.resolve())]
     assert window.recent_menu.actions()[0].toolTip() == str(demo_file.resolve())
-
-
-def test_crash_recovery_offers_the_autosaved_project(qtbot, make_window, demo_file, dialogs):
-    """Autosave writes the unsaved project; a window started after a crash restores it when asked."""
-    crashed = make_window(str(demo_file), autosave_ms=50)
-    type_into(qtbot, field(crashed, "footing", "width"), "23")
-    qtbot.waitUntil(crashed.recovery_path.is_file, timeout=5000)
-    raw_at_crash = json.loads(json.dumps(crashed.document.raw))
-
-    dialogs.answer = QMessageBox.StandardButton.Yes
-    restarted = make_window(None, demo=False)
-    assert any("did not close normally" in q for q in dialogs.questions)
-    doc = restarted.document
-    assert doc.raw == raw_at_crash
-    assert doc.path == demo_file
-    assert doc.dirty and restarted.isWindowModified()
-    assert restarted.save()
-    assert not restarted.recovery_path.exists()
-    assert load_project(demo_file).raw["walls"][0]["footing"]["width"] == "23 in"
-    crashed.document.undo_stack.setClean()
-
-
-def test_declining_recovery_removes_the_autosave(qtbot, make_window, demo_file, dialogs):
-    crashed = make_window(str(demo_file))
-    type_into(qtbot, field(crashed, "footing", "width"), "23")
-    assert crashed.autosave_now()
-    dialogs.answer = QMessageBox.StandardButton.No
-    restarted = make_window(None, demo=False)
-    assert not restarted.recovery_path.exists()
-    assert [w.id for w in restarted.document.project.walls] == ["W1"]
-    crashed.document.undo_stack.setClean()
-
-
-def test_nothing_is_autosaved_without_changes(window):
-    assert not window.autosave_now()
-    assert not window.recovery_path.exists()

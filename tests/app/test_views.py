@@ -57,7 +57,7 @@ def test_schedule_copy_and_csv_export(qtbot, window, tmp_path, dialogs):
     assert copied[3].split("\t")[0] == "C3" and copied[3].endswith("FAIL")
     dialogs.save_path = str(tmp_path / "schedule.csv")
     assert window.export_schedule()
-    assert (tmp_path / "schedule.csv").read_text(encoding="utf-8") == schedule_csv(doc.project)
+    assert (tmp_path / "schedule.csv").read_bytes().decode("utf-8-sig") == schedule_csv(doc.project)
 
 
 def test_about_box_and_caution_line_carry_the_caution(window, dialogs):
