@@ -180,27 +180,36 @@ def _save_demo(path: str) -> int:
 
 
 def _check(path: str, as_json: bool) -> int:
+    from engine.input_warnings import input_warnings
     from engine.project_file import load_project
     from engine.results import check_project, results_json
-    from engine.summary import check_table
+    from engine.summary import check_table, warnings_text
 
     check_input_file(path)
     doc = load_project(path)
     results = check_project(doc.project)
+    _warn(warnings_text(input_warnings(doc.project, results)))
     if as_json:
-        print(json.dumps(results_json(results), indent=2, allow_nan=False))
+        print(json.dumps(results_json(results, project=doc.project), indent=2, allow_nan=False))
     else:
         print(check_table(doc.project, results))
     return EXIT_OK if all(r.passes for r in results) else EXIT_FAIL
 
 
+def _warn(text: str) -> None:
+    """Warnings go to stderr (one line each); they never change the exit code."""
+    if text:
+        print(text, file=sys.stderr)
+
+
 def _size(path: str, as_json: bool, write: bool) -> int:
     from dataclasses import replace
 
+    from engine.input_warnings import input_warnings
     from engine.project_file import load_project, save_project, with_footing_sizes
     from engine.results import check_wall, results_json
     from engine.sizing import size_footing
-    from engine.summary import size_table
+    from engine.summary import size_table, warnings_text
 
     check_input_file(path)
     if write:  # before the sizing, which takes a while: a file that cannot be written is said at once
@@ -222,8 +231,10 @@ def _size(path: str, as_json: bool, write: bool) -> int:
         }
         save_project(path, with_footing_sizes(doc.raw, sizes, project.units))
         written = len(sizes)
+    _warn(warnings_text(input_warnings(project, results)))
     if as_json:
-        print(json.dumps(results_json(tuple(results), {s.wall_id: s.as_json() for s in sized}), indent=2, allow_nan=False))
+        sizing = {s.wall_id: s.as_json() for s in sized}
+        print(json.dumps(results_json(tuple(results), sizing, project=project), indent=2, allow_nan=False))
     else:
         print(size_table(project, sized, results))
     if written is not None:

@@ -42,7 +42,8 @@ def _table(headers: Sequence[str], rows: Sequence[Sequence[str]]) -> str:
 
 
 def check_table(project: Project, results: Sequence[WallResult]) -> str:
-    """One row per wall: footing, the three governing ratios with their cases, and the verdict."""
+    """One row per wall: footing, the three governing ratios with their cases, and the verdict; then
+    the values taken by default, and the caution."""
     headers = ["Wall", "Footing B x D x L", *[c.value.capitalize() for c in ALL_CHECKS], "Governing case (worst)", "Result"]
     rows = []
     for r in results:
@@ -58,7 +59,8 @@ def check_table(project: Project, results: Sequence[WallResult]) -> str:
         )
     failing = sum(not r.passes for r in results)
     title = f"{project.info.name or 'Project'}: {len(results)} wall(s), {failing} failing"
-    return f"{title}\n\n{_table(headers, rows)}\n\n{CAUTION}"
+    listed = assumptions_text(project)
+    return f"{title}\n\n{_table(headers, rows)}\n\n" + (f"{listed}\n\n" if listed else "") + CAUTION
 
 
 def size_table(project: Project, sized: Sequence[SizingResult], results: Sequence[WallResult]) -> str:
@@ -81,7 +83,8 @@ def size_table(project: Project, sized: Sequence[SizingResult], results: Sequenc
                 note,
             ]
         )
-    return f"{_table(headers, rows)}\n\n{CAUTION}"
+    listed = assumptions_text(project)
+    return f"{_table(headers, rows)}\n\n" + (f"{listed}\n\n" if listed else "") + CAUTION
 
 
 def assumptions_text(project: Project) -> str:

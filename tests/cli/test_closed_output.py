@@ -1,5 +1,5 @@
 """A standard output closed early (``kernline check --json FILE | head -1``) ends the command quietly:
-exit code 141, nothing on stderr, no traceback and no "internal error"."""
+exit code 141, nothing on stderr but the project's warnings, no traceback and no "internal error"."""
 
 from __future__ import annotations
 
@@ -12,6 +12,11 @@ import pytest
 from cli_projects import demo_project, demo_raw, many_walls, write_project
 
 from app import cli
+
+
+def quiet(stderr: str) -> bool:
+    """Nothing on stderr but warnings about the project (the demo has some)."""
+    return all(line.startswith("warning: ") for line in stderr.splitlines())
 
 
 def run_with_closed_stdout(*args: str) -> subprocess.CompletedProcess[str]:
@@ -30,7 +35,7 @@ def run_with_closed_stdout(*args: str) -> subprocess.CompletedProcess[str]:
 def test_closed_stdout_ends_quietly(tmp_path: Path, args: list[str]) -> None:
     project = demo_project(tmp_path / "p.kernline")
     result = run_with_closed_stdout(args[0], str(project), *args[1:])
-    assert result.stderr == ""
+    assert quiet(result.stderr)
     assert result.returncode == cli.EXIT_CLOSED_OUTPUT == 141
 
 
@@ -39,7 +44,7 @@ def test_size_write_still_writes_when_stdout_is_closed(tmp_path: Path) -> None:
     project = demo_project(tmp_path / "p.kernline")
     before = project.read_text(encoding="utf-8")
     result = run_with_closed_stdout("size", str(project), "--write")
-    assert result.returncode == 141 and result.stderr == ""
+    assert result.returncode == 141 and quiet(result.stderr)
     assert project.read_text(encoding="utf-8") != before
 
 
@@ -49,4 +54,4 @@ def test_pipe_into_head_prints_one_line_and_no_error(tmp_path: Path) -> None:
     command = f'set -o pipefail 2>/dev/null; "{sys.executable}" -m app.cli check --json "{project}" | head -1; echo "status $?"'
     result = subprocess.run(["bash", "-c", command], capture_output=True, text=True, timeout=120)
     assert result.stdout == "{\nstatus 141\n"
-    assert result.stderr == ""
+    assert quiet(result.stderr)
