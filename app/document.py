@@ -23,7 +23,8 @@ from PySide6.QtCore import QObject, Signal
 from PySide6.QtGui import QUndoStack
 
 from engine.errors import InputError
-from engine.model import Check, DesignCriteria, Project, SoilProperties, Wall
+from engine.input_warnings import InputWarning, input_warnings
+from engine.model import Assumption, Check, DesignCriteria, Project, SoilProperties, Wall
 from engine.project_file import FORMAT, VERSION, atomic_write_text, dumps_project, load_project, parse_project, save_project
 from engine.resources import resource_path
 from engine.results import WallResult, check_wall
@@ -455,6 +456,37 @@ class ProjectDocument(QObject):
     def result_of(self, wall: Wall) -> WallResult | None:
         return self.results.get(wall.id)
 
+    @property
+    def assumptions(self) -> tuple[Assumption, ...]:
+        """The values the engineer did not enter, which the engine took (none for a site value still missing)."""
+        gaps = {path_text(p) for p in self.site_gaps}
+        return tuple(a for a in self.project.assumptions if a.field not in gaps)
+
+    def assumptions_by_field(self) -> dict[str, Assumption]:
+        return {a.field: a for a in self.assumptions}
+
+    def warnings(self) -> tuple[InputWarning, ...]:
+        """The engine's warnings about inputs that are legal but usually a mistake (results' too, once checked)."""
+        key = (id(self.project), id(self.results))
+        if self._warnings_key != key:
+            results = [self.results[w.id] for w in self.project.walls] if self.checkable else None
+            gaps = {path_text(p) for p in self.site_gaps}
+            self._warnings = tuple(w for w in input_warnings(self.project, results) if w.field not in gaps)
+            self._warnings_key = key
+        return self._warnings
+
+    _warnings_key: tuple[int, int] | None = None
+    _warnings: tuple[InputWarning, ...] = ()
+
+    def field_words(self, field: str) -> str:
+        """A field path in the words the window shows: "walls[0].footing.unit_weight" -> "N1 · Concrete unit weight"."""
+        wall_index, rest = split_field(field)
+        if wall_index is not None:
+            walls = self.project.walls
+            where = walls[wall_index].id if 0 <= wall_index < len(walls) else f"wall {wall_index + 1}"
+            return f"{where} · {_rest_words(rest, self.field_labels)}" if rest else where
+        return _rest_words(field, self.field_labels)
+
     def missing_labels(self) -> list[str]:
         """The words beside each missing site value ("Allowable bearing", "Friction coefficient or Cohesion")."""
         labels = [self.field_labels.get(path_text(p), path_text(p)) for p in self.site_gaps]
@@ -592,6 +624,39 @@ def _same_document(text: str, raw: dict[str, Any]) -> bool:
         return False
 
 
+def split_field(field: str) -> tuple[int | None, str]:
+    """ "walls[3].loads[4].reverses" -> (3, "loads[4].reverses"); a project field -> (None, field)."""
+    if field.startswith("walls["):
+        close = field.find("]")
+        number = field[6:close]
+        if close > 6 and number.isdigit():
+            return int(number), field[close + 2 :]
+    return None, field
+
+
+def _rest_words(rest: str, labels: dict[str, str]) -> str:
+    if rest in labels:
+        return labels[rest]
+    if rest.startswith("loads["):
+        close = rest.find("]")
+        row = rest[6:close]
+        tail = rest[close + 2 :].replace("_", " ")
+        if row.isdigit():
+            return f"load row {int(row) + 1}" + (f", {tail}" if tail else "")
+    if rest in _SECTIONS:
+        return _SECTIONS[rest]
+    return rest.replace("criteria.", "").replace(".", " ").replace("_", " ")
+
+
+_SECTIONS = {
+    "footing": "footing",
+    "stem": "stem",
+    "loads": "loads",
+    "sizing": "sizing range",
+    "soil": "soil",
+    "criteria": "criteria",
+}
+
 _FRIENDLY = {
     "footing.width": "footing width B",
     "footing.thickness": "footing thickness D",
@@ -637,6 +702,7 @@ __all__ = [
     "next_wall_id",
     "parse_for_window",
     "site_gaps",
+    "split_field",
     "path_text",
     "readable",
     "unique_wall_id",

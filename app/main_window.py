@@ -42,7 +42,7 @@ from engine.schedule import write_schedule
 from engine.units import format_length
 
 from . import commands, recovery
-from .document import ProjectDocument, absolute
+from .document import ProjectDocument, absolute, split_field
 from .recovery import Orphan, RecoverySlot
 from .runner import PackageOutcome, PackageWriter, SizingBatch, SizingRunner
 from .style import STYLE_SHEET, configure_pyqtgraph
@@ -51,6 +51,7 @@ from .views.design_map import DesignMapView
 from .views.drawings import DrawingsPanel
 from .views.fields import guard_wheel
 from .views.forms import ProjectForm, WallForm
+from .views.notes import AssumptionsView, WarningsView
 from .views.recovery_dialog import RecoveryDialog
 from .views.schedule import ScheduleView
 from .views.verdict import VerdictView
@@ -156,11 +157,15 @@ class MainWindow(QMainWindow):
         self.tabs.addTab(self.cases_table, "All cases")
         self.tabs.addTab(self.design_map, "Design map")
         self.tabs.addTab(self.schedule, "Schedule")
+        self.assumptions_view = AssumptionsView(doc)
+        self.tabs.addTab(self.assumptions_view, "Assumed values")
+        self.warnings_view = WarningsView(doc)
         lower = QWidget()
         lower_layout = QVBoxLayout(lower)
         lower_layout.setContentsMargins(0, 0, 0, 0)
         lower_layout.setSpacing(2)
         lower_layout.addWidget(self.verdict)
+        lower_layout.addWidget(self.warnings_view)  # right under the verdict's rows, the column's full width
         lower_layout.addWidget(self.tabs, 1)
         right = QSplitter(Qt.Orientation.Vertical)
         right.addWidget(self.drawings)
@@ -343,6 +348,8 @@ class MainWindow(QMainWindow):
         self.tabs.currentChanged.connect(self._on_tab_changed)
         self.design_map.size_requested.connect(self.size_current)
         self.design_map.size_all_requested.connect(self.size_all)
+        self.warnings_view.field_requested.connect(self.show_field)
+        self.assumptions_view.field_requested.connect(self.show_field)
         self.schedule.export_requested.connect(self.export_schedule)
         self.package_writer.finished.connect(self._on_package_written)
         self.welcome.demo_requested.connect(self.open_demo)
@@ -432,6 +439,10 @@ class MainWindow(QMainWindow):
             self.verdict.render_unchecked(doc.current_wall, doc.missing_labels())
         else:
             self.verdict.render(doc.current_wall, result)
+        self.warnings_view.refresh()
+        self.assumptions_view.refresh()
+        count = self.assumptions_view.count
+        self.tabs.setTabText(self.tabs.indexOf(self.assumptions_view), f"Assumed values ({count})" if count else "Assumed values")
         current = self.tabs.currentWidget()
         if current is self.cases_table:
             self.cases_table.set_result(result, doc.units)
@@ -459,6 +470,7 @@ class MainWindow(QMainWindow):
         elif current is self.design_map:
             self._give_map_room()
             self._render_map(auto_size=True)
+        self.warnings_view.set_folded(current is self.design_map)  # the map needs the height
         if current is not self.design_map and self._sizes_before_map is not None:
             self.right_splitter.setSizes(self._sizes_before_map)
             self._sizes_before_map = None
@@ -473,6 +485,22 @@ class MainWindow(QMainWindow):
         if total and sizes[1] < 0.46 * total:
             self._sizes_before_map = sizes
             self.right_splitter.setSizes([int(0.54 * total), total - int(0.54 * total)])
+
+    def show_field(self, field: str) -> bool:
+        """Go to an input named by the engine's field path: select its wall, open its section, focus it.
+
+        "walls[2].footing.unit_weight" focuses that field of wall 3; "walls[3].loads[4]" selects row 5 of
+        the loads table; "soil.cohesion" focuses the project's field; "walls[1].footing" opens the
+        footing section. Returns False when the wall cannot be shown (an entry in error kept it) or the
+        field is not one the window shows.
+        """
+        doc = self.document
+        wall_index, rest = split_field(field)
+        if wall_index is not None:
+            if not 0 <= wall_index < len(doc.project.walls) or not doc.set_current_index(wall_index):
+                return False
+            return self.wall_form.show_field(rest, self.forms_scroll)
+        return self.project_form.show_field(field, self.forms_scroll)
 
     def _on_case_activated(self, index: int) -> None:
         result = self.document.current_result

@@ -45,9 +45,12 @@ QLabel#sectionTitle {{ font-weight: 600; color: {GRAPHITE}; }}
 QLabel#fieldError {{ color: {WARM}; }}
 QLabel#hint {{ color: {MUTED}; }}
 QLabel#verdictHead {{ font-weight: 600; }}
-QLineEdit[invalid="true"] {{ border: 2px solid {WARM}; background: {WARM_LIGHT}; }}
 QLineEdit {{ border: 1px solid {HAIRLINE}; border-radius: 3px; padding: 2px 4px; background: white; }}
+QLineEdit[assumed="true"] {{ border: 1px dashed {MUTED}; background: {PAPER}; }}
 QLineEdit:focus {{ border: 1px solid {ACCENT}; }}
+QLineEdit[invalid="true"] {{ border: 2px solid {WARM}; background: {WARM_LIGHT}; }}
+QLabel#warningsTitle {{ font-weight: 600; color: {WARM}; }}
+QListWidget#warningsList {{ border: 1px solid {HAIRLINE}; background: {PAPER}; }}
 QToolButton#sectionToggle {{ border: none; font-weight: 600; text-align: left; padding: 3px 0px; }}
 QTreeWidget::item:selected, QTableView::item:selected, QListWidget::item:selected {{
     background: {ACCENT_LIGHT}; color: {GRAPHITE};
@@ -57,6 +60,33 @@ QToolBar {{ border: none; spacing: 4px; background: {PANEL}; }}
 QToolBar QToolButton:checked {{ background: {ACCENT}; color: white; border-radius: 3px; }}
 QPushButton {{ padding: 3px 10px; }}
 """
+
+
+ASSUMED_WORD = "assumed"
+
+
+def assumed_icon(size: int = 12):
+    """Kernline's marker of a value the engineer did not enter: a small open diamond with a dot, in the accent.
+
+    Drawn here (not taken from any icon set); quiet on purpose: the value is legal, only not the engineer's own.
+    """
+    from PySide6.QtCore import QPointF, Qt
+    from PySide6.QtGui import QColor, QIcon, QPainter, QPen, QPixmap, QPolygonF
+
+    pixmap = QPixmap(size, size)
+    pixmap.fill(Qt.GlobalColor.transparent)
+    p = QPainter(pixmap)
+    p.setRenderHint(QPainter.RenderHint.Antialiasing, True)
+    c = size / 2
+    r = size / 2 - 1.5
+    p.setPen(QPen(QColor(ACCENT), 1.3))
+    p.setBrush(Qt.BrushStyle.NoBrush)
+    p.drawPolygon(QPolygonF([QPointF(c, c - r), QPointF(c + r, c), QPointF(c, c + r), QPointF(c - r, c)]))
+    p.setPen(Qt.PenStyle.NoPen)
+    p.setBrush(QColor(ACCENT))
+    p.drawEllipse(QPointF(c, c), 1.3, 1.3)
+    p.end()
+    return QIcon(pixmap)
 
 
 def mark(passes: bool | None) -> str:

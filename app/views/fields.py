@@ -31,10 +31,11 @@ from engine.errors import InputError
 from engine.model import Project, Wall
 from engine.units import Kind, parse_quantity
 
+from ..style import ASSUMED_WORD, assumed_icon
+
 # Typing pauses this long before a valid entry is applied live (ms); Enter or leaving applies at once.
 LIVE_DELAY_MS = 350
 
-_BARE = re.compile(r"^\s*[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?\s*$")
 _INTEGER = re.compile(r"^\s*[-+]?\d+\s*$")
 
 # Display units per kind of field: (US, SI).
@@ -107,6 +108,11 @@ def display_text(spec: FieldSpec, project: Project, wall: Wall) -> str:
     return show(float(value), spec.kind, spec.unit(project.units))
 
 
+def assumed_tip(assumption: Any) -> str:
+    """The tooltip of an assumed value: the word, the value taken and its basis."""
+    return f"{ASSUMED_WORD.capitalize()}: {assumption.value} — {assumption.basis}. Type a value to make it your own."
+
+
 # Examples of text each kind accepts, shown in SI projects in place of the engine's US example.
 SI_EXAMPLES = {
     Kind.LENGTH: "600 mm",
@@ -135,11 +141,32 @@ def to_raw(spec: FieldSpec, text: str, system: str) -> Any:
         return text
     if spec.kind is None:
         return parse_number(text)
-    unit = spec.unit(system)
-    parse_quantity(text, spec.kind, default_unit=unit)  # refuses the wrong dimension or a typo
-    if _BARE.match(text):
-        return f"{text} {unit}"
+    return quantity_text(text, spec.kind, spec.unit(system))
+
+
+def quantity_text(text: str, kind: Kind, unit: str) -> str:
+    """What a project file stores for ``text`` typed where ``unit`` is shown: a bare number gets that unit.
+
+    Raises InputError (the engine's words) when the text is not a quantity of ``kind``. Whether the
+    text is a bare number is the engine's reading too: it is one exactly when it reads with the shown
+    unit and not without one, so the stored text always means what the field showed.
+    """
+    text = " ".join(text.split())
+    value = parse_quantity(text, kind, default_unit=unit)  # refuses the wrong dimension or a typo
+    try:
+        parse_quantity(text, kind)
+    except InputError:
+        stored = f"{text} {unit}"
+        assert math.isclose(parse_quantity(stored, kind), value, rel_tol=1e-12, abs_tol=0.0)
+        return stored
     return text
+
+
+def unit_label(spec: FieldSpec, system: str) -> str:
+    """The field's label with the unit a bare number is read in: "Footing width B (in)"; plain numbers keep their label."""
+    if spec.kind is None or spec.units is None:
+        return spec.label
+    return f"{spec.label} ({spec.unit(system)})"
 
 
 def parse_number(text: str) -> float | int:
@@ -234,6 +261,8 @@ class QuantityField(QWidget):
         policy.setHeightForWidth(True)
         self.setSizePolicy(policy)
         self._shown = ""
+        self.assumption: Any = None  # the engine's Assumption for this field, when the engineer did not enter it
+        self._assumed_action: Any = None
         self.missing = False  # a site value not entered yet: shown empty with what to enter, not as a typing error
         self._timer = QTimer(self)
         self._timer.setSingleShot(True)
@@ -273,6 +302,35 @@ class QuantityField(QWidget):
             self.edit.setCursorPosition(0)
         self.edit.setModified(False)
 
+    def set_assumed(self, assumption: Any) -> None:
+        """Mark the value as assumed (the engine's :class:`engine.model.Assumption`), or clear the mark.
+
+        The mark is quiet: a dashed outline and Kernline's small open diamond inside the field; its
+        tooltip says "assumed", the value taken and its basis. Typing a value makes it the engineer's own.
+        """
+        if assumption == self.assumption:
+            return
+        self.assumption = assumption
+        on = assumption is not None
+        if bool(self.edit.property("assumed")) != on:
+            self.edit.setProperty("assumed", on)
+            self.edit.style().unpolish(self.edit)
+            self.edit.style().polish(self.edit)
+        if on and self._assumed_action is None:
+            self._assumed_action = self.edit.addAction(assumed_icon(), QLineEdit.ActionPosition.TrailingPosition)
+        if self._assumed_action is not None:
+            self._assumed_action.setVisible(on)
+            self._assumed_action.setToolTip(assumed_tip(assumption) if on else "")
+        self._update_tip()
+
+    def _update_tip(self) -> None:
+        tip = self.spec.tip
+        if self.assumption is not None:
+            tip = f"{assumed_tip(self.assumption)}\n\n{tip}"
+        if not self.error.isHidden() and self.error.text():
+            tip = f"{self.error.text()}\n\n{tip}"
+        self.edit.setToolTip(tip)
+
     def set_error(self, message: str | None) -> None:
         self.missing = False
         invalid = message is not None
@@ -282,7 +340,7 @@ class QuantityField(QWidget):
             self.edit.style().polish(self.edit)
         self.error.setText(message or "")
         self.error.setVisible(invalid)
-        self.edit.setToolTip(self.spec.tip if not invalid else f"{message}\n\n{self.spec.tip}")
+        self._update_tip()
 
     def reset(self) -> None:
         """Drop any typing and error (another wall or project is shown)."""

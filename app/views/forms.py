@@ -9,7 +9,7 @@ from collections.abc import Sequence
 from typing import Any
 
 from PySide6.QtCore import Qt
-from PySide6.QtGui import QBrush, QColor
+from PySide6.QtGui import QBrush, QColor, QIcon
 from PySide6.QtWidgets import (
     QAbstractItemView,
     QCheckBox,
@@ -19,6 +19,7 @@ from PySide6.QtWidgets import (
     QHeaderView,
     QLabel,
     QPushButton,
+    QScrollArea,
     QStyledItemDelegate,
     QTableWidget,
     QTableWidgetItem,
@@ -29,11 +30,11 @@ from PySide6.QtWidgets import (
 from engine.combinations import combinations_of
 from engine.errors import InputError
 from engine.model import ALL_CHECKS, LateralLoad, LineLoad, LoadCase, PointLoad
-from engine.units import Kind, parse_quantity
+from engine.units import Kind
 
 from .. import commands
 from ..document import ProjectDocument, get_at, path_text
-from ..style import WARM_LIGHT
+from ..style import WARM_LIGHT, assumed_icon
 from .fields import (
     CRITERIA_FIELDS,
     FOOTING_FIELDS,
@@ -48,12 +49,15 @@ from .fields import (
     FieldSpec,
     QuantityField,
     Section,
+    assumed_tip,
     display_text,
     field_problem,
     parse_number,
+    quantity_text,
     show,
     to_raw,
     trim,
+    unit_label,
 )
 
 
@@ -63,11 +67,13 @@ class FieldGroup:
     def __init__(self, document: ProjectDocument) -> None:
         self.document = document
         self.fields: list[QuantityField] = []
+        self.labels: dict[int, QLabel] = {}  # by id of the field: the words beside it, with its unit
 
     def add(self, spec: FieldSpec, form: QFormLayout) -> QuantityField:
         field = QuantityField(spec)
-        label = QLabel(spec.label)
+        label = QLabel(unit_label(spec, self.document.units))
         label.setToolTip(spec.tip)
+        self.labels[id(field)] = label
         label.setBuddy(field.edit)
         form.addRow(label, field)
         field.commit_requested.connect(lambda text, live, f=field: self.commit(f, text, live))
@@ -88,7 +94,13 @@ class FieldGroup:
         """
         doc = self.document
         dropped = []
+        assumed = doc.assumptions_by_field()
         for field in self.fields:
+            label = self.labels[id(field)]
+            words = unit_label(field.spec, doc.units)
+            if label.text() != words:
+                label.setText(words)
+            field.set_assumed(assumed.get(self.field_key(field.spec)))
             if force:
                 if self.unapplied(field):
                     dropped.append(f'"{field.edit.text().strip()}" in {field.spec.label}')
@@ -102,6 +114,10 @@ class FieldGroup:
             field.set_missing(None)
             field.set_display(self.display(field), force=force)
         return dropped
+
+    def field_key(self, spec: FieldSpec) -> str:
+        """The field's path as the engine names it ("walls[0].footing.unit_weight", "soil.cohesion")."""
+        return path_text(self.full_path(spec))
 
     def display(self, field: QuantityField) -> str:
         doc = self.document
@@ -200,6 +216,22 @@ class FieldGroup:
             field.edit.setModified(False)
 
 
+def _focus(group: FieldGroup, rest: str, section: Section | None, scroll: QScrollArea) -> bool:
+    """Open ``section`` and focus the field whose path is ``rest`` (or, for a section's name, its first field)."""
+    fields = [f for f in group.fields if ".".join(f.spec.path) == rest]
+    if not fields:
+        fields = [f for f in group.fields if ".".join(f.spec.path).startswith(rest + ".")]
+    if section is not None:
+        section.toggle.setChecked(True)
+    if not fields:
+        if section is not None:
+            scroll.ensureWidgetVisible(section)
+        return section is not None
+    scroll.ensureWidgetVisible(fields[0])
+    fields[0].edit.setFocus()
+    return True
+
+
 def _words(label: str) -> str:
     """A field's label inside a sentence: "Footing width B" -> "footing width B" (symbols such as S_DS keep their case)."""
     return label if label[1:2].isupper() or label[1:2] == "_" else label[:1].lower() + label[1:]
@@ -237,8 +269,27 @@ LOAD_TIPS = (
     "Line loads only: where the load ends (the whole wall when not given).",
     "Your description, printed beside the load.",
 )
+
+
+def load_tips(units: str) -> list[str]:
+    """The column tips, with the unit a bare number typed in each column is read in (the unit its cells show)."""
+    i = 1 if units == "SI" else 0
+    bare = (
+        "",
+        "",
+        f" A bare number is read in {LINE[i]} for a line load and {FORCE[i]} for a point or lateral load (the unit the cell shows).",
+        f" A bare number is read in {LONG[i]}.",
+        f" A bare number is read in {LONG[i]}.",
+        "",
+    )
+    return [tip + extra for tip, extra in zip(LOAD_TIPS, bare, strict=True)]
+
+
 KINDS = ("line", "point", "lateral")
 _ERROR_ROLE = Qt.ItemDataRole.UserRole + 7
+_ASSUMED_ROLE = Qt.ItemDataRole.UserRole + 8
+
+
 CASES = tuple(c.value for c in LoadCase)
 
 
@@ -321,6 +372,7 @@ class LoadsEditor(QWidget):
         layout.addWidget(self.message)
         layout.addLayout(buttons)
         self._refreshing = False
+        self._units = ""
         self._error_cell: tuple[int, int] | None = None
         self.table.itemChanged.connect(self._on_item_changed)
 
@@ -333,10 +385,15 @@ class LoadsEditor(QWidget):
         loads = wall.loads
         if clear_message:
             self._show_message(None)
+        if units != self._units:  # the header tips name the unit a bare number is read in
+            self._units = units
+            for col, tip in enumerate(load_tips(units)):
+                self.table.horizontalHeaderItem(col).setToolTip(tip)
         self._refreshing = True
         try:
             if self.table.rowCount() != len(loads):
                 self.table.setRowCount(len(loads))
+            self._mark_assumed_rows(len(loads))
             for row, load in enumerate(loads):
                 texts, editable = _load_row(load, units)
                 for col, text in enumerate(texts):
@@ -357,6 +414,37 @@ class LoadsEditor(QWidget):
                         item.setBackground(QBrush(QColor(WARM_LIGHT)) if error else QBrush())
         finally:
             self._refreshing = False
+
+    def _mark_assumed_rows(self, rows: int) -> None:
+        """A row with a value the engineer did not enter (a line load's extent, a point load's mirroring) is
+        marked in its row header with Kernline's assumed-value marker; the tooltip says what and why."""
+        doc = self.document
+        prefix = f"walls[{doc.current_index}].loads["
+        by_row: dict[int, list[Any]] = {}
+        for a in doc.assumptions:
+            if a.field.startswith(prefix):
+                row = a.field[len(prefix) : a.field.find("]", len(prefix))]
+                if row.isdigit():
+                    by_row.setdefault(int(row), []).append(a)
+        for row in range(rows):
+            item = self.table.verticalHeaderItem(row)
+            if item is None:
+                item = QTableWidgetItem(str(row + 1))
+                self.table.setVerticalHeaderItem(row, item)
+            found = by_row.get(row, [])
+            tip = "\n".join(assumed_tip(a) for a in found)
+            if item.toolTip() != tip:
+                item.setToolTip(tip)
+                item.setIcon(assumed_icon() if found else QIcon())
+                item.setData(_ASSUMED_ROLE, bool(found))
+
+    def assumed_rows(self) -> list[int]:
+        """Rows shown with the assumed-value marker."""
+        return [
+            r
+            for r in range(self.table.rowCount())
+            if (self.table.verticalHeaderItem(r) or QTableWidgetItem()).data(_ASSUMED_ROLE)
+        ]
 
     def _show_message(self, text: str | None, cell: tuple[int, int] | None = None) -> None:
         self._error_cell = cell
@@ -406,10 +494,9 @@ class LoadsEditor(QWidget):
             text = text[2:].strip()  # the shown "h 21 ft", edited in place
         unit = units[1] if doc.units == "SI" else units[0]
         try:
-            parse_quantity(text, kind, default_unit=unit)
+            value = quantity_text(text, kind, unit)  # a bare number is read in the unit the cell shows
         except InputError as err:
             return field_problem(err.problem, kind, doc.units)
-        value = f"{text} {unit}" if _is_bare(text) else text
         if value == get_at(doc.raw, (*base, key)):
             return None
         return self._push(row, commands.SetField(doc, (*base, key), value, text=f"Set load {key}"))
@@ -450,14 +537,6 @@ class LoadsEditor(QWidget):
             doc = self.document
             if doc.push(commands.move_load(doc, doc.current_index, row, target)) is None:
                 self.table.selectRow(target)
-
-
-def _is_bare(text: str) -> bool:
-    try:
-        float(text)
-    except ValueError:
-        return False
-    return True
 
 
 def _kind_of(load: Any) -> str:
@@ -725,6 +804,8 @@ class WallForm(QWidget):
             self.group.add(spec, form)
         self.sections["Sizing range"] = Section("Sizing range", box, False)
         layout.addWidget(self.sections["Sizing range"])
+        # the section of each field path's first key ("footing.width" -> Footing)
+        self._section_keys = {"footing": "Footing", "stem": "Stem", "loads": "Loads", "sizing": "Sizing range"}
 
     shown_wall_id = ""
 
@@ -737,6 +818,24 @@ class WallForm(QWidget):
         dropped = self.group.refresh(force)
         self.loads.refresh(clear_message=force)
         return [f"{d} of wall {previous}" for d in dropped] if previous else dropped
+
+    def show_field(self, rest: str, scroll: QScrollArea) -> bool:
+        """Show and focus the current wall's input at ``rest`` (the path below the wall, as the engine names it)."""
+        if not rest:
+            return True
+        head = rest.split(".")[0].split("[")[0]
+        section = self.sections.get(self._section_keys.get(head, "Wall"))
+        if rest.startswith("loads["):
+            row = rest[6 : rest.find("]")]
+            assert section is not None
+            section.toggle.setChecked(True)
+            if row.isdigit() and int(row) < self.loads.table.rowCount():
+                self.loads.table.selectRow(int(row))
+                self.loads.table.scrollToItem(self.loads.table.item(int(row), 0))
+            scroll.ensureWidgetVisible(self.loads)
+            self.loads.table.setFocus()
+            return True
+        return _focus(self.group, rest, section, scroll)
 
     def focus_order(self) -> list[QWidget]:
         return (
@@ -829,6 +928,24 @@ class ProjectForm(QWidget):
         }
         self.combinations.refresh()
         return dropped
+
+    def show_field(self, field: str, scroll: QScrollArea) -> bool:
+        """Show and focus the project's input at ``field`` ("soil.cohesion", "criteria.required.sliding")."""
+        if field == "soil.bearing_basis" or field == "criteria.method":
+            box = self.basis if field.startswith("soil") else self.method
+            section = self.sections["Soil" if field.startswith("soil") else "Criteria"]
+            section.toggle.setChecked(True)
+            scroll.ensureWidgetVisible(box)
+            box.setFocus()
+            return True
+        if field.startswith("criteria.combinations"):
+            self.sections["Combinations"].toggle.setChecked(True)
+            scroll.ensureWidgetVisible(self.combinations)
+            self.combinations.table.setFocus()
+            return True
+        head = field.split(".")[0]
+        section = self.sections.get({"soil": "Soil", "criteria": "Criteria", "project": "Project"}.get(head, ""))
+        return _focus(self.group, field, section, scroll)
 
     def focus_order(self) -> list[QWidget]:
         fields = self.group.fields
