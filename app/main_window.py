@@ -981,14 +981,13 @@ class MainWindow(QMainWindow):
                     recovery.discard(orphan, lock)
             for orphan in choice.restore:
                 target = self if not restored else self.open_in_new_window(None)
-                note = target.restore(orphan)
-                if note is None:
-                    restored.append(orphan.path)
-                else:
+                done, note = target.restore(orphan)
+                if note:
                     notes.append(note)
-                    if target is not self:
-                        target.document.undo_stack.setClean()
-                        target.close()
+                if done:
+                    restored.append(orphan.path)
+                elif target is not self:
+                    target.close()
         if restored:
             more = f" and {len(restored) - 1} more in windows of their own" if len(restored) > 1 else ""
             notes.insert(0, f"Restored unsaved work{more}; save it to keep it.")
@@ -996,15 +995,16 @@ class MainWindow(QMainWindow):
             self.statusBar().showMessage(" ".join(notes), 20000)
         return restored
 
-    def restore(self, orphan: Orphan) -> str | None:
-        """Bring an orphaned document into this window; None when done, else what went wrong (in words).
+    def restore(self, orphan: Orphan) -> tuple[bool, str | None]:
+        """Bring an orphaned document into this window: (restored, a note for the status bar or None).
 
         The document keeps its absolute file path, so Save writes to that file. Its work is written
         to this window's own record before the orphan's record is deleted, so it is never without one.
         """
         lock = recovery.claim(orphan)
         if lock is None:
-            return None if not orphan.record.exists() else f"{orphan.title} is being restored by another window."
+            gone = not orphan.record.exists()
+            return False, None if gone else f"{orphan.title} is being restored by another window."
         try:
             self.document.replace(orphan.raw, orphan.path, demo=orphan.demo, recovered=True)
         except (InputError, ValueError, TypeError, KeyError, AttributeError) as err:
@@ -1019,15 +1019,15 @@ class MainWindow(QMainWindow):
                 "Cannot restore",
                 f"The autosaved copy of {orphan.title} cannot be used:\n\n{message}\n\nIt is kept at {kept}.",
             )
-            return f"The autosaved copy of {orphan.title} could not be used; it is kept at {kept}."
+            return False, f"The autosaved copy of {orphan.title} could not be used; it is kept at {kept}."
         self.show_editor()
         if self.autosave_now():
             recovery.discard(orphan, lock)
         else:
             lock.release()  # this window could not write its own record: keep the orphan for the next launch
         if orphan.path is not None and not orphan.path.parent.is_dir():
-            return f"The folder of {orphan.path} no longer exists; use Save As."
-        return None
+            return True, f"The folder of {orphan.path} no longer exists; save {orphan.title} with Save As."
+        return True, None
 
     def open_in_new_window(self, path: str | Path | None) -> MainWindow:
         """A further window of this process (same settings and recovery folder), shown; opens ``path`` when given."""

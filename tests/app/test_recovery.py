@@ -338,3 +338,20 @@ def test_launch_goes_on_past_a_damaged_record(qapp, monkeypatch, tmp_path):
     code, seen = _run_launch(monkeypatch, tmp_path, demo=True)
     assert code == 0 and seen and seen[0][0].endswith("(demo)")
     assert (folder / ("x" + recovery.SUFFIX + recovery.CORRUPT_SUFFIX)).is_file()
+
+
+def test_a_document_whose_folder_is_gone_is_restored_and_says_to_save_as(qtbot, make_window, tmp_path, dialogs):
+    folder = tmp_path / "job"
+    folder.mkdir()
+    path = folder / "clinic.kernline"
+    path.write_bytes((ROOT / "resources" / "demo.kernline").read_bytes())
+    crashed = make_window(str(path))
+    type_into(qtbot, field(crashed, "footing", "width"), "23")
+    crash(crashed)
+    path.unlink()
+    folder.rmdir()
+    dialogs.recovery_answer = "restore"
+    window = make_window(None, demo=False)
+    assert window.document.path == path and window.document.raw["walls"][0]["footing"]["width"] == "23 in"
+    assert "no longer exists" in window.statusBar().currentMessage() and "Save As" in window.statusBar().currentMessage()
+    assert window.recovery_path.is_file()  # still safe in this window's own record
