@@ -15,3 +15,7 @@ CAUTION = (
     "Results are for review by a licensed engineer. They defer to the local building code and to the "
     "geotechnical report for the site."
 )
+
+# Register the checks and the code bases (importing the packages fills the registries).
+from . import checks as _checks  # noqa: E402,F401
+from . import codes as _codes  # noqa: E402,F401

@@ -1133,6 +1133,7 @@ def _tail(blocks: list[Block], n: int) -> list[Block]:
 
 def _case_of(result: WallResult, g: Governing) -> tuple[CaseResult, LoadCombination, int, float]:
     i = g.case_index
+    assert i is not None, "a geometric check has no case"
     design = result.table.cases[i]
     return result.cases[i], design.combination, i, float(result.table.dead_factor[i])
 
@@ -1658,7 +1659,8 @@ def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
     fail_rows = []
     governs: dict[int, list[str]] = {}
     for check, g in result.governing.items():
-        governs.setdefault(g.case_index, []).append(_CHECK_ABBREVIATION[check])
+        if g.case_index is not None:
+            governs.setdefault(g.case_index, []).append(_CHECK_ABBREVIATION.get(check, check.symbol))
     for k, c in enumerate(result.cases):
         ot, sl, br = c.overturning, c.sliding, c.bearing
         failing = [name for name, r in (("OT", ot), ("SL", sl), ("BR", br)) if r is not None and not r.passes]
@@ -2017,6 +2019,7 @@ def pressure_drawing(
         shapes.append(Polygon(pts, fill="pressure"))
         # the resultant N
         shapes.append(Arrow(xr, y_base + 36, xr, y_base + 11, 1.0))
+        assert g.case_index is not None
         case = result.cases[g.case_index]
         text = f"N = {fmt.force(case.vertical)}"
         if case.bearing is not None:

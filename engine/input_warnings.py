@@ -73,7 +73,7 @@ def _short_contact(index: int, wall: Wall, result: WallResult, units: str) -> li
     length = result.length
     worst: tuple[float, str, str] | None = None
     for g in result.governing.values():
-        if g.ratio == float("inf"):
+        if g.ratio == float("inf") or g.case_index is None:
             continue
         contact = float(result.evaluation.contact_length[g.case_index])
         stable = bool(result.evaluation.stable[g.case_index])

@@ -15,10 +15,15 @@ Edit a value with :func:`dataclasses.replace`; every constructor validates what 
 from __future__ import annotations
 
 import math
+from collections.abc import Mapping, Sequence
 from dataclasses import dataclass, field
 from enum import Enum
+from typing import Any, overload
 
 from .errors import InputError
+from .registry import Check, CodeBasis, Family, Method, check_by_id, checks, code_by_id
+
+__all__ = ["ALL_CHECKS", "Check", "CodeBasis", "Method"]
 
 # Unit weights used as defaults: 150 pcf normal-weight concrete and 110 pcf soil (common practice).
 PCF = 4.4482216152605 / 0.3048**3  # N/m^3 per pcf (exact definitions, NIST SP 811)
@@ -46,22 +51,25 @@ class LoadCase(Enum):
         return self in (LoadCase.W, LoadCase.E)
 
 
-class Check(Enum):
-    """The three global stability checks."""
+class _LegacyChecks(Sequence[Check]):
+    """``ALL_CHECKS``: the three global stability checks under their old name, read from the registry
+    (new code loops over :func:`engine.registry.checks`, which also holds embedment and later ones)."""
 
-    OVERTURNING = "overturning"
-    SLIDING = "sliding"
-    BEARING = "bearing"
+    def _items(self) -> tuple[Check, ...]:
+        return (Check.OVERTURNING, Check.SLIDING, Check.BEARING)
+
+    @overload
+    def __getitem__(self, index: int) -> Check: ...
+    @overload
+    def __getitem__(self, index: slice) -> tuple[Check, ...]: ...
+    def __getitem__(self, index: int | slice) -> Check | tuple[Check, ...]:
+        return self._items()[index]
+
+    def __len__(self) -> int:
+        return 3
 
 
-ALL_CHECKS: tuple[Check, ...] = (Check.OVERTURNING, Check.SLIDING, Check.BEARING)
-
-
-class Method(Enum):
-    """Design method: which load combinations and required ratios apply."""
-
-    ASCE7_16_ASD = "asce7-16-asd"
-    SERVICE_FS = "service-fs"
+ALL_CHECKS: Sequence[Check] = _LegacyChecks()
 
 
 class BearingBasis(Enum):
@@ -283,7 +291,7 @@ class Wall:
 
 @dataclass(frozen=True, slots=True, kw_only=True)
 class SoilProperties:
-    """Values from the geotechnical report (or the code's presumptive values)."""
+    """Values from the geotechnical report (or the code's presumptive values); ``report`` names it."""
 
     allowable_bearing: float = 2000.0 * PSF
     bearing_basis: BearingBasis = BearingBasis.GROSS
@@ -292,6 +300,7 @@ class SoilProperties:
     passive: float = 0.0
     passive_ignore: float = 0.0
     unit_weight: float = 110.0 * PCF
+    report: str = ""
 
     def __post_init__(self) -> None:
         _positive(self.allowable_bearing, "allowable_bearing")
@@ -302,20 +311,32 @@ class SoilProperties:
         _non_negative(self.unit_weight, "unit_weight")
 
 
-@dataclass(frozen=True, slots=True, kw_only=True)
+@dataclass(frozen=True, init=False)
 class RequiredRatios:
-    """The least ratio of capacity to demand each check must reach."""
+    """The least ratio of capacity to demand each check must reach, by check id (1.0 if not named).
 
-    overturning: float = 1.0
-    sliding: float = 1.0
-    bearing: float = 1.0
+    Built as ``RequiredRatios(overturning=2.0, sliding=1.5)`` or ``RequiredRatios(values={...})``; read
+    with :meth:`of` (or as attributes: ``required.overturning``).
+    """
 
-    def __post_init__(self) -> None:
-        for name in ("overturning", "sliding", "bearing"):
-            _positive(getattr(self, name), name)
+    values: tuple[tuple[str, float], ...] = ()
+
+    def __init__(self, values: Mapping[str, float] | None = None, **ratios: float) -> None:
+        merged = {**(values or {}), **ratios}
+        for name, value in merged.items():
+            _positive(value, name)
+        object.__setattr__(self, "values", tuple(sorted(merged.items())))
 
     def of(self, check: Check) -> float:
-        return float(getattr(self, check.value))
+        return float(dict(self.values).get(check.id, 1.0))
+
+    def __getattr__(self, name: str) -> Any:
+        if name.startswith("_"):
+            raise AttributeError(name)
+        try:
+            return self.of(check_by_id(name))
+        except KeyError:
+            raise AttributeError(name) from None
 
 
 @dataclass(frozen=True, slots=True, kw_only=True)
@@ -324,9 +345,11 @@ class LoadCombination:
 
     name: str
     factors: tuple[tuple[LoadCase, float], ...]
-    checks: frozenset[Check] = frozenset(ALL_CHECKS)
+    checks: frozenset[Check] = None  # type: ignore[assignment]  # None: every per-case check of the service family
 
     def __post_init__(self) -> None:
+        if self.checks is None:
+            object.__setattr__(self, "checks", frozenset(checks(Family.SERVICE)))
         _require(bool(self.name.strip()), "name", "must not be empty")
         for case, factor in self.factors:
             _finite(factor, f"factors.{case.value}")
@@ -345,17 +368,34 @@ class LoadCombination:
 
 @dataclass(frozen=True, slots=True, kw_only=True)
 class DesignCriteria:
-    """Method, required ratios and load combinations (a custom list replaces the method's preset)."""
+    """Code basis (method), required ratios, load combinations (a custom list replaces the method's
+    preset) and the options of the code basis.
 
-    method: Method = Method.ASCE7_16_ASD
+    Attributes:
+        method: the registered code basis (:mod:`engine.codes`); ASCE 7-16 ASD when not given.
+        ev_at_soil: False takes Ev = 0 in the counteracting seismic combination (ASCE 7-16 12.4.2.2
+            exception 2, at the soil-structure interface).
+        seismic_overturning_reduction: r of ASCE 7-16 12.13.4 (0, 0.10 or 0.25): the overturning moment
+            of the E lateral loads is multiplied by (1 - r) in the overturning and bearing checks.
+        wind_omega: omega of IBC 2021 1605.2 on 0.6 W in the alternative basic ASD combinations.
+    """
+
+    method: CodeBasis = None  # type: ignore[assignment]  # None: ASCE 7-16 ASD
     required: RequiredRatios = field(default_factory=RequiredRatios)
     sds: float = 0.0
     bearing_increase: float = 1.0
     custom_combinations: tuple[LoadCombination, ...] = ()
+    ev_at_soil: bool = True
+    seismic_overturning_reduction: float = 0.0
+    wind_omega: float = 1.3
 
     def __post_init__(self) -> None:
+        if self.method is None:
+            object.__setattr__(self, "method", code_by_id("asce7-16-asd"))
         _non_negative(self.sds, "sds")
         _positive(self.bearing_increase, "bearing_increase")
+        _require(0.0 <= self.seismic_overturning_reduction < 1.0, "seismic_overturning_reduction", "must be from 0 up to 1")
+        _positive(self.wind_omega, "wind_omega")
 
 
 @dataclass(frozen=True, slots=True, kw_only=True)
@@ -389,6 +429,17 @@ class Assumption:
 
 
 @dataclass(frozen=True, slots=True, kw_only=True)
+class Site:
+    """Site conditions that are not soil strengths: the frost depth (m; None when not entered)."""
+
+    frost_depth: float | None = None
+
+    def __post_init__(self) -> None:
+        if self.frost_depth is not None:
+            _non_negative(self.frost_depth, "frost_depth")
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
 class Project:
     """A whole project: information, display units, criteria, soil and walls.
 
@@ -400,6 +451,7 @@ class Project:
     units: str = "US"
     criteria: DesignCriteria = field(default_factory=DesignCriteria)
     soil: SoilProperties = field(default_factory=SoilProperties)
+    site: Site = field(default_factory=Site)
     walls: tuple[Wall, ...] = ()
     assumptions: tuple[Assumption, ...] = ()
 

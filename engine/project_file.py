@@ -317,7 +317,7 @@ def _criteria(raw: Any, seismic_walls: list[str]) -> DesignCriteria:
             else "factors of safety common in practice with service loads"
         )
         required = RequiredRatios(
-            **{
+            {
                 c.value: _number(req_obj, c.value, base.of(c), basis, positive=True, limit=MAX_FACTOR, limit_reason="a ratio")
                 for c in ALL_CHECKS
             }

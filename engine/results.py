@@ -15,9 +15,11 @@ from typing import Any, overload
 
 import numpy as np
 
+from .checks import BearingResult, EmbedmentResult, OverturningResult, SlidingResult
 from .combinations import DesignCase
 from .loads import SelfWeight, self_weight
-from .model import ALL_CHECKS, Check, Project, Wall
+from .model import Project, Wall
+from .registry import Check
 from .stability import CaseTable, Evaluation, case_table, evaluate
 
 # Relative tolerance on "ratio >= required", so that a ratio equal to its requirement up to
@@ -30,53 +32,16 @@ def meets(ratio: float, required: float) -> bool:
     return ratio >= required * (1.0 - PASS_TOLERANCE)
 
 
-@dataclass(frozen=True, slots=True, kw_only=True)
-class OverturningResult:
-    """Moments about the toe (N*m) and their ratio."""
-
-    moment: float
-    resisting: float
-    ratio: float
-    required: float
-    passes: bool
-
-
-@dataclass(frozen=True, slots=True, kw_only=True)
-class SlidingResult:
-    """Shear V and the resistance that opposes it (N), with its parts."""
-
-    force: float
-    resistance: float
-    friction: float
-    cohesion: float
-    passive: float
-    ratio: float
-    required: float
-    passes: bool
-
-
-@dataclass(frozen=True, slots=True, kw_only=True)
-class BearingResult:
-    """Eccentricity (m), soil pressures (Pa), contact length (m) and their ratio to the allowable."""
-
-    eccentricity: float
-    q_max: float
-    q_min: float
-    contact_length: float
-    pressure_compared: float
-    allowable: float
-    stable: bool
-    ratio: float
-    required: float
-    passes: bool
-
-
-CheckResult = OverturningResult | SlidingResult | BearingResult
+CheckResult = OverturningResult | SlidingResult | BearingResult | EmbedmentResult | Any
 
 
 @dataclass(frozen=True, slots=True, kw_only=True)
 class CaseResult:
-    """One combination in one direction: loads on the soil and the checks it applies to."""
+    """One combination in one direction: loads on the soil and the record of each check it applies to.
+
+    ``records`` maps each per-case check (:mod:`engine.checks`) to its record, or None where the
+    combination does not apply to it.
+    """
 
     combination: str
     direction: str
@@ -84,25 +49,46 @@ class CaseResult:
     vertical: float
     lateral: float
     moment: float
-    overturning: OverturningResult | None
-    sliding: SlidingResult | None
-    bearing: BearingResult | None
+    records: dict[Check, Any]
 
     def of(self, check: Check) -> CheckResult | None:
-        return getattr(self, check.value)  # type: ignore[no-any-return]
+        return self.records.get(check)
+
+    def _by_id(self, check_id: str) -> Any:
+        for check, record in self.records.items():
+            if check.id == check_id:
+                return record
+        return None
+
+    @property
+    def overturning(self) -> OverturningResult | None:
+        return self._by_id("overturning")  # type: ignore[no-any-return]
+
+    @property
+    def sliding(self) -> SlidingResult | None:
+        return self._by_id("sliding")  # type: ignore[no-any-return]
+
+    @property
+    def bearing(self) -> BearingResult | None:
+        return self._by_id("bearing")  # type: ignore[no-any-return]
 
 
 @dataclass(frozen=True, slots=True, kw_only=True)
 class Governing:
-    """The case with the lowest ratio / required for one check (ratio inf: no demand anywhere)."""
+    """The case with the lowest ratio / required for one check (ratio inf: no demand anywhere).
+
+    A geometric check (embedment) has no case: ``combination`` and ``direction`` are "" and
+    ``case_index`` is None; ``record`` is its one record.
+    """
 
     check: Check
     ratio: float
     required: float
     combination: str
     direction: str
-    case_index: int
+    case_index: int | None
     passes: bool
+    record: Any = None
 
     @property
     def normalized(self) -> float:
@@ -170,45 +156,17 @@ class WallResult:
 
 
 def _case_results(table: CaseTable, ev: Evaluation) -> tuple[CaseResult, ...]:
-    r = [ev.overturning_ratio.tolist(), ev.sliding_ratio.tolist(), ev.bearing_ratio.tolist()]
-    applies = table.applies.tolist()
-    req = table.required.tolist()
-    vertical, moment, e = ev.vertical.tolist(), ev.moment.tolist(), ev.eccentricity.tolist()
-    q_max, q_min, contact = ev.q_max.tolist(), ev.q_min.tolist(), ev.contact_length.tolist()
-    stable, compared, allowable = ev.stable.tolist(), ev.pressure_compared.tolist(), ev.allowable.tolist()
-    m_r, m_o = ev.resisting_moment.tolist(), ev.overturning_moment.tolist()
-    fr, co, pa = ev.friction.tolist(), ev.cohesion.tolist(), ev.passive.tolist()
+    vertical, moment = ev.vertical.tolist(), ev.moment.tolist()
     shear = table.shear.tolist()
     dead = table.dead_factor.tolist()
+    per_case = [(j, c) for j, c in enumerate(table.checks) if c.per_case]
+    applies = table.applies.tolist()
     out = []
     for i, case in enumerate(table.cases):
-        ot = sl = br = None
-        if applies[0][i]:
-            ot = OverturningResult(moment=m_o[i], resisting=m_r[i], ratio=r[0][i], required=req[0], passes=meets(r[0][i], req[0]))
-        if applies[1][i]:
-            sl = SlidingResult(
-                force=shear[i],
-                resistance=fr[i] + co[i] + pa[i],
-                friction=fr[i],
-                cohesion=co[i],
-                passive=pa[i],
-                ratio=r[1][i],
-                required=req[1],
-                passes=meets(r[1][i], req[1]),
-            )
-        if applies[2][i]:
-            br = BearingResult(
-                eccentricity=e[i],
-                q_max=q_max[i],
-                q_min=q_min[i],
-                contact_length=contact[i],
-                pressure_compared=compared[i],
-                allowable=allowable[i],
-                stable=bool(stable[i]),
-                ratio=r[2][i],
-                required=req[2],
-                passes=meets(r[2][i], req[2]),
-            )
+        records = {
+            check: check.record(ev.statics, ev.arrays[check], i, float(table.required[j])) if applies[j][i] else None
+            for j, check in per_case
+        }
         out.append(
             CaseResult(
                 combination=case.combination.name,
@@ -217,9 +175,7 @@ def _case_results(table: CaseTable, ev: Evaluation) -> tuple[CaseResult, ...]:
                 vertical=vertical[i],
                 lateral=shear[i],
                 moment=moment[i],
-                overturning=ot,
-                sliding=sl,
-                bearing=br,
+                records=records,
             )
         )
     return tuple(out)
@@ -229,12 +185,25 @@ def governing_case(table: CaseTable, evaluation: Evaluation, check: Check) -> Go
     """The case with the lowest ratio / required for ``check`` (the first such case on ties).
 
     Cases whose combination does not apply to the check are passed over; where no case has any
-    demand the ratio is inf (printed as "no demand").
+    demand the ratio is inf (printed as "no demand"). A geometric check has one value and no case.
     """
-    j = ALL_CHECKS.index(check)
-    ratio_j = (evaluation.overturning_ratio, evaluation.sliding_ratio, evaluation.bearing_ratio)[j]
-    i = int(np.argmin(np.where(table.applies[j], ratio_j, np.inf)))  # one required value per check
+    j = table.checks.index(check)
     required = float(table.required[j])
+    ratio_j = evaluation.arrays[check].ratio
+    if not check.per_case:
+        ratio = float(ratio_j)
+        record = check.record(evaluation.statics, evaluation.arrays[check], 0, required)
+        return Governing(
+            check=check,
+            ratio=ratio,
+            required=required,
+            combination="",
+            direction="",
+            case_index=None,
+            passes=meets(ratio, required),
+            record=record,
+        )
+    i = int(np.argmin(np.where(table.applies[j], ratio_j, np.inf)))
     ratio = float(ratio_j[i]) if table.applies[j, i] else math.inf
     design: DesignCase = table.cases[i]
     return Governing(
@@ -249,8 +218,8 @@ def governing_case(table: CaseTable, evaluation: Evaluation, check: Check) -> Go
 
 
 def check_wall(project: Project, wall: Wall, table: CaseTable | None = None) -> WallResult:
-    """Check ``wall`` on its current footing for every combination and direction."""
-    table = table or case_table(wall, project.soil, project.criteria)
+    """Check ``wall`` on its current footing for every registered check, combination and direction."""
+    table = table or case_table(wall, project.soil, project.criteria, project.site)
     b, d = wall.footing.width, wall.footing.thickness
     ev = evaluate(table, b, d)
     sw = self_weight(wall, project.soil, b, d)
@@ -261,7 +230,7 @@ def check_wall(project: Project, wall: Wall, table: CaseTable | None = None) -> 
         length=wall.footing_length,
         self_weight=SelfWeight(footing=float(sw.footing), stem=float(sw.stem), soil=float(sw.soil)),
         cases=CaseResults(table, ev),
-        governing={check: governing_case(table, ev, check) for check in ALL_CHECKS},
+        governing={check: governing_case(table, ev, check) for check in table.checks},
         table=table,
         evaluation=ev,
     )
@@ -276,27 +245,8 @@ def _num(value: float) -> float | None:
     return None if value is None or math.isinf(value) or math.isnan(value) else float(value)
 
 
-def _check_json(result: CheckResult) -> dict[str, Any]:
-    if isinstance(result, OverturningResult):
-        body: dict[str, Any] = {"moment": _num(result.moment), "resisting": _num(result.resisting)}
-    elif isinstance(result, SlidingResult):
-        body = {
-            "force": _num(result.force),
-            "resistance": _num(result.resistance),
-            "friction": _num(result.friction),
-            "cohesion": _num(result.cohesion),
-            "passive": _num(result.passive),
-        }
-    else:
-        body = {
-            "eccentricity": _num(result.eccentricity),
-            "q_max": _num(result.q_max),
-            "q_min": _num(result.q_min),
-            "contact_length": _num(result.contact_length),
-            "pressure_compared": _num(result.pressure_compared),
-            "allowable": _num(result.allowable),
-            "stable": result.stable,
-        }
+def _check_json(check: Check, result: Any) -> dict[str, Any]:
+    body = check.record_json(result)
     body.update(ratio=_num(result.ratio), required=result.required, passes=result.passes)
     return body
 
@@ -305,7 +255,7 @@ def wall_json(result: WallResult) -> dict[str, Any]:
     """The documented results record of one wall (SI base units; null where there is no demand)."""
     governing: dict[str, Any] = {}
     for check, g in result.governing.items():
-        demand = not math.isinf(g.ratio)
+        demand = not math.isinf(g.ratio) and g.case_index is not None
         entry: dict[str, Any] = {
             "ratio": _num(g.ratio),
             "required": g.required,
@@ -313,10 +263,12 @@ def wall_json(result: WallResult) -> dict[str, Any]:
             "direction": g.direction if demand else None,
             "passes": g.passes,
         }
-        if check is Check.BEARING:
-            br = result.cases[g.case_index].bearing
+        if check.id == "bearing":
+            br = result.cases[g.case_index].bearing if g.case_index is not None else None
             entry["q_max"] = _num(br.q_max) if br is not None and demand else None
-        governing[check.value] = entry
+        if g.record is not None:
+            entry.update(check.record_json(g.record))
+        governing[check.id] = entry
     cases = []
     for case in result.cases:
         entry = {
@@ -325,10 +277,9 @@ def wall_json(result: WallResult) -> dict[str, Any]:
             "vertical": _num(case.vertical),
             "lateral": _num(case.lateral),
         }
-        for check in ALL_CHECKS:
-            r = case.of(check)
+        for check, r in case.records.items():
             if r is not None:
-                entry[check.value] = _check_json(r)
+                entry[check.id] = _check_json(check, r)
         cases.append(entry)
     return {
         "id": result.wall_id,
@@ -368,6 +319,7 @@ def results_json(
 
 __all__ = [
     "BearingResult",
+    "EmbedmentResult",
     "CaseResult",
     "CheckResult",
     "Governing",

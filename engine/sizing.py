@@ -14,7 +14,8 @@ from dataclasses import dataclass, replace
 
 import numpy as np
 
-from .model import ALL_CHECKS, Check, Project, Wall
+from .model import Project, Wall
+from .registry import Check
 from .stability import CaseTable, case_table, evaluate
 from .units import format_length
 
@@ -49,11 +50,12 @@ class SizingResult:
         widths, thicknesses: the candidate values (m).
         allowed: False where the candidate is narrower than the wall or stem it carries.
         passes: the candidate meets every required ratio (and is allowed).
-        governing: index into :data:`engine.model.ALL_CHECKS` of the check with the lowest
-            normalized ratio at each candidate.
+        checks: the checks evaluated, in registry order (the first axis of ``check_normalized``).
+        governing: index into ``checks`` of the check with the lowest normalized ratio at each
+            candidate.
         normalized: that lowest ratio / required (>= 1 passes).
-        check_normalized: (3, rows, cols) lowest ratio / required of each check over all cases,
-            for drawing each check's boundary.
+        check_normalized: (checks, rows, cols) lowest ratio / required of each check over all
+            cases, for drawing each check's boundary.
         width, thickness: the chosen size, or None when no candidate passes.
         message: what was found, in words; with suggestions when nothing passes.
     """
@@ -70,6 +72,7 @@ class SizingResult:
     thickness: float | None
     message: str
     suggestions: tuple[str, ...] = ()
+    checks: tuple[Check, ...] = ()
 
     @property
     def feasible(self) -> bool:
@@ -80,7 +83,7 @@ class SizingResult:
         return int(self.widths.size * self.thicknesses.size)
 
     def governing_check(self, row: int, col: int) -> Check:
-        return ALL_CHECKS[int(self.governing[row, col])]
+        return self.checks[int(self.governing[row, col])]
 
     def as_json(self) -> dict[str, object]:
         return {
@@ -97,12 +100,12 @@ def feasibility_map(table: CaseTable, widths: np.ndarray, thicknesses: np.ndarra
     """Lowest ratio / required of each check over all cases, for every candidate.
 
     Returns:
-        (check_normalized with shape (3, rows, cols), allowed with shape (rows, cols)).
+        (check_normalized with shape (checks, rows, cols), allowed with shape (rows, cols)).
     """
     b = widths[None, :]
     d = thicknesses[:, None]
     ev = evaluate(table, b, d)
-    check_normalized = ev.check_minima() if len(table.cases) else np.full((3, d.size, b.size), np.inf)
+    check_normalized = ev.check_minima()
     allowed = np.broadcast_to(b >= table.wall.supported_thickness - 1e-12, (d.size, b.size))
     return check_normalized, allowed
 
@@ -111,7 +114,7 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
     """Find the passing candidate with the least B*D on the wall's sizing grid (its size is bounded by
     :class:`engine.model.SizingBounds`)."""
     widths, thicknesses = candidate_grid(wall)
-    table = case_table(wall, project.soil, project.criteria)
+    table = case_table(wall, project.soil, project.criteria, project.site)
     check_normalized, allowed = feasibility_map(table, widths, thicknesses)
     governing = np.argmin(check_normalized, axis=0)
     normalized = np.min(check_normalized, axis=0)
@@ -126,7 +129,7 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
         order = np.lexsort((widths[cols], thicknesses[rows], np.round(area[rows, cols], 12)))
         row, col = int(rows[order[0]]), int(cols[order[0]])
         width, thickness = float(widths[col]), float(thicknesses[row])
-        message = _why_smallest(check_normalized, passes, allowed, row, col)
+        message = _why_smallest(table.checks, check_normalized, passes, allowed, row, col)
         suggestions: tuple[str, ...] = ()
     else:
         width, thickness = None, None
@@ -144,10 +147,13 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
         thickness=thickness,
         message=message,
         suggestions=suggestions,
+        checks=table.checks,
     )
 
 
-def _why_smallest(check_normalized: np.ndarray, passes: np.ndarray, allowed: np.ndarray, row: int, col: int) -> str:
+def _why_smallest(
+    checks: tuple[Check, ...], check_normalized: np.ndarray, passes: np.ndarray, allowed: np.ndarray, row: int, col: int
+) -> str:
     """Say which check the next smaller candidate along each axis fails."""
     parts = []
     for axis_name, r, c in (("narrower", row, col - 1), ("thinner", row - 1, col)):
@@ -159,7 +165,7 @@ def _why_smallest(check_normalized: np.ndarray, passes: np.ndarray, allowed: np.
         elif not passes[r, c]:
             j = int(np.argmin(check_normalized[:, r, c]))
             value = float(check_normalized[j, r, c])
-            parts.append(f"the next {axis_name} one fails {ALL_CHECKS[j].value} (ratio/required {value:.3f})")
+            parts.append(f"the next {axis_name} one fails {checks[j].id} (ratio/required {value:.3f})")
     return "smallest passing size: " + "; ".join(parts)
 
 
@@ -175,14 +181,13 @@ def _diagnose(
     """Why nothing passes: the failing check at the largest size, by how much, and what would help."""
     last_r, last_c = thicknesses.size - 1, widths.size - 1
     at_max = check_normalized[:, last_r, last_c]
-    failing = [(ALL_CHECKS[j], float(at_max[j])) for j in range(3) if at_max[j] < 1.0 - 1e-9]
+    failing = [(table.checks[j], float(at_max[j])) for j in range(len(table.checks)) if at_max[j] < 1.0 - 1e-9]
     if not allowed[last_r, last_c]:
         return "even the widest candidate is narrower than the wall it carries", ("raise width_max above the wall thickness",)
-    worst_check, worst = min(failing, key=lambda t: t[1]) if failing else (ALL_CHECKS[0], 1.0)
     described = ", ".join(
-        f"{c.value} has no equilibrium (the resultant falls beyond the footing's end)"
-        if c is Check.BEARING and v == 0.0
-        else f"{c.value} reaches {v:.0%} of its required ratio"
+        f"{c.id} has no equilibrium (the resultant falls beyond the footing's end)"
+        if c.id == "bearing" and v == 0.0
+        else f"{c.id} reaches {v:.0%} of its required ratio"
         for c, v in failing
     )
     size = f"{format_length(float(widths[-1]), project.units)} x {format_length(float(thicknesses[-1]), project.units)}"
@@ -190,19 +195,22 @@ def _diagnose(
     suggestions = []
     for check, value in failing:
         helps = []
-        if widths.size > 1 and check_normalized[ALL_CHECKS.index(check), last_r, last_c - 1] < value - 1e-12:
+        j = table.checks.index(check)
+        if widths.size > 1 and check_normalized[j, last_r, last_c - 1] < value - 1e-12:
             helps.append("a wider footing (raise width_max)")
-        if thicknesses.size > 1 and check_normalized[ALL_CHECKS.index(check), last_r - 1, last_c] < value - 1e-12:
+        if thicknesses.size > 1 and check_normalized[j, last_r - 1, last_c] < value - 1e-12:
             helps.append("a deeper footing (raise thickness_max)")
-        longer = _longer_probe(project, wall, widths[-1], thicknesses[-1], check)
+        longer = _longer_probe(project, wall, widths[-1], thicknesses[-1], check) if check.per_case else None
         if longer is not None and longer > value + 1e-12:
             helps.append(f"a longer footing (extending each end by {LONGER_PROBE:.0%} of the wall length gives {longer:.0%})")
-        if check is Check.BEARING and value == 0.0 and not helps:
+        if check.id == "embedment" and not helps:
+            helps.append("a thicker footing or more soil cover (raise thickness_max)")
+        if check.id == "bearing" and value == 0.0 and not helps:
             helps.append("a longer footing or more resisting dead load, to bring the resultant back onto the footing")
         if helps:
-            suggestions.append(f"{check.value}: " + "; ".join(helps) + " would help")
+            suggestions.append(f"{check.id}: " + "; ".join(helps) + " would help")
         else:
-            suggestions.append(f"{check.value}: no change of footing size helps; revisit the loads or the soil values")
+            suggestions.append(f"{check.id}: no change of footing size helps; revisit the loads or the soil values")
     return message, tuple(suggestions)
 
 
@@ -218,6 +226,6 @@ def _longer_probe(project: Project, wall: Wall, width: float, thickness: float, 
     )
     # loads keep their positions on the wall: moving the wall's start moves them with it
     longer = replace(wall, footing=footing)
-    table = case_table(longer, project.soil, project.criteria)
+    table = case_table(longer, project.soil, project.criteria, project.site)
     ev = evaluate(table, float(width), float(thickness))
-    return float(ev.check_minima()[ALL_CHECKS.index(check)]) if len(table.cases) else None
+    return float(ev.check_minima()[table.checks.index(check)]) if len(table.cases) else None

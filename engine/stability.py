@@ -1,22 +1,30 @@
-"""The three stability checks of one wall, for every design case at once, on any footing size.
+"""The checks of one wall, for every design case at once, on any footing size.
 
 The wall's loads are reduced once to per-case sums that do not depend on the footing's width B or
-thickness D (:class:`CaseTable`); :func:`evaluate` then adds the self weight and computes overturning,
-bearing and sliding for every case with numpy, for one size (a single check) or a whole grid of
-sizes (sizing) with the same code. Formulas and their sources are in the modules called here.
+thickness t_f (:class:`CaseTable`); :func:`evaluate` then adds the self weight, works out the statics
+every check shares (the resultant, its eccentricity and the soil pressure) and runs each registered
+check (:mod:`engine.checks`) with numpy, for one size (a single check) or a whole grid of sizes
+(sizing) with the same code. Formulas and their sources are in the modules called here.
 """
 
 from __future__ import annotations
 
+from collections.abc import Callable
 from dataclasses import dataclass
 from functools import lru_cache
 
 import numpy as np
 
-from . import bearing, overturning, sliding, soil_pressure
+from . import overturning, soil_pressure
 from .combinations import DesignCase, combinations_of, design_cases
 from .loads import lateral_resultants, self_weight, vertical_resultants
-from .model import ALL_CHECKS, DesignCriteria, LoadCase, SoilProperties, Wall
+from .model import DesignCriteria, LoadCase, Site, SoilProperties, Wall
+from .registry import Check, CheckArrays, Family, checks
+
+
+def table_checks() -> tuple[Check, ...]:
+    """The checks a case table serves: the service-family (ASD) checks and the geometric ones."""
+    return tuple(c for c in checks() if c.family in (Family.SERVICE, Family.GEOMETRY))
 
 
 @dataclass(frozen=True, slots=True, eq=False)
@@ -33,14 +41,19 @@ class CaseTable:
         direction_sign: +1, -1 or 0 (no lateral load).
         shear: V = sum f*H (N).
         shear_moment: sum f*H*h, the lateral moment about the top of the footing (N*m).
+        seismic_shear / seismic_shear_moment: the parts of shear and shear_moment from E loads (for
+            the ASCE 7-16 12.13.4 reduction of the seismic overturning moment).
         wind_or_seismic: the combination carries W or E (bearing increase applies).
-        applies: (3, k) booleans, the checks each case's combination applies to.
-        required: the required ratios (overturning, sliding, bearing).
+        checks: the checks evaluated (:func:`table_checks`), in registry order.
+        applies: (len(checks), k) booleans, the checks each case's combination applies to (a
+            geometric check applies to no case).
+        required: the required ratio of each check.
     """
 
     wall: Wall
     soil: SoilProperties
     criteria: DesignCriteria
+    site: Site
     cases: tuple[DesignCase, ...]
     dead_factor: np.ndarray
     applied_vertical: np.ndarray
@@ -51,7 +64,10 @@ class CaseTable:
     direction_sign: np.ndarray
     shear: np.ndarray
     shear_moment: np.ndarray
+    seismic_shear: np.ndarray
+    seismic_shear_moment: np.ndarray
     wind_or_seismic: np.ndarray
+    checks: tuple[Check, ...]
     applies: np.ndarray
     required: np.ndarray
 
@@ -68,8 +84,8 @@ def _case_layout(
     criteria: DesignCriteria, lateral_cases: frozenset[LoadCase]
 ) -> tuple[tuple[DesignCase, ...], np.ndarray, np.ndarray, np.ndarray, np.ndarray]:
     """The design cases of ``criteria`` and their factors (k x 7, LoadCase order), direction signs,
-    W/E flags and check masks (3 x k). Cached: it depends on the criteria and on which lateral cases
-    the wall has, not on the wall's loads."""
+    W/E flags and check masks (checks x k). Cached: it depends on the criteria and on which lateral
+    cases the wall has, not on the wall's loads."""
     cases = design_cases(combinations_of(criteria), lateral_cases)
     k = len(cases)
     factors = np.array([[case.combination.factor(c) for c in _CASE_ORDER] for case in cases], dtype=float).reshape(
@@ -77,13 +93,16 @@ def _case_layout(
     )
     sign = np.array([case.direction.sign for case in cases], dtype=float)
     wind_or_seismic = np.array([case.combination.has_wind_or_seismic for case in cases], dtype=bool)
-    applies = np.array([[check in case.combination.checks for case in cases] for check in ALL_CHECKS], dtype=bool).reshape(3, k)
+    evaluated = table_checks()
+    applies = np.array(
+        [[check.per_case and check in case.combination.checks for case in cases] for check in evaluated], dtype=bool
+    ).reshape(len(evaluated), k)
     for array in (factors, sign, wind_or_seismic, applies):
         array.setflags(write=False)
     return cases, factors, sign, wind_or_seismic, applies
 
 
-def case_table(wall: Wall, soil: SoilProperties, criteria: DesignCriteria) -> CaseTable:
+def case_table(wall: Wall, soil: SoilProperties, criteria: DesignCriteria, site: Site | None = None) -> CaseTable:
     """Reduce the wall's loads to per-case sums for every combination and direction.
 
     In a combination with factors f: N = sum f*P over vertical loads, V = sum f*H over lateral loads
@@ -116,11 +135,13 @@ def case_table(wall: Wall, soil: SoilProperties, criteria: DesignCriteria) -> Ca
     h_force = np.array([h.force for h in laterals], dtype=float)
     h_height = np.array([h.height for h in laterals], dtype=float)
     shears = factors[:, h_case] * h_force * (sign != 0.0)[:, None]  # f * H
-    req = criteria.required
+    seismic = np.array([h.case is LoadCase.E for h in laterals], dtype=bool)
+    evaluated = table_checks()
     return CaseTable(
         wall=wall,
         soil=soil,
         criteria=criteria,
+        site=site or Site(),
         cases=cases,
         dead_factor=factors[:, column[LoadCase.D]].copy(),
         applied_vertical=n_app,
@@ -131,122 +152,231 @@ def case_table(wall: Wall, soil: SoilProperties, criteria: DesignCriteria) -> Ca
         direction_sign=sign,
         shear=shears.sum(axis=1),
         shear_moment=(shears * h_height).sum(axis=1),
+        seismic_shear=(shears * seismic).sum(axis=1),
+        seismic_shear_moment=(shears * seismic * h_height).sum(axis=1),
         wind_or_seismic=wind_or_seismic,
+        checks=evaluated,
         applies=applies,
-        required=np.array([req.overturning, req.sliding, req.bearing]),
+        required=np.array([criteria.required.of(c) for c in evaluated]),
     )
 
 
 @dataclass(frozen=True, slots=True, eq=False)
-class Evaluation:
-    """Every quantity of every case for footing width(s) B and thickness(es) D.
+class Statics:
+    """What every check of every case shares, for footing width(s) B and thickness(es) t_f.
 
-    Arrays have shape (k,) + the broadcast shape of B and D. Ratios are inf where there is no demand.
+    Arrays have shape (k,) + the broadcast shape of B and t_f (``shape``); ``grid_shape`` is that of
+    B and t_f alone.
+
+    Attributes:
+        self_weight: W_f, the footing, stem and soil cover (N, unfactored), at L_f/2.
+        factored_weight: f_D W_f (N).
+        vertical: N, the factored vertical load on the soil (N).
+        moment: about the footing's mid-length (N*m), with the seismic overturning reduction.
+        eccentricity: e = M/N (m); q_max, q_min (Pa), contact_length (m), stable: the soil pressure.
+        lateral_moment: sum f H (h + t_f), the shears' moment about the base (N*m).
+        overturning_lateral_moment: the same with the E part times (1 - r) (ASCE 7-16 12.13.4).
+        sliding_normal: the normal force friction and the cohesion cap act on (N).
     """
 
-    self_weight: np.ndarray  # W (N), unfactored
-    vertical: np.ndarray  # N (N)
-    moment: np.ndarray  # about the footing's mid-length (N*m)
-    eccentricity: np.ndarray  # e (m)
+    table: CaseTable
+    width: np.ndarray
+    thickness: np.ndarray
+    grid_shape: tuple[int, ...]
+    shape: tuple[int, ...]
+    self_weight: np.ndarray
+    factored_weight: np.ndarray
+    vertical: np.ndarray
+    moment: np.ndarray
+    eccentricity: np.ndarray
     q_max: np.ndarray
     q_min: np.ndarray
     contact_length: np.ndarray
     stable: np.ndarray
-    pressure_compared: np.ndarray  # q_max, or q_max - gs (c + D) for a net allowable (Pa)
-    allowable: np.ndarray  # (Pa), with any increase
-    resisting_moment: np.ndarray
-    overturning_moment: np.ndarray
-    friction: np.ndarray
-    cohesion: np.ndarray
-    passive: np.ndarray
-    overturning_ratio: np.ndarray
-    sliding_ratio: np.ndarray
-    bearing_ratio: np.ndarray
-    required: np.ndarray  # (3,)
-    applies: np.ndarray  # (3, k)
+    lateral_moment: np.ndarray
+    overturning_lateral_moment: np.ndarray
+    sliding_normal: np.ndarray
+
+    def per_case(self, a: np.ndarray) -> np.ndarray:
+        """A per-case array (k,) shaped to broadcast against the grid."""
+        return a.reshape((len(self.table.cases),) + (1,) * len(self.grid_shape))
+
+
+@dataclass(frozen=True, slots=True, eq=False)
+class Evaluation:
+    """Every quantity of every case and check for footing width(s) B and thickness(es) t_f.
+
+    ``arrays`` holds each registered check's ratio and parts (:class:`engine.registry.CheckArrays`);
+    per-case ratios have shape (k,) + grid, geometric ones the grid's shape. Ratios are inf where
+    there is no demand.
+    """
+
+    statics: Statics
+    arrays: dict[Check, CheckArrays]
+    checks: tuple[Check, ...]
+    required: np.ndarray  # (len(checks),)
+    applies: np.ndarray  # (len(checks), k)
+
+    def ratio(self, check: Check) -> np.ndarray:
+        return self.arrays[check].ratio
 
     def check_minima(self) -> np.ndarray:
-        """(3, ...) lowest ratio / required of each check over the cases it applies to (inf: none)."""
+        """(checks, ...) lowest ratio / required of each check over the cases it applies to (inf: none)."""
         out = []
-        for j, ratio in enumerate((self.overturning_ratio, self.sliding_ratio, self.bearing_ratio)):
+        grid = self.statics.grid_shape
+        for j, check in enumerate(self.checks):
+            ratio = self.arrays[check].ratio
+            if not check.per_case:
+                out.append(np.broadcast_to(ratio, grid) / self.required[j])
+                continue
             mask = self.applies[j]
             if not mask.any():
-                out.append(np.full(ratio.shape[1:], np.inf))
+                out.append(np.full(grid, np.inf))
                 continue
             rows = ratio if mask.all() else ratio[mask]
-            out.append(rows.min(axis=0) / self.required[j])
+            out.append(np.broadcast_to(rows.min(axis=0), grid) / self.required[j])
         return np.stack(out)
+
+    # the shared statics, by their names
+    @property
+    def self_weight(self) -> np.ndarray:
+        return self.statics.self_weight
+
+    @property
+    def vertical(self) -> np.ndarray:
+        return self.statics.vertical
+
+    @property
+    def moment(self) -> np.ndarray:
+        return self.statics.moment
+
+    @property
+    def eccentricity(self) -> np.ndarray:
+        return self.statics.eccentricity
+
+    @property
+    def q_max(self) -> np.ndarray:
+        return self.statics.q_max
+
+    @property
+    def q_min(self) -> np.ndarray:
+        return self.statics.q_min
+
+    @property
+    def contact_length(self) -> np.ndarray:
+        return self.statics.contact_length
+
+    @property
+    def stable(self) -> np.ndarray:
+        return self.statics.stable
+
+    # the parts of the three stability checks, by the names they had before the registry
+    def _part(self, check_id: str, name: str) -> np.ndarray:
+        for check, arrays in self.arrays.items():
+            if check.id == check_id:
+                return arrays.ratio if name == "ratio" else arrays[name]
+        raise KeyError(check_id)
+
+    @property
+    def overturning_ratio(self) -> np.ndarray:
+        return self._part("overturning", "ratio")
+
+    @property
+    def sliding_ratio(self) -> np.ndarray:
+        return self._part("sliding", "ratio")
+
+    @property
+    def bearing_ratio(self) -> np.ndarray:
+        return self._part("bearing", "ratio")
+
+    @property
+    def resisting_moment(self) -> np.ndarray:
+        return self._part("overturning", "resisting")
+
+    @property
+    def overturning_moment(self) -> np.ndarray:
+        return self._part("overturning", "moment")
+
+    @property
+    def friction(self) -> np.ndarray:
+        return self._part("sliding", "friction")
+
+    @property
+    def cohesion(self) -> np.ndarray:
+        return self._part("sliding", "cohesion")
+
+    @property
+    def passive(self) -> np.ndarray:
+        return self._part("sliding", "passive")
+
+    @property
+    def pressure_compared(self) -> np.ndarray:
+        return self._part("bearing", "pressure_compared")
+
+    @property
+    def allowable(self) -> np.ndarray:
+        return self._part("bearing", "allowable")
+
+
+def statics(table: CaseTable, width: float | np.ndarray, thickness: float | np.ndarray) -> Statics:
+    """The resultant, its eccentricity and the soil pressure of every case on footing size(s) B x t_f.
+
+    N = sum f P + f_D W_f; M about the footing's mid-length = direction * sum f H (h + t_f) + sum f P
+    (x - L_f/2), the E part of the shears' moment times (1 - r) where the ASCE 7-16 12.13.4 reduction
+    r is taken (for overturning and bearing; sliding keeps the full shear); then e = M/N and the
+    rigid-footing pressure (:mod:`engine.soil_pressure`).
+    """
+    b = np.asarray(width, dtype=float)
+    d = np.asarray(thickness, dtype=float)
+    grid_shape = np.broadcast_shapes(b.shape, d.shape)
+    k = len(table.cases)
+    shape = (k,) + grid_shape
+    per_case: Callable[[np.ndarray], np.ndarray] = lambda a: a.reshape((k,) + (1,) * len(grid_shape))  # noqa: E731
+
+    wall, soil = table.wall, table.soil
+    length = table.length
+    weight = np.asarray(self_weight(wall, soil, b, d).total, dtype=float)
+    factored_weight = per_case(table.dead_factor) * weight  # acts at L_f/2
+    vertical = per_case(table.applied_vertical) + factored_weight
+    lateral = overturning.lateral_moment(per_case(table.shear_moment), per_case(table.shear), d)  # sum f H (h + t_f)
+    r = table.criteria.seismic_overturning_reduction
+    if r:
+        seismic = overturning.lateral_moment(per_case(table.seismic_shear_moment), per_case(table.seismic_shear), d)
+        reduced = lateral - r * seismic
+    else:
+        reduced = lateral
+    moment = per_case(table.direction_sign) * reduced + per_case(table.applied_moment)
+    e = soil_pressure.resultant_eccentricity(moment, vertical)
+    pressure = soil_pressure.pressure_distribution(vertical, e, b, length)
+    return Statics(
+        table=table,
+        width=b,
+        thickness=d,
+        grid_shape=grid_shape,
+        shape=shape,
+        self_weight=weight,
+        factored_weight=factored_weight,
+        vertical=np.broadcast_to(vertical, shape),
+        moment=np.broadcast_to(moment, shape),
+        eccentricity=np.broadcast_to(e, shape),
+        q_max=np.broadcast_to(pressure.q_max, shape),
+        q_min=np.broadcast_to(pressure.q_min, shape),
+        contact_length=np.broadcast_to(pressure.contact_length, shape),
+        stable=np.broadcast_to(pressure.stable, shape),
+        lateral_moment=np.broadcast_to(lateral, shape),
+        overturning_lateral_moment=np.broadcast_to(reduced, shape),
+        sliding_normal=np.broadcast_to(vertical, shape),
+    )
 
 
 def evaluate(table: CaseTable, width: float | np.ndarray, thickness: float | np.ndarray) -> Evaluation:
-    """Run overturning, bearing and sliding for every case on footing size(s) B x D.
+    """Run every check of the table for every case on footing size(s) B x t_f.
 
     Args:
         table: the wall's per-case sums.
         width: B (m), a float or an array broadcastable against ``thickness``.
-        thickness: D (m).
+        thickness: t_f (m).
     """
-    b = np.asarray(width, dtype=float)
-    d = np.asarray(thickness, dtype=float)
-    grid_ndim = max(b.ndim, d.ndim)
-    k = len(table.cases)
-
-    def per_case(a: np.ndarray) -> np.ndarray:
-        return a.reshape((k,) + (1,) * grid_ndim)
-
-    wall, soil = table.wall, table.soil
-    length = table.length
-    cover = wall.footing.cover
-    weight = np.asarray(self_weight(wall, soil, b, d).total, dtype=float)
-    factored_weight = per_case(table.dead_factor) * weight  # acts at L/2
-    vertical = per_case(table.applied_vertical) + factored_weight
-    lateral_moment = overturning.lateral_moment(per_case(table.shear_moment), per_case(table.shear), d)  # sum f H (h + D)
-    moment = per_case(table.direction_sign) * lateral_moment + per_case(table.applied_moment)
-    e = soil_pressure.resultant_eccentricity(moment, vertical)
-    pressure = soil_pressure.pressure_distribution(vertical, e, b, length)
-
-    # Overturning about the toe: the self weight's arm is L/2 from either toe.
-    resisting = per_case(table.applied_resisting) + np.maximum(factored_weight, 0.0) * (0.5 * length)
-    overturning_moment = per_case(table.applied_overturning) + np.maximum(-factored_weight, 0.0) * (0.5 * length) + lateral_moment
-    ot_ratio = overturning.overturning_ratio(resisting, overturning_moment)
-
-    # Sliding: friction + cohesion + passive against the shear.
-    friction = sliding.friction_resistance(soil.friction, vertical)
-    cohesion = sliding.cohesion_resistance(soil.cohesion, b, pressure.contact_length, vertical)
-    passive = np.broadcast_to(sliding.passive_resistance(soil.passive, b, cover, d, soil.passive_ignore), np.shape(vertical))
-    sl_ratio = sliding.sliding_ratio(friction + cohesion + passive, per_case(table.shear))
-
-    # Bearing: peak (or net peak) pressure against the allowable.
-    compared = bearing.compared_pressure(pressure.q_max, soil.bearing_basis, soil.unit_weight, cover, d)
-    allowable = bearing.allowable_pressure(
-        soil.allowable_bearing, table.criteria.bearing_increase, per_case(table.wind_or_seismic)
-    )
-    br_ratio = bearing.bearing_ratio(allowable, compared, pressure.stable)
-    # A case that puts no load at all on the soil (N = 0, M = 0: e.g. a combination of a case the wall
-    # does not have, on a weightless footing) is no demand, not a loss of equilibrium.
-    unloaded = (vertical == 0.0) & (moment == 0.0)
-    if unloaded.any():
-        br_ratio = np.where(unloaded, np.inf, br_ratio)
-
-    return Evaluation(
-        self_weight=weight,
-        vertical=vertical,
-        moment=moment,
-        eccentricity=e,
-        q_max=pressure.q_max,
-        q_min=pressure.q_min,
-        contact_length=pressure.contact_length,
-        stable=pressure.stable,
-        pressure_compared=compared,
-        allowable=np.broadcast_to(allowable, np.shape(vertical)),
-        resisting_moment=resisting,
-        overturning_moment=overturning_moment,
-        friction=friction,
-        cohesion=cohesion,
-        passive=passive,
-        overturning_ratio=np.broadcast_to(ot_ratio, np.shape(vertical)),
-        sliding_ratio=np.broadcast_to(sl_ratio, np.shape(vertical)),
-        bearing_ratio=np.broadcast_to(br_ratio, np.shape(vertical)),
-        required=table.required,
-        applies=table.applies,
-    )
+    state = statics(table, width, thickness)
+    arrays = {check: check.evaluate(state) for check in table.checks}
+    return Evaluation(statics=state, arrays=arrays, checks=table.checks, required=table.required, applies=table.applies)

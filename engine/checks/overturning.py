@@ -1,0 +1,77 @@
+"""The overturning check: resisting against overturning moment about the toe, per design case.
+
+Formulas: :mod:`engine.overturning` (statics of a rigid body tipping about the edge of its base;
+Das, *Principles of Foundation Engineering*, retaining-wall stability). The footing's self weight
+acts at L_f/2 from either toe.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+from typing import TYPE_CHECKING, Any
+
+import numpy as np
+
+from .. import overturning
+from ..registry import Check, CheckArrays, Family, register_check
+
+if TYPE_CHECKING:  # pragma: no cover
+    from ..stability import Statics
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class OverturningResult:
+    """Moments about the toe (N*m) and their ratio."""
+
+    moment: float
+    resisting: float
+    ratio: float
+    required: float
+    passes: bool
+
+
+def _num(value: float) -> float | None:
+    return None if value is None or not np.isfinite(value) else float(value)
+
+
+@dataclass(frozen=True, eq=False, repr=False)
+class OverturningCheck(Check):
+    """Sum M_R / sum M_O about the toe of each design case."""
+
+    def evaluate(self, state: Statics) -> CheckArrays:
+        table, per_case = state.table, state.per_case
+        half = 0.5 * table.length
+        weight = state.factored_weight  # acts at L_f/2: resists when downward, overturns when net upward
+        resisting = per_case(table.applied_resisting) + np.maximum(weight, 0.0) * half
+        moment = per_case(table.applied_overturning) + np.maximum(-weight, 0.0) * half + state.overturning_lateral_moment
+        ratio = overturning.overturning_ratio(resisting, moment)
+        return CheckArrays(ratio=np.broadcast_to(ratio, state.shape), parts={"resisting": resisting, "moment": moment})
+
+    def record(self, state: Statics, arrays: CheckArrays, index: int, required: float) -> OverturningResult:
+        from ..results import meets
+
+        ratio = float(arrays.ratio[index])
+        return OverturningResult(
+            moment=float(arrays["moment"][index]),
+            resisting=float(arrays["resisting"][index]),
+            ratio=ratio,
+            required=required,
+            passes=meets(ratio, required),
+        )
+
+    def record_json(self, record: Any) -> dict[str, Any]:
+        return {"moment": _num(record.moment), "resisting": _num(record.resisting)}
+
+
+OVERTURNING = register_check(
+    OverturningCheck(
+        id="overturning",
+        title="Overturning",
+        symbol="OT",
+        family=Family.SERVICE,
+        ratio_words="resisting / overturning moment about the toe",
+        basis="statics about the toe; Das, Principles of Foundation Engineering (retaining-wall stability)",
+        order=10,
+    ),
+    alias="OVERTURNING",
+)

@@ -1,0 +1,95 @@
+"""The sliding check: friction, cohesion and passive resistance against the shear, per design case.
+
+Formulas: :mod:`engine.sliding` (IBC 2021 Table 1806.2 and 1806.3).
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+from typing import TYPE_CHECKING, Any
+
+import numpy as np
+
+from .. import sliding
+from ..registry import Check, CheckArrays, Family, register_check
+
+if TYPE_CHECKING:  # pragma: no cover
+    from ..stability import Statics
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class SlidingResult:
+    """Shear V and the resistance that opposes it (N), with its parts."""
+
+    force: float
+    resistance: float
+    friction: float
+    cohesion: float
+    passive: float
+    ratio: float
+    required: float
+    passes: bool
+
+
+def _num(value: float) -> float | None:
+    return None if value is None or not np.isfinite(value) else float(value)
+
+
+@dataclass(frozen=True, eq=False, repr=False)
+class SlidingCheck(Check):
+    """(friction + cohesion + passive) / V of each design case."""
+
+    def evaluate(self, state: Statics) -> CheckArrays:
+        table, soil = state.table, state.table.soil
+        normal = state.sliding_normal
+        friction = sliding.friction_resistance(soil.friction, normal)
+        cohesion = sliding.cohesion_resistance(soil.cohesion, state.width, state.contact_length, normal)
+        passive = np.broadcast_to(
+            sliding.passive_resistance(soil.passive, state.width, table.wall.footing.cover, state.thickness, soil.passive_ignore),
+            state.shape,
+        )
+        shear = state.per_case(table.shear)
+        ratio = sliding.sliding_ratio(friction + cohesion + passive, shear)
+        return CheckArrays(
+            ratio=np.broadcast_to(ratio, state.shape),
+            parts={"friction": friction, "cohesion": cohesion, "passive": passive, "force": np.broadcast_to(shear, state.shape)},
+        )
+
+    def record(self, state: Statics, arrays: CheckArrays, index: int, required: float) -> SlidingResult:
+        from ..results import meets
+
+        ratio = float(arrays.ratio[index])
+        fr, co, pa = (float(arrays[name][index]) for name in ("friction", "cohesion", "passive"))
+        return SlidingResult(
+            force=float(arrays["force"][index]),
+            resistance=fr + co + pa,
+            friction=fr,
+            cohesion=co,
+            passive=pa,
+            ratio=ratio,
+            required=required,
+            passes=meets(ratio, required),
+        )
+
+    def record_json(self, record: Any) -> dict[str, Any]:
+        return {
+            "force": _num(record.force),
+            "resistance": _num(record.resistance),
+            "friction": _num(record.friction),
+            "cohesion": _num(record.cohesion),
+            "passive": _num(record.passive),
+        }
+
+
+SLIDING = register_check(
+    SlidingCheck(
+        id="sliding",
+        title="Sliding",
+        symbol="SL",
+        family=Family.SERVICE,
+        ratio_words="(friction + cohesion + passive) / shear",
+        basis="IBC 2021 Table 1806.2 and 1806.3",
+        order=20,
+    ),
+    alias="SLIDING",
+)
