@@ -72,6 +72,17 @@ class _LegacyChecks(Sequence[Check]):
 ALL_CHECKS: Sequence[Check] = _LegacyChecks()
 
 
+class SlidingBasis(Enum):
+    """What friction and the cohesion cap act on.
+
+    TOTAL: the combination's whole vertical load N. DEAD: the combination's dead load (its D factor
+    times all dead load, self weight included), as IBC 2021 Table 1806.2 note a and 1806.3.2 say.
+    """
+
+    TOTAL = "total"
+    DEAD = "dead"
+
+
 class BearingBasis(Enum):
     """Whether the allowable bearing pressure is gross or net of the overburden at the footing base."""
 
@@ -217,6 +228,9 @@ class Stem:
 class SizingBounds:
     """The candidate grid searched by automatic sizing (inclusive bounds, fixed steps).
 
+    ``extension_max`` > 0 adds a third axis: equal extensions at both ends, 0 to extension_max by
+    extension_step, added to the footing's own extensions.
+
     A grid of more than :data:`MAX_CANDIDATES` candidates is refused: the steps are too fine for the
     range (it would take seconds and much memory to search).
     """
@@ -227,18 +241,25 @@ class SizingBounds:
     thickness_min: float = 12.0 * INCH
     thickness_max: float = 48.0 * INCH
     thickness_step: float = 1.0 * INCH
+    extension_max: float = 0.0
+    extension_step: float = 0.0
 
     def __post_init__(self) -> None:
         for name in ("width_min", "width_max", "width_step", "thickness_min", "thickness_max", "thickness_step"):
             _positive(getattr(self, name), name)
+        _non_negative(self.extension_max, "extension_max")
+        _non_negative(self.extension_step, "extension_step")
+        _require(self.extension_max == 0.0 or self.extension_step > 0.0, "extension_step", "must be greater than zero")
         _require(self.width_max >= self.width_min, "width_max", "must not be less than width_min")
         _require(self.thickness_max >= self.thickness_min, "thickness_max", "must not be less than thickness_min")
         widths = (self.width_max - self.width_min) / self.width_step + 1.0
         thicknesses = (self.thickness_max - self.thickness_min) / self.thickness_step + 1.0
+        extensions = self.extension_max / self.extension_step + 1.0 if self.extension_max > 0.0 else 1.0
+        shown = f"{widths:,.0f} x {thicknesses:,.0f}" + (f" x {extensions:,.0f}" if extensions > 1.0 else "")
         _require(
-            widths * thicknesses <= MAX_CANDIDATES,
+            widths * thicknesses * extensions <= MAX_CANDIDATES,
             "width_step",
-            f"the grid would have about {widths:,.0f} x {thicknesses:,.0f} candidates; use coarser steps or narrower "
+            f"the grid would have about {shown} candidates; use coarser steps or narrower "
             f"bounds (at most {MAX_CANDIDATES:,} candidates)",
         )
 
@@ -301,6 +322,8 @@ class SoilProperties:
     passive_ignore: float = 0.0
     unit_weight: float = 110.0 * PCF
     report: str = ""
+    sliding_basis: SlidingBasis = SlidingBasis.TOTAL
+    presumptive_class: int | None = None
 
     def __post_init__(self) -> None:
         _positive(self.allowable_bearing, "allowable_bearing")
@@ -378,6 +401,8 @@ class DesignCriteria:
         seismic_overturning_reduction: r of ASCE 7-16 12.13.4 (0, 0.10 or 0.25): the overturning moment
             of the E lateral loads is multiplied by (1 - r) in the overturning and bearing checks.
         wind_omega: omega of IBC 2021 1605.2 on 0.6 W in the alternative basic ASD combinations.
+        seismic_snow_factor: the factor on S in the ASCE 7-22 seismic ASD combination with snow, as
+            the engineer reads it in the standard (Kernline has not confirmed it; see engine.codes.asce7_22).
     """
 
     method: CodeBasis = None  # type: ignore[assignment]  # None: ASCE 7-16 ASD
@@ -388,6 +413,7 @@ class DesignCriteria:
     ev_at_soil: bool = True
     seismic_overturning_reduction: float = 0.0
     wind_omega: float = 1.3
+    seismic_snow_factor: float | None = None
 
     def __post_init__(self) -> None:
         if self.method is None:

@@ -23,11 +23,11 @@ from functools import lru_cache
 from pathlib import Path
 from typing import Any
 
+from .checks.embedment import MIN_WIDTH
 from .combinations import MAX_SDS, default_required
 from .errors import FormatVersionError, InputError
 from .file_safety import atomic_write_text, check_input_file
 from .model import (
-    ALL_CHECKS,
     INCH,
     Assumption,
     BearingBasis,
@@ -37,17 +37,20 @@ from .model import (
     LineLoad,
     LoadCase,
     LoadCombination,
-    Method,
     PointLoad,
     Project,
     ProjectInfo,
     RequiredRatios,
+    Site,
     SizingBounds,
+    SlidingBasis,
     SoilProperties,
     Stem,
     StripFooting,
     Wall,
 )
+from .presumptive import TABLE_1806_2
+from .registry import CodeBasis, Family, check_by_id, checks, codes
 from .units import Kind, format_length, format_quantity, length_text, parse_quantity
 
 FORMAT = "kernline-project"
@@ -60,10 +63,13 @@ _CASES = {c.value: c for c in LoadCase}
 # Inside these sections an unknown key is refused (a misspelt key would otherwise be ignored and a
 # default used). Users keep their own data under the top-level "extra" object or under any key that
 # starts with "x-"; both are kept exactly on save.
-TOP_KEYS = ("format", "version", "units", "project", "criteria", "soil", "walls", "extra")
+TOP_KEYS = ("format", "version", "units", "project", "criteria", "soil", "site", "walls", "extra")
 PROJECT_KEYS = ("name", "number", "engineer", "checker", "client", "address", "revision", "revision_date", "notes")
-CRITERIA_KEYS = ("method", "sds", "bearing_increase", "required", "combinations")
-REQUIRED_KEYS = tuple(c.value for c in ALL_CHECKS)
+# the options a code basis may accept (each basis lists its own in CodeBasis.options)
+OPTION_KEYS = ("ev_at_soil", "seismic_overturning_reduction", "wind_omega", "seismic_snow_factor")
+CRITERIA_KEYS = ("method", "sds", "bearing_increase", "required", "combinations", *OPTION_KEYS)
+REQUIRED_KEYS = tuple(c.id for c in checks(Family.SERVICE))
+SITE_KEYS = ("frost_depth",)
 COMBINATION_KEYS = ("name", "factors", "checks")
 SOIL_KEYS = (
     "allowable_bearing",
@@ -74,6 +80,8 @@ SOIL_KEYS = (
     "passive_ignore",
     "unit_weight",
     "report",
+    "sliding_basis",
+    "presumptive_class",
 )
 WALL_KEYS = ("id", "label", "length", "thickness", "footing", "stem", "loads", "sizing")
 FOOTING_KEYS = ("width", "thickness", "extension_start", "extension_end", "cover", "unit_weight", "offset")
@@ -83,7 +91,20 @@ LOAD_KEYS = {
     "point": ("type", "case", "value", "at", "label", "reverses"),
     "lateral": ("type", "case", "value", "height", "label"),
 }
-SIZING_KEYS = ("width_min", "width_max", "width_step", "thickness_min", "thickness_max", "thickness_step")
+SIZING_KEYS = (
+    "width_min",
+    "width_max",
+    "width_step",
+    "thickness_min",
+    "thickness_max",
+    "thickness_step",
+    "extension_max",
+    "extension_step",
+)
+# ASCE 7-16 12.13.4: the reductions of the foundation overturning moment it allows.
+OVERTURNING_REDUCTIONS = (0.0, 0.10, 0.25)
+# IBC 2021 1605.2: omega on 0.6W, 1.3 for wind of ASCE 7 chapters 26 to 31, else 1.0.
+WIND_OMEGAS = (1.0, 1.3)
 USER_PREFIX = "x-"
 
 # Limits of physical sense on plain numbers (common practice: beyond them the number is a slip).
@@ -283,43 +304,47 @@ def _combination(raw: Any) -> LoadCombination:
                 hint = f'did you mean "{close[0]}"? ' if close else ""
                 raise InputError(str(key)[:40], f"unknown load case; {hint}expected one of {', '.join(_CASES)} (ASCE 7-16 2.2)")
             factors.append((_CASES[key], _number(factors_raw, key, limit=MAX_FACTOR, limit_reason="a load factor")))
-    checks_raw = obj.get("checks", [c.value for c in ALL_CHECKS])
+    service = checks(Family.SERVICE)
+    checks_raw = obj.get("checks", [c.id for c in service])
     if "checks" not in obj:
-        _assume("checks", ", ".join(c.value for c in ALL_CHECKS), "a combination applies to every check unless it says")
+        _assume("checks", ", ".join(c.id for c in service), "a combination applies to every check unless it says")
     if not isinstance(checks_raw, list) or not checks_raw:
         raise InputError("checks", f'expected a list such as ["overturning", "sliding", "bearing"], got {_show(checks_raw)}')
-    names = {c.value: c for c in ALL_CHECKS}
-    checks = set()
+    names = {c.id: c for c in service}
+    chosen = set()
     for i, c in enumerate(checks_raw):
         if not isinstance(c, str) or c not in names:
-            raise InputError(f"checks[{i}]", f'expected "overturning", "sliding" or "bearing", got {_show(c)}')
-        checks.add(names[c])
-    return LoadCombination(name=name, factors=tuple(factors), checks=frozenset(checks))
+            raise InputError(f"checks[{i}]", f"expected one of {', '.join(names)}, got {_show(c)}")
+        chosen.add(names[c])
+    return LoadCombination(name=name, factors=tuple(factors), checks=frozenset(chosen))
 
 
-def _criteria(raw: Any, seismic_walls: list[str]) -> DesignCriteria:
+def _criteria(raw: Any, seismic_walls: list[str], seismic_snow_walls: list[str] | None = None) -> DesignCriteria:
+    seismic_snow_walls = seismic_snow_walls or []
     obj = _object(raw, "")
     _keys(obj, CRITERIA_KEYS)
-    method = _choice(
-        obj,
-        "method",
-        {m.value: m for m in Method},
-        Method.ASCE7_16_ASD.value,
-        "ASCE 7-16 2.4 ASD combinations (Kernline's default)",
+    method: CodeBasis = _choice(
+        obj, "method", {c.id: c for c in codes()}, "asce7-16-asd", "ASCE 7-16 ASD combinations (Kernline's default)"
     )
+    for key in OPTION_KEYS:
+        if key in obj and key not in method.options:
+            raise InputError(key, f'is not an option of the method "{method.id}"; leave it out or choose another method')
     base = default_required(method)
     with _scope("required"):
         req_obj = _object(obj.get("required"), "")
         _keys(req_obj, REQUIRED_KEYS)
-        basis = (
-            "a ratio of 1.0 with the ASD combinations (IBC 2021 1605.1.1, ASCE 7-16 2.4)"
-            if method is Method.ASCE7_16_ASD
-            else "factors of safety common in practice with service loads"
-        )
         required = RequiredRatios(
             {
-                c.value: _number(req_obj, c.value, base.of(c), basis, positive=True, limit=MAX_FACTOR, limit_reason="a ratio")
-                for c in ALL_CHECKS
+                c: _number(
+                    req_obj,
+                    c,
+                    base.of(check_by_id(c)),
+                    method.required_basis,
+                    positive=True,
+                    limit=MAX_FACTOR,
+                    limit_reason="a ratio",
+                )
+                for c in REQUIRED_KEYS
             }
         )
     custom: list[LoadCombination] = []
@@ -332,7 +357,7 @@ def _criteria(raw: Any, seismic_walls: list[str]) -> DesignCriteria:
                 custom.append(_combination(c))
         if not custom:
             raise InputError("combinations", "is empty; leave it out to use the method's preset combinations")
-    uses_sds = method is Method.ASCE7_16_ASD and not custom
+    uses_sds = method.uses_sds and not custom
     if uses_sds and seismic_walls and "sds" not in obj:
         raise InputError(
             "sds",
@@ -340,26 +365,68 @@ def _criteria(raw: Any, seismic_walls: list[str]) -> DesignCriteria:
             "the vertical seismic effect Ev = 0.2 S_DS D (ASCE 7-16 12.4.2.2) needs S_DS from the site's seismic data",
         )
     sds = _number(obj, "sds", non_negative=True) if "sds" in obj else 0.0  # without E loads S_DS has no effect
-    if sds > MAX_SDS:
+    if uses_sds and sds > MAX_SDS:
         raise InputError(
             "sds", f"{sds:g} makes the counteracting dead-load factor 0.6 - 0.14 S_DS negative (ASCE 7-16 2.4.5); check the value"
+        )
+    seismic = bool(seismic_walls) and not custom
+    ev_at_soil = True
+    if "ev_at_soil" in method.options:
+        if "ev_at_soil" in obj:
+            ev_at_soil = obj["ev_at_soil"]
+            if not isinstance(ev_at_soil, bool):
+                raise InputError("ev_at_soil", f"expected true or false, got {_show(ev_at_soil)}")
+        elif seismic:
+            _assume("ev_at_soil", "true", "Ev = 0.2 S_DS D kept in 0.6D + 0.7E at the soil (ASCE 7-16 12.4.2.2 permits zero)")
+    reduction = 0.0
+    if "seismic_overturning_reduction" in obj:
+        reduction = _number(obj, "seismic_overturning_reduction", non_negative=True)
+        if not any(abs(reduction - r) < 1e-12 for r in OVERTURNING_REDUCTIONS):
+            raise InputError(
+                "seismic_overturning_reduction",
+                f"expected 0, 0.10 (modal response spectrum) or 0.25 (equivalent lateral force), ASCE 7-16 12.13.4; got {reduction:g}",
+            )
+    elif "seismic_overturning_reduction" in method.options and seismic:
+        _assume("seismic_overturning_reduction", "0", "the ASCE 7-16 12.13.4 reduction is not taken")
+    omega = 1.3
+    if "wind_omega" in method.options:
+        if "wind_omega" in obj:
+            omega = _number(obj, "wind_omega", positive=True)
+            if not any(abs(omega - w) < 1e-12 for w in WIND_OMEGAS):
+                raise InputError(
+                    "wind_omega", f"expected 1.3 (wind of ASCE 7 chapters 26 to 31) or 1.0, IBC 2021 1605.2; got {omega:g}"
+                )
+        else:
+            _assume("wind_omega", "1.3", "IBC 2021 1605.2: omega = 1.3 for wind of ASCE 7 chapters 26 to 31")
+    snow_factor = None
+    if "seismic_snow_factor" in obj:
+        snow_factor = _number(obj, "seismic_snow_factor", non_negative=True, limit=1.0, limit_reason="a companion snow factor")
+    elif "seismic_snow_factor" in method.options and seismic and seismic_snow_walls:
+        raise InputError(
+            "seismic_snow_factor",
+            f"is missing; walls {', '.join(seismic_snow_walls[:3])} carry E and S loads, and the snow factor of the "
+            f"{method.id} seismic combination (2.4.5) is one Kernline has not confirmed: enter it as the standard prints it",
         )
     return DesignCriteria(
         method=method,
         required=required,
         sds=sds,
-        bearing_increase=_bearing_increase(obj),
+        bearing_increase=_bearing_increase(obj, method),
         custom_combinations=tuple(custom),
+        ev_at_soil=ev_at_soil,
+        seismic_overturning_reduction=reduction,
+        wind_omega=omega,
+        seismic_snow_factor=snow_factor,
     )
 
 
-def _bearing_increase(obj: dict[str, Any]) -> float:
+def _bearing_increase(obj: dict[str, Any], method: CodeBasis) -> float:
     """The factor on the allowable in combinations with W or E: 1.0 (none) or more."""
     value = _number(
         obj,
         "bearing_increase",
-        1.0,
-        "no increase of the allowable for W or E",
+        method.bearing_increase,
+        method.bearing_increase_basis,
         positive=True,
         limit=MAX_FACTOR,
         limit_reason="a bearing increase",
@@ -371,44 +438,95 @@ def _bearing_increase(obj: dict[str, Any]) -> float:
     return value
 
 
+def _site(raw: Any) -> Site:
+    """Site conditions: the frost depth (IBC 2021 1809.5); without it the 12 in of 1809.4 governs."""
+    obj = _object(raw, "")
+    _keys(obj, SITE_KEYS)
+    if "frost_depth" not in obj:
+        _assume("frost_depth", "none given", "only the 12 in minimum depth of IBC 2021 1809.4 is required")
+        return Site()
+    return Site(frost_depth=_quantity(obj, "frost_depth", Kind.LENGTH, non_negative=True))
+
+
 def _soil(raw: Any, present: bool) -> SoilProperties:
-    """The geotechnical report's values. The site values have no default: a missing one is refused."""
+    """The geotechnical report's values, or a presumptive class of IBC 2021 Table 1806.2.
+
+    The site values have no default: a missing one is refused.
+    """
     if not present:
         raise InputError(
             "",
-            "is missing; give the geotechnical report's allowable_bearing, friction (or cohesion) and unit_weight",
+            "is missing; give the geotechnical report's allowable_bearing, friction (or cohesion) and unit_weight, "
+            "or a presumptive_class of IBC Table 1806.2",
         )
     obj = _object(raw, "")
     _keys(obj, SOIL_KEYS)
-    if "allowable_bearing" not in obj:
-        raise InputError(
-            "allowable_bearing",
-            'is missing; enter the allowable bearing pressure from the geotechnical report, such as "2000 psf"',
-        )
-    if "friction" not in obj and "cohesion" not in obj:
-        raise InputError(
-            "friction",
-            "is missing; enter the friction coefficient from the geotechnical report (or cohesion, for a cohesive soil)",
-        )
+    report = _text(obj, "report")
+    presumptive = None
+    if "presumptive_class" in obj:
+        number = obj["presumptive_class"]
+        if isinstance(number, bool) or not isinstance(number, int) or number not in TABLE_1806_2:
+            raise InputError("presumptive_class", f"expected a class of IBC 2021 Table 1806.2, 1 to 5, got {_show(number)}")
+        presumptive = TABLE_1806_2[number]
+        for key in ("allowable_bearing", "friction", "cohesion", "passive"):
+            if key in obj:
+                raise InputError(
+                    key,
+                    f"is given beside presumptive_class {number}, which sets it (IBC 2021 Table 1806.2); keep one of the two",
+                )
+    else:
+        if "allowable_bearing" not in obj:
+            raise InputError(
+                "allowable_bearing",
+                'is missing; enter the allowable bearing pressure from the geotechnical report, such as "2000 psf"',
+            )
+        if "friction" not in obj and "cohesion" not in obj:
+            raise InputError(
+                "friction",
+                "is missing; enter the friction coefficient from the geotechnical report (or cohesion, for a cohesive soil)",
+            )
     if "unit_weight" not in obj:
         raise InputError(
             "unit_weight", 'is missing; enter the soil\'s unit weight from the geotechnical report, such as "110 pcf"'
         )
-    _text(obj, "report")
-    return SoilProperties(
-        allowable_bearing=_quantity(obj, "allowable_bearing", Kind.PRESSURE, positive=True),
+    sliding_default = SlidingBasis.DEAD.value if presumptive else SlidingBasis.TOTAL.value
+    sliding_basis = _choice(
+        obj,
+        "sliding_basis",
+        {b.value: b for b in SlidingBasis},
+        sliding_default,
+        "IBC 2021 Table 1806.2 note a: friction on the dead load"
+        if presumptive
+        else "friction and the cohesion cap on the combination's whole vertical load",
+    )
+    common = dict(
         bearing_basis=_choice(
             obj, "bearing_basis", {b.value: b for b in BearingBasis}, "gross", "the allowable is compared with the gross pressure"
         ),
+        passive_ignore=_quantity(
+            obj, "passive_ignore", Kind.LENGTH, "0 in", "passive resistance taken from the ground surface", non_negative=True
+        ),
+        unit_weight=_quantity(obj, "unit_weight", Kind.UNIT_WEIGHT, non_negative=True),
+        report=report,
+        sliding_basis=sliding_basis,
+    )
+    if presumptive is not None:
+        return SoilProperties(
+            allowable_bearing=presumptive.allowable_bearing,
+            friction=presumptive.friction,
+            cohesion=presumptive.cohesion,
+            passive=presumptive.lateral_bearing,
+            presumptive_class=presumptive.number,
+            **common,
+        )
+    return SoilProperties(
+        allowable_bearing=_quantity(obj, "allowable_bearing", Kind.PRESSURE, positive=True),
         friction=_number(
             obj, "friction", 0.0, BASIS_NONE, non_negative=True, limit=MAX_FRICTION, limit_reason="a friction coefficient"
         ),
         cohesion=_quantity(obj, "cohesion", Kind.PRESSURE, "0 psf", BASIS_NONE, non_negative=True),
         passive=_quantity(obj, "passive", Kind.PRESSURE_GRADIENT, "0 pcf", BASIS_NONE, non_negative=True),
-        passive_ignore=_quantity(
-            obj, "passive_ignore", Kind.LENGTH, "0 in", "passive resistance taken from the ground surface", non_negative=True
-        ),
-        unit_weight=_quantity(obj, "unit_weight", Kind.UNIT_WEIGHT, non_negative=True),
+        **common,
     )
 
 
@@ -557,6 +675,7 @@ def _wall(raw: Any, units: str) -> Wall:
     with _scope("sizing"):
         z = _object(obj.get("sizing"), "")
         _keys(z, SIZING_KEYS)
+        grid = SIZING_KEYS[:6]
         defaults = {
             "width_min": "12 in",
             "width_max": "8 ft",
@@ -567,14 +686,24 @@ def _wall(raw: Any, units: str) -> Wall:
         }
         if units == "SI":
             defaults = {
-                "width_min": "300 mm",
+                "width_min": "325 mm",
                 "width_max": "2400 mm",
                 "width_step": "25 mm",
                 "thickness_min": "300 mm",
                 "thickness_max": "1200 mm",
                 "thickness_step": "25 mm",
             }
-        bounds = {key: _quantity(z, key, Kind.LENGTH, defaults[key], BASIS_SIZING, positive=True) for key in SIZING_KEYS}
+        bounds = {key: _quantity(z, key, Kind.LENGTH, defaults[key], BASIS_SIZING, positive=True) for key in grid}
+        if bounds["width_min"] < MIN_WIDTH - 1e-9:
+            raise InputError(
+                "width_min", f"{_show(z.get('width_min'))} is below the 12 in minimum width of a footing (IBC 2021 1809.4)"
+            )
+        if "extension_max" in z or "extension_step" in z:
+            if "extension_max" not in z or "extension_step" not in z:
+                missing = "extension_step" if "extension_max" in z else "extension_max"
+                raise InputError(missing, "is missing; sizing the length needs both extension_max and extension_step")
+            bounds["extension_max"] = _quantity(z, "extension_max", Kind.LENGTH, positive=True)
+            bounds["extension_step"] = _quantity(z, "extension_step", Kind.LENGTH, positive=True)
         sizing = _sizing_bounds(bounds)
     return Wall(
         id=wid,
@@ -595,9 +724,13 @@ def _sizing_bounds(bounds: dict[str, float]) -> SizingBounds:
     except InputError as err:
         if err.field != "width_step":
             raise
-        widths = (bounds["width_max"] - bounds["width_min"]) / bounds["width_step"] + 1.0
-        thicknesses = (bounds["thickness_max"] - bounds["thickness_min"]) / bounds["thickness_step"] + 1.0
-        key = "width_step" if widths >= thicknesses else "thickness_step"
+        counts = {
+            "width_step": (bounds["width_max"] - bounds["width_min"]) / bounds["width_step"] + 1.0,
+            "thickness_step": (bounds["thickness_max"] - bounds["thickness_min"]) / bounds["thickness_step"] + 1.0,
+        }
+        if bounds.get("extension_step"):
+            counts["extension_step"] = bounds["extension_max"] / bounds["extension_step"] + 1.0
+        key = max(counts, key=lambda k: counts[k])
         raise InputError(key, err.problem) from None
 
 
@@ -632,11 +765,12 @@ def _wall_from_text(key: str, units: str) -> tuple[Wall, tuple[Assumption, ...]]
     return _wall_uncached(json.loads(key), units)
 
 
-def _has_seismic_loads(raw: Any) -> bool:
+def _has_case(raw: Any, case: str) -> bool:
+    """The raw wall carries a load of ``case`` (read before the walls are parsed)."""
     return (
         isinstance(raw, dict)
         and isinstance(raw.get("loads"), list)
-        and any(isinstance(ld, dict) and ld.get("case") == "E" for ld in raw["loads"])
+        and any(isinstance(ld, dict) and ld.get("case") == case for ld in raw["loads"])
     )
 
 
@@ -686,19 +820,24 @@ def parse_project(raw: Any) -> Project:
                 raise InputError("walls", f"expected a list of walls, got {_show(walls_raw)}")
             if not walls_raw:
                 raise InputError("walls", "is empty; a project needs at least one wall")
-            seismic = [str(w.get("id")) for w in walls_raw if _has_seismic_loads(w)]
+            seismic = [str(w.get("id")) for w in walls_raw if _has_case(w, "E")]
+            seismic_snow = [str(w.get("id")) for w in walls_raw if _has_case(w, "E") and _has_case(w, "S")]
             with _scope("project"):
                 info = _info(obj.get("project"))
             with _scope("criteria"):
-                criteria = _criteria(obj.get("criteria"), seismic)
+                criteria = _criteria(obj.get("criteria"), seismic, seismic_snow)
             with _scope("soil"):
                 soil = _soil(obj.get("soil"), "soil" in obj)
+            with _scope("site"):
+                site = _site(obj.get("site"))
             walls = []
             for i, w in enumerate(walls_raw):
                 with _scope(f"walls[{i}]"):
                     walls.append(_wall_cached(w, units))
             with _scope(""):
-                return Project(info=info, units=units, criteria=criteria, soil=soil, walls=tuple(walls), assumptions=tuple(found))
+                return Project(
+                    info=info, units=units, criteria=criteria, soil=soil, site=site, walls=tuple(walls), assumptions=tuple(found)
+                )
         finally:
             _system.reset(t_system)
     finally:

@@ -18,7 +18,7 @@ import numpy as np
 from . import overturning, soil_pressure
 from .combinations import DesignCase, combinations_of, design_cases
 from .loads import lateral_resultants, self_weight, vertical_resultants
-from .model import DesignCriteria, LoadCase, Site, SoilProperties, Wall
+from .model import DesignCriteria, LoadCase, Site, SlidingBasis, SoilProperties, Wall
 from .registry import Check, CheckArrays, Family, checks
 
 
@@ -43,6 +43,7 @@ class CaseTable:
         shear_moment: sum f*H*h, the lateral moment about the top of the footing (N*m).
         seismic_shear / seismic_shear_moment: the parts of shear and shear_moment from E loads (for
             the ASCE 7-16 12.13.4 reduction of the seismic overturning moment).
+        applied_dead: f_D times the wall's dead loads (N), for friction on the dead load.
         wind_or_seismic: the combination carries W or E (bearing increase applies).
         checks: the checks evaluated (:func:`table_checks`), in registry order.
         applies: (len(checks), k) booleans, the checks each case's combination applies to (a
@@ -66,6 +67,7 @@ class CaseTable:
     shear_moment: np.ndarray
     seismic_shear: np.ndarray
     seismic_shear_moment: np.ndarray
+    applied_dead: np.ndarray
     wind_or_seismic: np.ndarray
     checks: tuple[Check, ...]
     applies: np.ndarray
@@ -154,6 +156,7 @@ def case_table(wall: Wall, soil: SoilProperties, criteria: DesignCriteria, site:
         shear_moment=(shears * h_height).sum(axis=1),
         seismic_shear=(shears * seismic).sum(axis=1),
         seismic_shear_moment=(shears * seismic * h_height).sum(axis=1),
+        applied_dead=factors[:, column[LoadCase.D]] * float(v_force[v_case == column[LoadCase.D]].sum()),
         wind_or_seismic=wind_or_seismic,
         checks=evaluated,
         applies=applies,
@@ -324,7 +327,8 @@ def statics(table: CaseTable, width: float | np.ndarray, thickness: float | np.n
     N = sum f P + f_D W_f; M about the footing's mid-length = direction * sum f H (h + t_f) + sum f P
     (x - L_f/2), the E part of the shears' moment times (1 - r) where the ASCE 7-16 12.13.4 reduction
     r is taken (for overturning and bearing; sliding keeps the full shear); then e = M/N and the
-    rigid-footing pressure (:mod:`engine.soil_pressure`).
+    rigid-footing pressure (:mod:`engine.soil_pressure`). The normal force of friction is N, or with
+    ``sliding_basis`` "dead" the combination's dead load f_D (D + W_f), at most N.
     """
     b = np.asarray(width, dtype=float)
     d = np.asarray(thickness, dtype=float)
@@ -346,6 +350,12 @@ def statics(table: CaseTable, width: float | np.ndarray, thickness: float | np.n
     else:
         reduced = lateral
     moment = per_case(table.direction_sign) * reduced + per_case(table.applied_moment)
+    if soil.sliding_basis is SlidingBasis.DEAD:
+        # IBC 2021 Table 1806.2 note a, 1806.3.2: friction on the dead load f_D (D + W_f); never more
+        # than the whole N the soil feels, which uplift in the combination may have reduced
+        normal = np.minimum(per_case(table.applied_dead) + factored_weight, vertical)
+    else:
+        normal = vertical
     e = soil_pressure.resultant_eccentricity(moment, vertical)
     pressure = soil_pressure.pressure_distribution(vertical, e, b, length)
     return Statics(
@@ -365,7 +375,7 @@ def statics(table: CaseTable, width: float | np.ndarray, thickness: float | np.n
         stable=np.broadcast_to(pressure.stable, shape),
         lateral_moment=np.broadcast_to(lateral, shape),
         overturning_lateral_moment=np.broadcast_to(reduced, shape),
-        sliding_normal=np.broadcast_to(vertical, shape),
+        sliding_normal=np.broadcast_to(normal, shape),
     )
 
 

@@ -72,7 +72,7 @@ def projects(draw, passive_only: bool = False):
         },
         "loads": loads,
         "sizing": {
-            "width_min": f"{draw(st.sampled_from([6, 12, 18]))} in",
+            "width_min": f"{draw(st.sampled_from([12, 18, 24]))} in",  # IBC 2021 1809.4: at least 12 in
             "width_max": f"{draw(st.sampled_from([48, 72, 96]))} in",
             "width_step": f"{draw(st.sampled_from([1, 2, 3]))} in",
             "thickness_min": f"{draw(st.sampled_from([8, 12]))} in",

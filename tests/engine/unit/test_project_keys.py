@@ -293,7 +293,7 @@ def test_combination_factor_paths_are_exact():
 @pytest.mark.parametrize(
     ("sizing", "field"),
     [
-        ({"width_min": "1 in", "width_max": "900 m", "width_step": "1 mm"}, "walls[0].sizing.width_step"),
+        ({"width_min": "12 in", "width_max": "900 m", "width_step": "1 mm"}, "walls[0].sizing.width_step"),
         ({"thickness_min": "1 in", "thickness_max": "900 m", "thickness_step": "1 mm"}, "walls[0].sizing.thickness_step"),
     ],
 )

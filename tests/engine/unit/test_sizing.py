@@ -14,11 +14,11 @@ from engine.stability import case_table, evaluate
 FOOT = 0.3048
 
 
-def project(loads=None, sizing=None, footing=None, soil=None):
+def project(loads=None, sizing=None, footing=None, soil=None, wall_thickness="8 in"):
     wall = {
         "id": "T1",
         "length": "12 ft",
-        "thickness": "8 in",
+        "thickness": wall_thickness,
         "footing": footing or {"width": "24 in", "thickness": "12 in", "extension_start": "1 ft", "extension_end": "1 ft"},
         "loads": loads
         or [
@@ -77,11 +77,12 @@ def test_never_narrower_than_the_wall_it_carries():
     p = project(
         footing={"width": "24 in", "thickness": "12 in"},
         loads=[{"type": "line", "case": "D", "value": "100 plf"}],
-        sizing={"width_min": "4 in", "width_max": "24 in"},
+        sizing={"width_min": "12 in", "width_max": "24 in"},  # 12 in: the least width IBC 2021 1809.4 allows
+        wall_thickness="16 in",
     )
     s = size_footing(p, p.walls[0])
-    assert not s.allowed[:, s.widths < 8 * INCH - 1e-9].any()
-    assert s.width == pytest.approx(8 * INCH)
+    assert not s.allowed[:, s.widths < 16 * INCH - 1e-9].any()
+    assert s.width == pytest.approx(16 * INCH)
 
 
 def test_infeasible_sizing_says_which_check_fails_and_what_helps():
@@ -116,12 +117,13 @@ def test_an_absurd_grid_is_refused_when_the_file_is_read():
 def test_next_narrower_candidate_below_the_wall_is_named_as_such():
     """The message does not blame a check for a candidate refused only for being narrower than the wall."""
     p = project(
-        footing={"width": "12 in", "thickness": "12 in"},
+        footing={"width": "18 in", "thickness": "12 in"},
         loads=[{"type": "line", "case": "D", "value": "100 plf"}],
-        sizing={"width_min": "6 in", "width_max": "24 in"},
+        sizing={"width_min": "12 in", "width_max": "24 in"},
+        wall_thickness="16 in",
     )
     s = size_footing(p, p.walls[0])
-    assert s.width == pytest.approx(8 * INCH)
+    assert s.width == pytest.approx(16 * INCH)
     assert "next narrower one is narrower than the wall" in s.message
 
 
