@@ -203,12 +203,10 @@ def _warn(text: str) -> None:
 
 
 def _size(path: str, as_json: bool, write: bool) -> int:
-    from dataclasses import replace
-
     from engine.input_warnings import input_warnings
     from engine.project_file import load_project, save_project, with_footing_sizes
     from engine.results import check_wall, results_json
-    from engine.sizing import size_footing
+    from engine.sizing import size_footing, sized_footing_values, sized_wall
     from engine.summary import size_table, warnings_text
 
     check_input_file(path)
@@ -218,17 +216,15 @@ def _size(path: str, as_json: bool, write: bool) -> int:
     project = doc.project
     sized = []
     results = []
+    sizes: dict[str, dict[str, float]] = {}
     for wall in project.walls:
         s = size_footing(project, wall)
         sized.append(s)
         if s.feasible:
-            wall = replace(wall, footing=replace(wall.footing, width=s.width, thickness=s.thickness))
-        results.append(check_wall(project, wall))
+            sizes[wall.id] = sized_footing_values(wall, s)
+        results.append(check_wall(project, sized_wall(wall, s)))
     written: int | None = None
     if write:  # written before anything is printed, so a closed output pipe cannot stop the write
-        sizes = {
-            s.wall_id: (s.width, s.thickness) for s in sized if s.feasible and s.width is not None and s.thickness is not None
-        }
         save_project(path, with_footing_sizes(doc.raw, sizes, project.units))
         written = len(sizes)
     _warn(warnings_text(input_warnings(project, results)))

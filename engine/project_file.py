@@ -949,19 +949,23 @@ def save_project(path: str | os.PathLike[str], raw: dict[str, Any]) -> None:
     atomic_write_text(Path(path), text)
 
 
-def with_footing_sizes(raw: dict[str, Any], sizes: dict[str, tuple[float, float]], units: str) -> dict[str, Any]:
-    """A copy of ``raw`` with the footing width and thickness of the named walls replaced.
+def with_footing_sizes(
+    raw: dict[str, Any], sizes: dict[str, tuple[float, float] | dict[str, float]], units: str
+) -> dict[str, Any]:
+    """A copy of ``raw`` with footing dimensions of the named walls replaced.
 
-    Everything else in the document is kept as it was. Sizes are written in the project's units
-    (inches for US, millimetres for SI).
+    ``sizes`` maps a wall id to (width, thickness), or to a mapping of footing keys ("width",
+    "thickness", "extension_start", "extension_end") to lengths in m. Everything else in the document
+    is kept as it was. Lengths are written in the project's units (inches for US, millimetres for SI).
     """
     out = copy.deepcopy(raw)
     for wall in out.get("walls", []):
         if isinstance(wall, dict) and wall.get("id") in sizes:
-            width, thickness = sizes[wall["id"]]
+            given = sizes[wall["id"]]
+            values = dict(given) if isinstance(given, dict) else {"width": given[0], "thickness": given[1]}
             footing = wall.setdefault("footing", {})
-            footing["width"] = length_text(width, units)
-            footing["thickness"] = length_text(thickness, units)
+            for key, value in values.items():
+                footing[key] = length_text(value, units)
     return out
 
 

@@ -57,6 +57,9 @@ class SizingResult:
         check_normalized: (checks, rows, cols) lowest ratio / required of each check over all
             cases, for drawing each check's boundary.
         width, thickness: the chosen size, or None when no candidate passes.
+        extension: the extension added at each end when the length was sized (0.0 when it was not
+            needed; None when nothing passes); extensions: the extensions tried; length: the chosen
+            footing's length L_f.
         message: what was found, in words; with suggestions when nothing passes.
     """
 
@@ -73,6 +76,9 @@ class SizingResult:
     message: str
     suggestions: tuple[str, ...] = ()
     checks: tuple[Check, ...] = ()
+    extension: float | None = None
+    extensions: np.ndarray | None = None
+    length: float | None = None
 
     @property
     def feasible(self) -> bool:
@@ -80,7 +86,8 @@ class SizingResult:
 
     @property
     def candidates(self) -> int:
-        return int(self.widths.size * self.thicknesses.size)
+        lengths = self.extensions.size if self.extensions is not None else 1
+        return int(self.widths.size * self.thicknesses.size * lengths)
 
     def governing_check(self, row: int, col: int) -> Check:
         return self.checks[int(self.governing[row, col])]
@@ -90,6 +97,8 @@ class SizingResult:
             "feasible": self.feasible,
             "width": self.width,
             "thickness": self.thickness,
+            "extension": self.extension if self.extensions is not None and self.extensions.size > 1 else None,
+            "length": self.length,
             "candidates": self.candidates,
             "message": self.message,
             "suggestions": list(self.suggestions),
@@ -110,30 +119,83 @@ def feasibility_map(table: CaseTable, widths: np.ndarray, thicknesses: np.ndarra
     return check_normalized, allowed
 
 
+def sized_wall(wall: Wall, sizing: SizingResult) -> Wall:
+    """``wall`` on the footing sizing chose (unchanged when nothing passes)."""
+    if not sizing.feasible or sizing.width is None or sizing.thickness is None:
+        return wall
+    chosen = extended(wall, sizing.extension or 0.0)
+    return replace(chosen, footing=replace(chosen.footing, width=sizing.width, thickness=sizing.thickness))
+
+
+def sized_footing_values(wall: Wall, sizing: SizingResult) -> dict[str, float]:
+    """The footing keys sizing changes, for writing back: width and thickness, and the extensions
+    when the length was sized."""
+    chosen = sized_wall(wall, sizing)
+    values = {"width": chosen.footing.width, "thickness": chosen.footing.thickness}
+    if sizing.extensions is not None and sizing.extensions.size > 1:
+        values.update(extension_start=chosen.footing.extension_start, extension_end=chosen.footing.extension_end)
+    return values
+
+
+def extended(wall: Wall, extension: float) -> Wall:
+    """``wall`` with ``extension`` added to the footing's extension at both ends (m)."""
+    if extension == 0.0:
+        return wall
+    footing = replace(
+        wall.footing,
+        extension_start=wall.footing.extension_start + extension,
+        extension_end=wall.footing.extension_end + extension,
+    )
+    return replace(wall, footing=footing)
+
+
 def size_footing(project: Project, wall: Wall) -> SizingResult:
-    """Find the passing candidate with the least B*D on the wall's sizing grid (its size is bounded by
-    :class:`engine.model.SizingBounds`)."""
+    """Find the passing candidate with the least concrete on the wall's sizing grid.
+
+    Without extension bounds the grid is widths x thicknesses and the choice has the least B*t_f (the
+    length is fixed). With ``sizing.extension_max`` > 0 a third axis adds equal extensions e at both
+    ends (0 to extension_max by extension_step); the choice then has the least volume B*t_f*L_f,
+    ties going to the shorter, then the thinner, then the narrower footing. The map returned is the
+    one at the chosen extension (at the largest one when nothing passes).
+    """
     widths, thicknesses = candidate_grid(wall)
-    table = case_table(wall, project.soil, project.criteria, project.site)
-    check_normalized, allowed = feasibility_map(table, widths, thicknesses)
+    z = wall.sizing
+    extensions = candidate_values(0.0, z.extension_max, z.extension_step) if z.extension_max > 0.0 else np.zeros(1)
+    maps = []
+    best: tuple[float, float, float, float, int, int, int] | None = None  # volume, e, t, b, k, row, col
+    for k, e in enumerate(extensions.tolist()):
+        trial = extended(wall, e)
+        table = case_table(trial, project.soil, project.criteria, project.site)
+        check_normalized, allowed = feasibility_map(table, widths, thicknesses)
+        passes = allowed & (np.min(check_normalized, axis=0) >= 1.0 - 1e-9)
+        maps.append((trial, table, check_normalized, allowed, passes))
+        if not passes.any():
+            continue
+        rows, cols = np.nonzero(passes)
+        volume = np.round(thicknesses[rows] * widths[cols] * trial.footing_length, 12)
+        # least volume; ties to the shorter (this e is the shortest so far at equal volume), thinner, narrower
+        order = np.lexsort((widths[cols], thicknesses[rows], volume))
+        i = int(order[0])
+        candidate = (float(volume[i]), e, float(thicknesses[rows[i]]), float(widths[cols[i]]), k, int(rows[i]), int(cols[i]))
+        if best is None or candidate[:4] < best[:4]:
+            best = candidate
+
+    k = best[4] if best is not None else len(maps) - 1
+    trial, table, check_normalized, allowed, passes = maps[k]
     governing = np.argmin(check_normalized, axis=0)
     normalized = np.min(check_normalized, axis=0)
-    passes = allowed & (normalized >= 1.0 - 1e-9)
-
-    area = thicknesses[:, None] * widths[None, :]
     width: float | None
     thickness: float | None
-    if passes.any():
-        rows, cols = np.nonzero(passes)
-        # least B*D; ties to the thinner, then the narrower
-        order = np.lexsort((widths[cols], thicknesses[rows], np.round(area[rows, cols], 12)))
-        row, col = int(rows[order[0]]), int(cols[order[0]])
-        width, thickness = float(widths[col]), float(thicknesses[row])
+    extension: float | None
+    if best is not None:
+        _, extension, thickness, width, _, row, col = best
         message = _why_smallest(table.checks, check_normalized, passes, allowed, row, col)
+        if extensions.size > 1:
+            message += _why_this_length(project, extensions, k, maps, widths, thicknesses)
         suggestions: tuple[str, ...] = ()
     else:
-        width, thickness = None, None
-        message, suggestions = _diagnose(project, wall, table, widths, thicknesses, check_normalized, allowed)
+        width, thickness, extension = None, None, None
+        message, suggestions = _diagnose(project, trial, table, widths, thicknesses, check_normalized, allowed)
     return SizingResult(
         wall_id=wall.id,
         widths=widths,
@@ -148,7 +210,23 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
         message=message,
         suggestions=suggestions,
         checks=table.checks,
+        extension=extension,
+        extensions=extensions,
+        length=trial.footing_length if best is not None else None,
     )
+
+
+def _why_this_length(
+    project: Project, extensions: np.ndarray, k: int, maps: list, widths: np.ndarray, thicknesses: np.ndarray
+) -> str:
+    """Say what the chosen extension saves against the shorter ones."""
+    e = float(extensions[k])
+    shorter = [i for i in range(k) if maps[i][4].any()]
+    if k == 0:
+        return "; no extension needed (the shortest footing has the least concrete)"
+    if not shorter:
+        return f"; {format_length(e, project.units)} more at each end is the least extension that lets any size pass"
+    return f"; {format_length(e, project.units)} more at each end gives the least concrete"
 
 
 def _why_smallest(

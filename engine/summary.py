@@ -8,7 +8,7 @@ from collections.abc import Sequence
 from . import CAUTION
 from .errors import one_line
 from .input_warnings import InputWarning
-from .model import ALL_CHECKS, Project
+from .model import Project
 from .results import Governing, WallResult
 from .sizing import SizingResult
 from .units import format_length
@@ -18,13 +18,15 @@ def ratio_text(g: Governing) -> str:
     """ "1.37 >= 1.00 OK" style text of a governing ratio (no colour needed to read it)."""
     if math.isinf(g.ratio):
         return "no demand"
+    if g.ratio == 0.0 and g.case_index is not None and g.check.id == "bearing":
+        return "no equilibrium NG"
     verdict = "OK" if g.passes else "NG"
     sign = ">=" if g.passes else "<"
     return f"{g.ratio:.2f} {sign} {g.required:.2f} {verdict}"
 
 
 def case_text(g: Governing) -> str:
-    if math.isinf(g.ratio):
+    if math.isinf(g.ratio) or g.case_index is None:
         return ""
     return g.combination if g.direction == "none" else f"{g.combination} ({g.direction})"
 
@@ -42,9 +44,10 @@ def _table(headers: Sequence[str], rows: Sequence[Sequence[str]]) -> str:
 
 
 def check_table(project: Project, results: Sequence[WallResult]) -> str:
-    """One row per wall: footing, the three governing ratios with their cases, and the verdict; then
-    the values taken by default, and the caution."""
-    headers = ["Wall", "Footing B x D x L", *[c.value.capitalize() for c in ALL_CHECKS], "Governing case (worst)", "Result"]
+    """One row per wall: footing, the governing ratio of every registered check with its case, and the
+    verdict; then the values taken by default, and the caution."""
+    checks = results[0].table.checks if results else ()
+    headers = ["Wall", "Footing B x t_f x L_f", *[c.title for c in checks], "Governing case (worst)", "Result"]
     rows = []
     for r in results:
         worst = r.worst
@@ -52,8 +55,8 @@ def check_table(project: Project, results: Sequence[WallResult]) -> str:
             [
                 one_line(r.wall_id, 40),
                 footing_text(r.width, r.thickness, r.length, project.units),
-                *[ratio_text(r.governing[c]) for c in ALL_CHECKS],
-                f"{worst.check.value}: {case_text(worst)}",
+                *[ratio_text(r.governing[c]) for c in checks],
+                f"{worst.check.id}: {case_text(worst)}".rstrip(": "),
                 "PASS" if r.passes else "FAIL",
             ]
         )
@@ -65,12 +68,13 @@ def check_table(project: Project, results: Sequence[WallResult]) -> str:
 
 def size_table(project: Project, sized: Sequence[SizingResult], results: Sequence[WallResult]) -> str:
     """One row per wall: the size found (or why none) and the governing ratios at that size."""
-    headers = ["Wall", "Sized B x D", "Candidates", *[c.value.capitalize() for c in ALL_CHECKS], "Why this size"]
+    checks = results[0].table.checks if results else ()
+    headers = ["Wall", "Sized B x t_f x L_f", "Candidates", *[c.title for c in checks], "Why this size"]
     rows = []
     for s, r in zip(sized, results, strict=True):
         size = (
-            f"{format_length(s.width, project.units)} x {format_length(s.thickness, project.units)}"
-            if s.feasible
+            footing_text(s.width, s.thickness, r.length, project.units)
+            if s.feasible and s.width and s.thickness
             else "none passes"
         )
         note = s.message if s.feasible else s.message + ". " + " ".join(s.suggestions)
@@ -79,7 +83,7 @@ def size_table(project: Project, sized: Sequence[SizingResult], results: Sequenc
                 one_line(s.wall_id, 40),
                 size,
                 str(s.candidates),
-                *[ratio_text(r.governing[c]) if s.feasible else "" for c in ALL_CHECKS],
+                *[ratio_text(r.governing[c]) if s.feasible else "" for c in checks],
                 note,
             ]
         )
