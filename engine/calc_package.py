@@ -21,6 +21,7 @@ from dataclasses import dataclass, field, replace
 from typing import Any
 
 from . import CAUTION, __version__
+from .checks.embedment import MIN_DEPTH
 from .combinations import combinations_of
 from .errors import InputError
 from .loads import VerticalResultant, lateral_resultants, vertical_resultants
@@ -34,12 +35,14 @@ from .model import (
     Method,
     PointLoad,
     Project,
+    SlidingBasis,
     Wall,
 )
 from .results import CaseResult, Governing, WallResult, check_wall
 from .schedule import schedule_rows
 from .sizing import SizingResult, size_footing
 from .soil_pressure import PressureDiagram, pressure_diagram
+from .stability import table_checks
 from .units import Kind, format_length, format_quantity, to_display, unit_label
 
 PROGRAM = "Kernline"
@@ -462,8 +465,13 @@ def wall_title(wall: Wall) -> str:
     return f"Wall {wall.id}" + (f": {brief(label)}" if label.strip() else "")
 
 
-_CHECK_WORD = {Check.OVERTURNING: "overturning", Check.SLIDING: "sliding", Check.BEARING: "bearing"}
-_CHECK_TITLE = {Check.OVERTURNING: "Overturning", Check.SLIDING: "Sliding", Check.BEARING: "Soil bearing"}
+_CHECK_WORD = {Check.OVERTURNING: "overturning", Check.SLIDING: "sliding", Check.BEARING: "bearing", Check.EMBEDMENT: "embedment"}
+_CHECK_TITLE = {
+    Check.OVERTURNING: "Overturning",
+    Check.SLIDING: "Sliding",
+    Check.BEARING: "Soil bearing",
+    Check.EMBEDMENT: "Embedment",
+}
 _CHECK_RATIO = {
     Check.OVERTURNING: "M_{R} / M_{OT}",
     Check.SLIDING: "R / V",
@@ -663,8 +671,8 @@ def _cover(project: Project, reports: Sequence[WallReport], title: TitleBlock, c
 
 _METHOD_TEXT = {
     Method.ASCE7_16_ASD: (
-        "ASCE 7-16 allowable stress design: the basic combinations of section 2.4.1 with the seismic load effect of "
-        "section 12.4.2.3 (ASD forms of section 2.4.5). The vertical seismic effect Ev = 0.2 S_{DS} D (12.4.2.2) is "
+        "ASCE 7-16 allowable stress design: the basic combinations of section 2.4.1 with the seismic load effect in "
+        "the ASD forms of section 2.4.5. The vertical seismic effect Ev = 0.2 S_{DS} D (12.4.2.2) is "
         "included in the dead-load factor of the seismic combinations. Wind W and seismic E are entered at strength "
         "level; the combinations apply 0.6W and 0.7E. E is the horizontal seismic load effect as given by the engineer, "
         "E_{h} = ρ Q_{E} with the redundancy factor ρ included; the overstrength factor Ω_{0} is not applied. "
@@ -683,9 +691,59 @@ def _combination_rows(combos: Sequence[LoadCombination]) -> tuple[tuple[Cell, ..
     rows = []
     for i, c in enumerate(combos, start=1):
         factors = ", ".join(f"{case.value} × {factor_text(f)}" for case, f in c.factors if f != 0.0) or "—"
-        checks = ", ".join(_CHECK_WORD[ch] for ch in ALL_CHECKS if ch in c.checks)
+        checks = ", ".join(_CHECK_WORD.get(ch, ch.id) for ch in table_checks() if ch in c.checks)
         rows.append((str(i), plain(_clean(c.name)), factors, checks))
     return tuple(rows)
+
+
+def _option_rows(project: Project, fmt: _Fmt) -> list[tuple[Any, Any]]:
+    """The options of the code basis in force, each with the clause that allows it."""
+    crit = project.criteria
+    rows: list[tuple[Any, Any]] = []
+    options = crit.method.options
+    if "ev_at_soil" in options:
+        rows.append(
+            (
+                "Vertical seismic effect at the soil",
+                "kept in every seismic combination"
+                if crit.ev_at_soil
+                else formula(
+                    "Ev = 0 in the counteracting combination, which reads 0.6D + 0.7E (ASCE 7-16 12.4.2.2, exception 2)"
+                ),
+            )
+        )
+    if "seismic_overturning_reduction" in options:
+        r = crit.seismic_overturning_reduction
+        rows.append(
+            (
+                "Reduction of seismic overturning",
+                "none"
+                if not r
+                else plain(
+                    f"the overturning moment of the E lateral loads × (1 − {r:g}) in the overturning and bearing checks "
+                    "(ASCE 7-16 12.13.4); sliding takes the full shear, and E point loads are not reduced"
+                ),
+            )
+        )
+    if "wind_omega" in options:
+        rows.append((formula("ω on 0.6W (IBC 2021 1605.2)"), f"{crit.wind_omega:g}"))
+    if "seismic_snow_factor" in options and crit.seismic_snow_factor is not None:
+        rows.append(
+            (
+                "Snow factor in the seismic combination",
+                plain(f"{crit.seismic_snow_factor:g}, as entered by the engineer from ASCE 7-22 2.4.5"),
+            )
+        )
+    frost = project.site.frost_depth
+    rows.append(
+        (
+            "Frost depth",
+            plain(f"{fmt.length(frost)} (IBC 2021 1809.5)")
+            if frost is not None
+            else "not given: the 12 in of IBC 2021 1809.4 governs",
+        )
+    )
+    return rows
 
 
 def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, soil_report: str) -> Section:
@@ -695,7 +753,7 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
     if crit.custom_combinations:
         method = "The project's own load combinations (they replace the preset of the design method: " + crit.method.value + ")."
     else:
-        method = _METHOD_TEXT[crit.method]
+        method = _METHOD_TEXT.get(crit.method, crit.method.wording)
     req = crit.required
     increase = (
         f"× {factor_text(crit.bearing_increase)} in combinations with W or E (a value the geotechnical report, or IBC 2021 "
@@ -729,8 +787,14 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
                 (formula("Overturning, M_{R} / M_{OT} ≥"), f"{req.overturning:.2f}"),
                 ("Sliding, R / V ≥", f"{req.sliding:.2f}"),
                 (formula("Bearing, q_{a} / q ≥"), f"{req.bearing:.2f}"),
+                (
+                    formula("Embedment, (h_{s} + t_{f}) / d_{req} ≥"),
+                    formula(f"1.00, d_{{req}} = max({fmt.length(MIN_DEPTH)}, frost depth) (IBC 2021 1809.4, 1809.5)"),
+                ),
+                ("Basis of the required ratios", plain(crit.method.required_basis)),
                 (formula("S_{DS}"), f"{crit.sds:g}"),
                 ("Allowable bearing increase", increase),
+                *_option_rows(project, fmt),
             ),
             columns=1,
         ),
@@ -739,10 +803,20 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
             (
                 (formula("Allowable bearing pressure q_{a}"), fmt.pressure(soil.allowable_bearing)),
                 ("Basis of the allowable", formula(basis)),
-                ("Friction coefficient μ (on the vertical load N; see below)", f"{soil.friction:g}"),
-                ("Cohesion c (sliding; capped at 0.5 N; see below)", fmt.pressure(soil.cohesion)),
                 (
-                    formula("Passive lateral bearing pressure per foot of depth p_{p} (IBC Table 1806.2)")
+                    "Friction coefficient μ (on the dead load f_D (D + W_f), at most N; see below)"
+                    if soil.sliding_basis is SlidingBasis.DEAD
+                    else "Friction coefficient μ (on the vertical load N; see below)",
+                    f"{soil.friction:g}",
+                ),
+                (
+                    "Cohesion c (sliding; capped at one-half of the dead load; see below)"
+                    if soil.sliding_basis is SlidingBasis.DEAD
+                    else "Cohesion c (sliding; capped at 0.5 N; see below)",
+                    fmt.pressure(soil.cohesion),
+                ),
+                (
+                    formula("Passive lateral bearing pressure per foot of depth p_{p}")
                     if project.units == "US"
                     else formula("Passive lateral bearing pressure per metre of depth p_{p}"),
                     fmt.gradient(soil.passive),
@@ -751,7 +825,14 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
                 (formula("Soil unit weight γ_{s}"), fmt.unit_weight(soil.unit_weight)),
                 (
                     "Source of the soil values",
-                    plain(soil_report) if soil_report else "not stated in the project file: ________________________________",
+                    plain(
+                        f"IBC 2021 Table 1806.2, presumptive class {soil.presumptive_class}"
+                        + (f"; {soil_report}" if soil_report else "")
+                    )
+                    if soil.presumptive_class
+                    else plain(soil_report)
+                    if soil_report
+                    else "not stated in the project file: ________________________________",
                 ),
             ),
             columns=1,
@@ -775,13 +856,25 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
                     "at their height above the top of the footing plus the footing thickness t_{f}."
                 ),
                 formula(
+                    "Sliding: resistance R = friction μ N_{D} + cohesion min(c B a, 0.5 N_{D}) + passive p_{p} on the "
+                    "footing's end face; ratio R / V (resisting over driving, Bowles). N_{D} is the combination's dead "
+                    "load f_{D} (D + W_{f}), never more than the whole vertical load N on the soil (IBC 2021 Table 1806.2 "
+                    "note a and 1806.3.2)."
+                )
+                if soil.sliding_basis is SlidingBasis.DEAD
+                else formula(
                     "Sliding: resistance R = friction μ N + cohesion min(c B a, 0.5 N) + passive p_{p} on the footing's "
                     "end face; ratio R / V (resisting over driving, Bowles). N is the combination's total vertical load on "
                     "the soil, with the factored self weight: it includes any live, snow or vertical seismic load the "
                     "combination carries. IBC 2021 Table 1806.2 note a applies friction to the dead load and 1806.3.2 "
                     "caps cohesion at one-half of the dead load; where a governing sliding combination carries live or "
                     "snow load, this method departs from that wording and the engineer must confirm it (or check "
-                    "sliding on the dead load alone)."
+                    'sliding on the dead load alone, with the soil\'s sliding basis "dead").'
+                ),
+                formula(
+                    "Embedment: the bottom of the footing lies h_{s} + t_{f} below grade (the top of the soil over the "
+                    "footing); it must be at least 12 in below undisturbed ground (IBC 2021 1809.4) and below the frost "
+                    "depth (IBC 2021 1809.5). Ratio (h_{s} + t_{f}) / d_{req}."
                 ),
                 formula(
                     "Soil bearing: rigid footing, linear soil pressure, no tension. Inside the kern (|e| ≤ L_{f}/6) "
@@ -810,10 +903,14 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
 _REFERENCES = (
     "ASCE/SEI 7-16, Minimum Design Loads and Associated Criteria for Buildings and Other Structures: "
     "section 2.4.1 (basic combinations for allowable stress design), 2.4.5 (ASD combinations with seismic load "
-    "effects), 12.4.2.2 (vertical seismic load effect Ev = 0.2 S_{DS} D), 12.4.2.3 (seismic load combinations).",
-    "International Building Code 2021: section 1605 (load combinations), section 1806 (presumptive load-bearing "
-    "values: Table 1806.2; 1806.3 lateral sliding resistance, 1806.3.1 combined friction and passive resistance, "
-    "1806.3.2 cohesion-type resistance at most one-half of the dead load).",
+    "effects), 12.4.2.2 (vertical seismic load effect Ev = 0.2 S_{DS} D, and Ev = 0 at the soil-structure "
+    "interface in Eq. 12.4-2), 12.13.4 (reduction of foundation overturning).",
+    "ASCE/SEI 7-22, the same title: section 2.4.1 (ASD combinations with 0.7S) and 2.4.5, where the project uses it.",
+    "International Building Code 2021: section 1605 (load combinations; 1605.1.1 stability, 1605.2 alternative "
+    "allowable stress design combinations), section 1806 (1806.1 one-third increase with the alternative "
+    "combinations; presumptive load-bearing values of Table 1806.2; 1806.3 lateral sliding resistance, 1806.3.1 "
+    "combined friction and passive resistance, 1806.3.2 cohesion-type resistance at most one-half of the dead "
+    "load), section 1809 (1809.4 depth and width of footings, 1809.5 frost protection).",
     "Das, B. M., Principles of Foundation Engineering: eccentrically loaded foundations (e = M / N; q_{max} = "
     "4N / (3B (L − 2e)) beyond the kern); stability of retaining structures (overturning about the toe).",
     "Bowles, J. E., Foundation Analysis and Design, 5th ed.: section 4-8 (footings with eccentric load, the kern); "
@@ -890,15 +987,17 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
     for k, (r, row) in enumerate(zip(reports, rows_in, strict=True)):
         # schedule columns: wall, label, wall length, B, D, L, then (ratio, required, case) per check, result
         cells: list[Cell] = [plain(row[0]), plain(brief(_clean(row[1]))), f"{row[3]} × {row[4]} × {row[5]}"]
-        for j, check in enumerate(ALL_CHECKS):
+        for j, check in enumerate(table_checks()):
             ratio, required = row[6 + 3 * j : 8 + 3 * j]
             g = r.result.governing[check]
             if ratio == "no demand":
                 cells.append("no demand")
+            elif g.case_index is None:
+                cells.append(f"{ratio_text(g.ratio, g.required, g.passes)} / {required}")
             else:
                 shown = ratio_text(g.ratio, g.required, g.passes)
                 cells.append(f"{shown} / {required}\n{case_name(g.combination, g.direction)}")
-        failing = [_CHECK_WORD[c] for c in ALL_CHECKS if not r.result.governing[c].passes]
+        failing = [_CHECK_WORD.get(c, c.id) for c in table_checks() if not r.result.governing[c].passes]
         cells.append("passes" if r.result.passes else "FAILS: " + ", ".join(failing))
         if not r.result.passes:
             fail_rows.append(k)
@@ -913,10 +1012,16 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
             )
         ),
         Table(
-            ("Wall", "Label", formula("Footing B × t_{f} × L_{f}"), "Overturning", "Sliding", "Bearing", "Result"),
+            (
+                "Wall",
+                "Label",
+                formula("Footing B × t_{f} × L_{f}"),
+                *(_CHECK_TITLE.get(c, c.title) for c in table_checks()),
+                "Result",
+            ),
             tuple(rows),
-            (0.07, 0.17, 0.18, 0.16, 0.16, 0.16, 0.10),
-            align="LLLLLLL",
+            (0.06, 0.19, 0.15, *((0.50 / len(table_checks()),) * len(table_checks())), 0.10),
+            align="L" * (4 + len(table_checks())),
             font_size=7.0,
             fail_rows=tuple(fail_rows),
         ),
@@ -941,7 +1046,7 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
         blocks += [
             Heading("Smallest passing footing found by the program", 2),
             Table(
-                ("Wall", "Smallest passing B × D", "Candidates checked", "Current footing"),
+                ("Wall", formula("Smallest passing B × t_{f}"), "Candidates checked", "Current footing"),
                 tuple(srows),
                 (0.12, 0.30, 0.20, 0.38),
             ),
@@ -986,14 +1091,16 @@ def _wall_section(project: Project, report: WallReport, fmt: _Fmt) -> Section:
 
 def _wall_verdict(result: WallResult) -> Verdict:
     if result.passes:
-        return Verdict(True, f"Wall {result.wall_id} PASSES overturning, sliding and bearing on its current footing.")
+        names = ", ".join(_CHECK_WORD.get(c, c.id) for c in result.governing)
+        return Verdict(True, f"Wall {result.wall_id} PASSES every check ({names}) on its current footing.")
     parts = []
-    for check in ALL_CHECKS:
+    for check in result.governing:
         g = result.governing[check]
         if not g.passes:
+            where = f", {case_name(g.combination, g.direction)}" if g.case_index is not None else ""
             parts.append(
-                f"{_CHECK_WORD[check]} (ratio {ratio_text(g.ratio, g.required, g.passes)} < {g.required:.2f} required, "
-                f"{case_name(g.combination, g.direction)})"
+                f"{_CHECK_WORD.get(check, check.id)} (ratio {ratio_text(g.ratio, g.required, g.passes)} < {g.required:.2f} "
+                f"required{where})"
             )
     return Verdict(False, f"Wall {result.wall_id} FAILS " + "; ".join(parts) + " on its current footing.")
 
@@ -1505,16 +1612,16 @@ def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> lis
 def _results_table(result: WallResult) -> list[Block]:
     rows = []
     fail_rows = []
-    for k, check in enumerate(ALL_CHECKS):
+    for k, check in enumerate(result.governing):
         g = result.governing[check]
         if math.isinf(g.ratio):
-            rows.append((_CHECK_TITLE[check], "—", "no demand", f"{g.required:.2f}", "passes (no demand)"))
+            rows.append((_CHECK_TITLE.get(check, check.title), "—", "no demand", f"{g.required:.2f}", "passes (no demand)"))
             continue
         verdict = "passes" if g.passes else "FAILS"
         rows.append(
             (
-                _CHECK_TITLE[check],
-                case_name(g.combination, g.direction),
+                _CHECK_TITLE.get(check, check.title),
+                case_name(g.combination, g.direction) if g.case_index is not None else "(no combination: geometry)",
                 ratio_text(g.ratio, g.required, g.passes),
                 f"{g.required:.2f}",
                 verdict,
@@ -1574,10 +1681,10 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
         (("smallest passing", row, col), ("next narrower", row, col - 1), ("next thinner", row - 1, col))
     ):
         if r < 0 or c < 0:
-            table_rows.append((name, "outside the bounds", "", "", "", "not a candidate"))
+            table_rows.append((name, "outside the bounds", *([""] * len(s.checks)), "not a candidate"))
             continue
         values = []
-        for j in range(len(ALL_CHECKS)):
+        for j in range(len(s.checks)):
             v = float(s.check_normalized[j, r, c])
             values.append("no demand" if math.isinf(v) else f"{v:.3f}")
         if not bool(s.allowed[r, c]):
@@ -1585,16 +1692,16 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
         elif bool(s.passes[r, c]):
             verdict = "passes"
         else:
-            verdict = "FAILS " + s.governing_check(r, c).value
+            verdict = "FAILS " + s.governing_check(r, c).id
             fail_rows.append(k)
         table_rows.append((name, f"{fmt.length(float(s.widths[c]))} × {fmt.length(float(s.thicknesses[r]))}", *values, verdict))
     blocks += [
         Para(formula(f"Smallest passing size: B × t_{{f}} = {fmt.length(s.width)} × {fmt.length(s.thickness)}.", bold=True)),
         Table(
-            ("Candidate", formula("B × t_{f}"), "Overturning", "Sliding", "Bearing", "Result"),
+            ("Candidate", formula("B × t_{f}"), *(c.title for c in s.checks), "Result"),
             tuple(table_rows),
-            (0.18, 0.22, 0.13, 0.13, 0.13, 0.21),
-            align="LLRRRL",
+            (0.16, 0.2, *((0.44 / len(s.checks),) * len(s.checks)), 0.2),
+            align="LL" + "R" * len(s.checks) + "L",
             fail_rows=tuple(fail_rows),
         ),
         Para(

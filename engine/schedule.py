@@ -24,8 +24,9 @@ import re
 from collections.abc import Sequence
 
 from .file_safety import atomic_write_text
-from .model import ALL_CHECKS, Project
+from .model import Project
 from .results import WallResult, check_project
+from .stability import table_checks
 from .units import format_length
 
 CSV_ENCODING = "utf-8-sig"
@@ -49,8 +50,8 @@ def guard_cell(cell: str) -> str:
 def schedule_headers(units: str) -> list[str]:
     """Column titles of the schedule."""
     heads = ["Wall", "Label", "Wall length", "Footing width", "Footing thickness", "Footing length"]
-    for check in ALL_CHECKS:
-        name = check.value.capitalize()
+    for check in table_checks():
+        name = check.title
         heads += [f"{name} ratio", f"{name} required", f"{name} governing case"]
     return heads + ["Result"]
 
@@ -69,10 +70,15 @@ def schedule_rows(project: Project, results: Sequence[WallResult]) -> list[list[
             format_length(r.thickness, project.units),
             format_length(r.length, project.units),
         ]
-        for check in ALL_CHECKS:
+        for check in table_checks():
             g = r.governing[check]
             if math.isinf(g.ratio):
                 row += ["no demand", f"{g.required:.2f}", ""]
+            elif g.case_index is None:  # a geometric check: no combination
+                row += [f"{g.ratio:.2f}", f"{g.required:.2f}", ""]
+            elif check.id == "bearing" and g.ratio == 0.0:
+                direction = "" if g.direction == "none" else f" ({g.direction})"
+                row += ["no equilibrium", f"{g.required:.2f}", g.combination + direction]
             else:
                 direction = "" if g.direction == "none" else f" ({g.direction})"
                 row += [f"{g.ratio:.2f}", f"{g.required:.2f}", g.combination + direction]

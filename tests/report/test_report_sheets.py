@@ -93,19 +93,21 @@ def test_design_basis_lists_the_combinations_and_soil_source(demo: RenderedPacka
     basis = demo.text_of("Design basis")
     for combo in combinations_of(demo_document.project.criteria):
         assert combo.name in basis
-    assert "ASCE 7-16" in basis and "2.4.1" in basis and "12.4.2.3" in basis
+    assert "ASCE 7-16" in basis and "2.4.1" in basis and "2.4.5" in basis and "12.4.2.2" in basis
     assert "SDS" in basis  # its value shows in the dead-load factors of the seismic combinations above
     assert demo_document.raw["soil"]["report"] in basis
     assert "150 pcf" in basis  # concrete unit weight of the demo footings
 
 
 def test_references_cite_the_code_sections_and_textbooks(demo: RenderedPackage) -> None:
-    """ASCE 7-16 2.4.1 and 12.4.2.3, IBC 2021 1605 and 1806, and the textbook basis are cited."""
+    """ASCE 7-16 2.4.1, 2.4.5 and 12.4.2.2, IBC 2021 1605, 1806 and 1809, and the textbook basis are cited."""
     refs = demo.text_of("References and notes")
     for expected in (
         "ASCE/SEI 7-16",
         "2.4.1",
-        "12.4.2.3",
+        "2.4.5",
+        "12.4.2.2",
+        "1809.4",
         "International Building Code 2021",
         "1605",
         "1806",
