@@ -546,19 +546,24 @@ def build_package(
     Args:
         project: the parsed project.
         wall_ids: walls to include, in order (None: all).
-        soil_report: the geotechnical report the soil values come from (the project file's
-            ``soil.report`` text); left as a blank to fill when None.
-        revision: the revision printed in the title block ("0" when None).
-        issued: the date printed in the title block (today when None).
-        checked_by: the checker's name; blank to fill by hand when empty.
+        soil_report: the geotechnical report the soil values come from; the project's ``soil.report``
+            when None (a blank to fill when that is empty too).
+        revision: the revision printed in the title block; the project's ``project.revision`` when
+            None ("0" when that is empty too).
+        issued: the date printed in the title block; the project's ``project.revision_date`` when None,
+            else today.
+        checked_by: the checker's name; the project's ``project.checker`` when empty.
     """
     walls = select_walls(project, wall_ids)
     fmt = _Fmt(project.units)
     reports = tuple(wall_report(project, w) for w in walls)
-    if issued is None:
-        issued = _dt.date.today()
-    date_text = issued.isoformat() if isinstance(issued, _dt.date) else _clean(str(issued))
     info = project.info
+    soil_report = soil_report if soil_report is not None else (project.soil.report or None)
+    revision = revision if revision is not None else (info.revision or None)
+    checked_by = checked_by or info.checker
+    if issued is None:
+        issued = info.revision_date.strip() or _dt.date.today()
+    date_text = issued.isoformat() if isinstance(issued, _dt.date) else _clean(str(issued))
     title = TitleBlock(
         project_name=_clean(info.name) or "(project name not given)",
         project_number=_clean(info.number),

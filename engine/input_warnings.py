@@ -10,6 +10,7 @@ from __future__ import annotations
 from collections.abc import Sequence
 from dataclasses import dataclass
 
+from .checks.embedment import MIN_WIDTH
 from .model import LateralLoad, LoadCase, PointLoad, Project, Wall
 from .results import WallResult
 
@@ -60,6 +61,14 @@ def input_warnings(project: Project, results: Sequence[WallResult] | None = None
                         "loads are the chord or hold-down forces of those shears, the overturning is counted twice",
                     )
                 )
+    for i, wall in enumerate(project.walls):
+        if wall.footing.width < MIN_WIDTH - 1e-9:
+            out.append(
+                InputWarning(
+                    field=f"walls[{i}].footing.width",
+                    message=f"wall {wall.id}: the footing is narrower than the 12 in minimum width of IBC 2021 1809.4",
+                )
+            )
     if results is not None:
         for i, (wall, result) in enumerate(zip(project.walls, results, strict=False)):
             out.extend(_short_contact(i, wall, result, project.units))

@@ -188,9 +188,15 @@ def test_si_project_prints_si_units_on_a4(demo_document) -> None:
 
 def test_soil_report_is_named_or_left_blank(demo_document) -> None:
     """The geotechnical report named in the file (or given) is printed; without one, a blank to fill."""
+    from dataclasses import replace
+
     named = render(demo_document.project, wall_ids=["N1"], soil_report="Soils report 12-345, Acme Geotech")
     assert "Soils report 12-345, Acme Geotech" in named.text_of("Design basis")
-    blank = render(demo_document.project, wall_ids=["N1"])
+    from_file = render(demo_document.project, wall_ids=["N1"])  # the model carries soil.report
+    assert demo_document.raw["soil"]["report"] in from_file.text_of("Design basis")
+    project = demo_document.project
+    unnamed = replace(project, soil=replace(project.soil, report=""))
+    blank = render(unnamed, wall_ids=["N1"])
     assert "not stated in the project file: ____" in blank.text_of("Design basis")
 
 
