@@ -11,12 +11,17 @@ it costs a noticeable part of a command-line run.
 
 from __future__ import annotations
 
+import hashlib
+import json
 import math
+import os
 import re
+import tempfile
 import unicodedata
 from dataclasses import dataclass
 from enum import Enum
 from functools import lru_cache
+from pathlib import Path
 from typing import TYPE_CHECKING
 
 from .errors import InputError
@@ -264,16 +269,93 @@ def _show_text(text: str) -> str:
     return f'"{shown}"' if len(shown) <= 40 else f'"{shown[:37]}..."'
 
 
+class _PintAnswers:
+    """pint's answers to :func:`unit_factor`, remembered on disk between runs.
+
+    Importing pint and building the registry costs about 0.15 s, most of a ``kernline check``. The
+    answers pint gave (a unit's SI factor, or None for a unit it does not know in that dimension) are
+    kept in the user's cache folder, in a file whose name hashes pint's version and Kernline's unit
+    definitions, so that an upgrade of either starts afresh. Nothing here converts a unit: every
+    value in the file came from pint. ``KERNLINE_UNIT_CACHE=0`` turns it off.
+    """
+
+    FORMAT = 1
+
+    def __init__(self) -> None:
+        self.path: Path | None = None
+        self.answers: dict[str, float | None] | None = None
+
+    def _open(self) -> dict[str, float | None]:
+        if self.answers is not None:
+            return self.answers
+        self.answers = {}
+        if os.environ.get("KERNLINE_UNIT_CACHE", "1") == "0":
+            return self.answers
+        try:
+            from importlib.metadata import version
+
+            stamp = f"{self.FORMAT}|{version('pint')}|".encode() + resource_path("kernline_units.txt").read_bytes()
+            name = f"unit-factors-{hashlib.sha256(stamp).hexdigest()[:16]}.json"
+            base = (
+                os.environ.get("XDG_CACHE_HOME")
+                or os.environ.get("LOCALAPPDATA")
+                or os.path.join(os.path.expanduser("~"), ".cache")
+            )
+            self.path = Path(base) / "kernline" / name
+            if self.path.is_file():
+                loaded = json.loads(self.path.read_text(encoding="utf-8"))
+                if isinstance(loaded, dict):
+                    self.answers = {
+                        str(k): (float(v) if isinstance(v, (int, float)) and not isinstance(v, bool) else None)
+                        for k, v in loaded.items()
+                    }
+        except Exception:  # an unreadable cache is no cache
+            self.answers = {}
+        return self.answers
+
+    def get(self, key: str) -> tuple[bool, float | None]:
+        answers = self._open()
+        return (key in answers, answers.get(key))
+
+    def put(self, key: str, value: float | None) -> None:
+        answers = self._open()
+        answers[key] = value
+        if self.path is None:
+            return
+        try:  # written whole, then renamed: a reader sees the old file or the new one
+            self.path.parent.mkdir(parents=True, exist_ok=True)
+            fd, tmp = tempfile.mkstemp(prefix=".unit-factors-", suffix=".tmp", dir=self.path.parent)
+            with os.fdopen(fd, "w", encoding="utf-8") as fh:
+                json.dump(answers, fh)
+            os.replace(tmp, self.path)
+        except Exception:  # pragma: no cover - a read-only cache folder: keep the answers in memory
+            pass
+
+
+_pint_answers = _PintAnswers()
+
+
 @lru_cache(maxsize=512)
 def unit_factor(unit: str, dimensionality: str) -> float | None:
     """SI value of one ``unit`` when it has ``dimensionality``; None when it is unknown or of another kind.
 
-    pint (the one registry, with Kernline's psf, plf, pcf ... definitions) does every conversion.
-    ``unit`` is a unit expression of the grammar above (words, "/", "*", "·", small powers), never
-    a number or an arbitrary expression.
+    pint (the one registry, with Kernline's psf, plf, pcf ... definitions) does every conversion;
+    its answers are remembered between runs (:class:`_PintAnswers`). ``unit`` is a unit expression of
+    the grammar above (words, "/", "*", "·", small powers), never a number or an arbitrary expression.
     """
     if not _UNIT.fullmatch(unit):
         return None
+    key = f"{unit}|{dimensionality}"
+    known, value = _pint_answers.get(key)
+    if known:
+        return value
+    value = _ask_pint(unit, dimensionality)
+    _pint_answers.put(key, value)
+    return value
+
+
+def _ask_pint(unit: str, dimensionality: str) -> float | None:
+    """pint's SI factor of ``unit`` in ``dimensionality`` (None when unknown, prefixed wrongly or of another kind)."""
     words = re.findall(r"[A-Za-z_µμ]+", unit)
     expr = unit.replace("·", "*").replace("^", "**").replace("²", "**2").replace("³", "**3")
     for word in words:

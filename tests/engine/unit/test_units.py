@@ -133,3 +133,29 @@ def test_signs_inside_powers_and_absurd_magnitudes_are_refused(text):
     kind = Kind.FORCE if text.endswith(" N") else Kind.LENGTH
     with pytest.raises(InputError):
         parse_quantity(text, kind)
+
+
+def test_remembered_pint_answers_equal_pints_own(tmp_path, monkeypatch):
+    """The factors kept on disk between runs are pint's answers, read back unchanged (pint is the reference)."""
+    monkeypatch.setenv("XDG_CACHE_HOME", str(tmp_path))
+    monkeypatch.delenv("KERNLINE_UNIT_CACHE", raising=False)
+    first = units._PintAnswers()
+    assert first.get("psf|[force] / [length] ** 2") == (False, None)
+    factor = units._ask_pint("psf", "[force] / [length] ** 2")
+    first.put("psf|[force] / [length] ** 2", factor)
+    first.put("ftt|[length]", None)  # a unit pint does not know is remembered as unknown
+    again = units._PintAnswers()  # a later run
+    assert again.get("psf|[force] / [length] ** 2") == (True, factor)
+    assert again.get("ftt|[length]") == (True, None)
+    reg = units.registry()
+    assert factor == reg.Quantity(1.0, "psf").to_base_units().magnitude
+    assert list((tmp_path / "kernline").glob("unit-factors-*.json"))
+
+
+def test_remembered_answers_can_be_turned_off(tmp_path, monkeypatch):
+    """KERNLINE_UNIT_CACHE=0: nothing is read or written."""
+    monkeypatch.setenv("XDG_CACHE_HOME", str(tmp_path))
+    monkeypatch.setenv("KERNLINE_UNIT_CACHE", "0")
+    answers = units._PintAnswers()
+    answers.put("in|[length]", 0.0254)
+    assert not (tmp_path / "kernline").exists()
