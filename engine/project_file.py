@@ -324,7 +324,7 @@ def _criteria(raw: Any, seismic_walls: list[str], seismic_snow_walls: list[str] 
     obj = _object(raw, "")
     _keys(obj, CRITERIA_KEYS)
     method: CodeBasis = _choice(
-        obj, "method", {c.id: c for c in codes()}, "asce7-16-asd", "ASCE 7-16 ASD combinations (Kernline's default)"
+        obj, "method", {c.id: c for c in codes(Family.SERVICE)}, "asce7-16-asd", "ASCE 7-16 ASD combinations (Kernline's default)"
     )
     for key in OPTION_KEYS:
         if key in obj and key not in method.options:
