@@ -120,7 +120,7 @@ _WALL_TEMPLATE = {
         "stem": {"height": "0 mm", "thickness": "200 mm"},
         "loads": [{"type": "line", "case": "D", "value": "4.4 kN/m", "label": "dead"}],
         "sizing": {
-            "width_min": "300 mm",
+            "width_min": "325 mm",
             "width_max": "2400 mm",
             "width_step": "25 mm",
             "thickness_min": "300 mm",
