@@ -357,35 +357,94 @@ def change_load_type(document: ProjectDocument, wall_index: int, row: int, kind:
 # ---- sizes, units, combinations ----------------------------------------------------------------------
 
 
-def adopt_size(document: ProjectDocument, wall_index: int, width: float, thickness: float) -> RawEdit:
-    """Write a footing size (m) into the wall as the text a project file stores ("30 in", "750 mm")."""
+FootingValues = tuple[float, float] | dict[str, float]
+
+
+def _footing_values(size: FootingValues) -> dict[str, float]:
+    """(width, thickness), or footing keys to lengths (m) such as :func:`engine.sizing.sized_footing_values` gives."""
+    return dict(size) if isinstance(size, dict) else {"width": size[0], "thickness": size[1]}
+
+
+def adopt_size(
+    document: ProjectDocument, wall_index: int, width: float, thickness: float, extensions: dict[str, float] | None = None
+) -> RawEdit:
+    """Write a footing size (m) into the wall as the text a project file stores ("30 in", "750 mm").
+
+    ``extensions`` (footing keys "extension_start" / "extension_end" to m) are written too when sizing
+    chose the footing's length.
+    """
     units = document.units
     wid = document.raw["walls"][wall_index].get("id", "")
     base = ("walls", wall_index, "footing")
+    values = {"width": width, "thickness": thickness, **(extensions or {})}
+    text = f"Adopt footing B {length_text(width, units)} x t_f {length_text(thickness, units)}"
+    if extensions:
+        text += " with longer extensions"
     return RawEdit(
         document,
-        f"Adopt footing {length_text(width, units)} x {length_text(thickness, units)} for {wid}",
-        [SetValue((*base, "width"), length_text(width, units)), SetValue((*base, "thickness"), length_text(thickness, units))],
+        f"{text} for {wid}",
+        [SetValue((*base, key), length_text(value, units)) for key, value in values.items()],
         focus_path=(*base, "width"),
         select_after=wall_index,
         select_before=document.current_index,
     )
 
 
-def adopt_sizes(document: ProjectDocument, sizes: dict[str, tuple[float, float]]) -> RawEdit:
+def adopt_sizes(document: ProjectDocument, sizes: dict[str, FootingValues]) -> RawEdit:
     """Adopt the chosen sizes of several walls (by id) as one undo step."""
     units = document.units
     changes: list[Change] = []
+    count = 0
     for i, wall in enumerate(document.raw.get("walls", [])):
         if wall.get("id") in sizes:
-            width, thickness = sizes[wall["id"]]
-            changes.append(SetValue(("walls", i, "footing", "width"), length_text(width, units)))
-            changes.append(SetValue(("walls", i, "footing", "thickness"), length_text(thickness, units)))
-    return RawEdit(document, f"Adopt sized footings ({len(changes) // 2} walls)", changes, focus_path=("walls",))
+            count += 1
+            for key, value in _footing_values(sizes[wall["id"]]).items():
+                changes.append(SetValue(("walls", i, "footing", key), length_text(value, units)))
+    return RawEdit(document, f"Adopt sized footings ({count} walls)", changes, focus_path=("walls",))
 
 
 def set_units(document: ProjectDocument, units: str) -> RawEdit:
     return RawEdit(document, f"Show {units} units", [SetValue(("units",), units)], focus_path=("units",))
+
+
+def change_method(document: ProjectDocument, method_id: str) -> tuple[RawEdit, list[str]]:
+    """Choose another code basis; the options the new one does not take are removed in the same step.
+
+    The reader refuses a criteria option the chosen method does not take (``ev_at_soil`` under the IBC
+    alternative combinations, say), so the window never leaves one behind. Returns the command and the
+    keys it removes.
+    """
+    from engine.project_file import OPTION_KEYS
+    from engine.registry import code_by_id
+
+    code = code_by_id(method_id)
+    criteria = document.raw.get("criteria")
+    present = criteria if isinstance(criteria, dict) else {}
+    removed = [key for key in OPTION_KEYS if key in present and key not in code.options]
+    changes: list[Change] = [SetValue(("criteria", "method"), method_id)]
+    changes += [SetValue(("criteria", key), DELETE) for key in removed]
+    return RawEdit(document, f"Set method to {method_id}", changes, focus_path=("criteria", "method")), removed
+
+
+# The soil values a presumptive class of IBC 2021 Table 1806.2 sets (the reader refuses them beside it).
+PRESUMPTIVE_KEYS = ("allowable_bearing", "friction", "cohesion", "passive")
+
+
+def set_presumptive_class(document: ProjectDocument, number: int | None) -> RawEdit:
+    """Take the soil values from class ``number`` of IBC 2021 Table 1806.2 (None: from the report).
+
+    Choosing a class removes the values it sets, in the same undo step; going back to the report
+    leaves them to be entered (Kernline does not guess site values).
+    """
+    soil = document.raw.get("soil")
+    present = soil if isinstance(soil, dict) else {}
+    changes: list[Change] = [SetValue(("soil", "presumptive_class"), DELETE if number is None else number)]
+    if number is not None:
+        changes += [SetValue(("soil", key), DELETE) for key in PRESUMPTIVE_KEYS if key in present]
+    text = (
+        "Take soil values from the geotechnical report" if number is None else f"Take soil values from presumptive class {number}"
+    )
+    return RawEdit(document, text, changes, focus_path=("soil", "presumptive_class"))
 
 
 def use_custom_combinations(document: ProjectDocument, combinations: list[dict[str, Any]] | None) -> RawEdit:

@@ -24,8 +24,9 @@ from PySide6.QtGui import QUndoStack
 
 from engine.errors import InputError
 from engine.input_warnings import InputWarning, input_warnings
-from engine.model import Assumption, Check, DesignCriteria, Project, SoilProperties, Wall
+from engine.model import Assumption, DesignCriteria, Project, Site, SoilProperties, Wall
 from engine.project_file import FORMAT, VERSION, atomic_write_text, dumps_project, load_project, parse_project, save_project
+from engine.registry import Check, CodeBasis, check_by_id, code_by_id
 from engine.resources import resource_path
 from engine.results import WallResult, check_wall
 from engine.sizing import SizingResult
@@ -120,7 +121,7 @@ _WALL_TEMPLATE = {
         "stem": {"height": "0 mm", "thickness": "200 mm"},
         "loads": [{"type": "line", "case": "D", "value": "4.4 kN/m", "label": "dead"}],
         "sizing": {
-            "width_min": "325 mm",
+            "width_min": "325 mm",  # IBC 2021 1809.4: at least 12 in (304.8 mm); the next 25 mm step
             "width_max": "2400 mm",
             "width_step": "25 mm",
             "thickness_min": "300 mm",
@@ -143,7 +144,9 @@ def new_project_raw(units: str = "US") -> dict[str, Any]:
     The allowable bearing, the friction coefficient or cohesion, and the soil unit weight come from the
     geotechnical report, so a new project leaves them out: the window shows those fields in error and
     checks nothing until the engineer enters them (see :data:`SITE_VALUES`). S_DS is left out too; it is
-    asked for once a wall carries an E load. Passive resistance starts at zero (none counted).
+    asked for once a wall carries an E load. Passive resistance starts at zero (none counted). The
+    bearing increase is left to the method's default (marked as assumed), so that choosing the IBC
+    alternative combinations brings their one-third increase (IBC 2021 1806.1).
     """
     soil = (
         {"bearing_basis": "gross", "passive": "0 pcf", "passive_ignore": "12 in"}
@@ -155,7 +158,7 @@ def new_project_raw(units: str = "US") -> dict[str, Any]:
         "version": VERSION,
         "project": {"name": "Untitled project", "number": "", "engineer": "", "client": "", "address": "", "notes": ""},
         "units": units,
-        "criteria": {"method": "asce7-16-asd", "bearing_increase": 1.0},
+        "criteria": {"method": "asce7-16-asd"},
         "soil": soil,
         "walls": [wall_template("W1", units)],
     }
@@ -172,6 +175,8 @@ SITE_VALUES: dict[RawPath, str] = {
     ("soil", "cohesion"): "enter the friction coefficient or the cohesion (or both) from the geotechnical report",
     ("soil", "unit_weight"): "enter the soil unit weight from the geotechnical report",
     ("criteria", "sds"): "enter S_DS from the site's seismic data (a wall carries E loads)",
+    ("criteria", "seismic_snow_factor"): "enter the factor on S in the seismic combination as the standard prints it "
+    "(a wall carries E and S loads)",
 }
 
 # Stand-ins put in the place of missing site values only so that the walls can be read and drawn
@@ -181,6 +186,7 @@ _STAND_INS: dict[RawPath, Any] = {
     ("soil", "friction"): 0.0,
     ("soil", "unit_weight"): "0 pcf",
     ("criteria", "sds"): 0.0,
+    ("criteria", "seismic_snow_factor"): 0.0,
 }
 
 
@@ -191,15 +197,26 @@ def _blank(obj: Any, key: str) -> bool:
     return value is None or (isinstance(value, str) and not value.strip())
 
 
-def _carries_e(raw: dict[str, Any]) -> bool:
+def _carries(raw: dict[str, Any], *cases: str) -> bool:
+    """Some wall carries loads of every one of ``cases``."""
     walls = raw.get("walls")
     if not isinstance(walls, list):
         return False
     for wall in walls:
         loads = wall.get("loads") if isinstance(wall, dict) else None
-        if isinstance(loads, list) and any(isinstance(ld, dict) and ld.get("case") == "E" for ld in loads):
+        if isinstance(loads, list) and all(
+            any(isinstance(ld, dict) and ld.get("case") == case for ld in loads) for case in cases
+        ):
             return True
     return False
+
+
+def _method(criteria: dict[str, Any]) -> CodeBasis | None:
+    """The code basis the raw criteria name (the default when none is named; None for an unknown id)."""
+    try:
+        return code_by_id(str(criteria.get("method", "asce7-16-asd")))
+    except KeyError:
+        return None  # the reader names that problem itself
 
 
 def site_gaps(raw: Any) -> dict[RawPath, str]:
@@ -211,16 +228,21 @@ def site_gaps(raw: Any) -> dict[RawPath, str]:
     if not isinstance(soil, dict) or not isinstance(criteria, dict):
         return {}  # the reader names that problem itself
     gaps: dict[RawPath, str] = {}
-    for key in ("allowable_bearing",):
-        if _blank(soil, key):
-            gaps[("soil", key)] = SITE_VALUES[("soil", key)]
-    if _blank(soil, "friction") and _blank(soil, "cohesion"):
+    presumptive = "presumptive_class" in soil  # a class of IBC 2021 Table 1806.2 sets the strengths
+    if not presumptive and _blank(soil, "allowable_bearing"):
+        gaps[("soil", "allowable_bearing")] = SITE_VALUES[("soil", "allowable_bearing")]
+    if not presumptive and _blank(soil, "friction") and _blank(soil, "cohesion"):
         gaps[("soil", "friction")] = SITE_VALUES[("soil", "friction")]
         gaps[("soil", "cohesion")] = SITE_VALUES[("soil", "cohesion")]
     if _blank(soil, "unit_weight"):
         gaps[("soil", "unit_weight")] = SITE_VALUES[("soil", "unit_weight")]
-    if _carries_e(raw) and _blank(criteria, "sds"):
-        gaps[("criteria", "sds")] = SITE_VALUES[("criteria", "sds")]
+    method = _method(criteria)
+    preset = "combinations" not in criteria  # an own list of combinations needs neither value
+    if method is not None and preset:
+        if method.uses_sds and _carries(raw, "E") and _blank(criteria, "sds"):
+            gaps[("criteria", "sds")] = SITE_VALUES[("criteria", "sds")]
+        if "seismic_snow_factor" in method.options and _carries(raw, "E", "S") and _blank(criteria, "seismic_snow_factor"):
+            gaps[("criteria", "seismic_snow_factor")] = SITE_VALUES[("criteria", "seismic_snow_factor")]
     return gaps
 
 
@@ -282,13 +304,21 @@ class SizingEntry:
     soil: SoilProperties
     criteria: DesignCriteria
     result: SizingResult
+    site: Site | None = None
 
     def fresh_for(self, project: Project, wall: Wall) -> bool:
-        return self.wall == wall and self.soil == project.soil and self.criteria == project.criteria
+        return (
+            self.wall == wall
+            and self.soil == project.soil
+            and self.criteria == project.criteria
+            and (self.site or Site()) == project.site
+        )
 
 
 CaseChoice = tuple[str, Check] | tuple[str, str, str]
-GOVERNING_BEARING: CaseChoice = ("governing", Check.BEARING)
+# The drawings show the soil pressure, so they start on the governing case of the check that reads it.
+PRESSURE_CHECK_ID = "bearing"
+GOVERNING_BEARING: CaseChoice = ("governing", check_by_id(PRESSURE_CHECK_ID))
 
 
 class ProjectDocument(QObject):
@@ -487,6 +517,19 @@ class ProjectDocument(QObject):
             return f"{where} · {_rest_words(rest, self.field_labels)}" if rest else where
         return _rest_words(field, self.field_labels)
 
+    def missing_text(self) -> str:
+        """The values still to be entered and where: "Allowable bearing (Soil) and S_DS (Design criteria)"."""
+        by_section: dict[str, list[str]] = {}
+        labels = self.missing_labels()
+        for label in labels:
+            section = "Design criteria" if label in self._criteria_labels() else "Soil"
+            by_section.setdefault(section, []).append(label)
+        parts = [f"{', '.join(names)} ({section})" for section, names in by_section.items()]
+        return " and ".join(parts)
+
+    def _criteria_labels(self) -> set[str]:
+        return {self.field_labels.get(path_text(p), path_text(p)) for p in self.site_gaps if p[0] == "criteria"}
+
     def missing_labels(self) -> list[str]:
         """The words beside each missing site value ("Allowable bearing", "Friction coefficient or Cohesion")."""
         labels = [self.field_labels.get(path_text(p), path_text(p)) for p in self.site_gaps]
@@ -506,11 +549,18 @@ class ProjectDocument(QObject):
             return 0
         choice = self.case_choice
         if choice[0] == "governing":
-            return result.governing[choice[1]].case_index  # type: ignore[index]
-        for i, case in enumerate(result.table.cases):
-            if case.combination.name == choice[1] and case.direction.value == choice[2]:
-                return i
-        return result.governing[Check.BEARING].case_index
+            g = result.governing.get(choice[1])  # type: ignore[call-overload]
+            if g is not None and g.case_index is not None:
+                return int(g.case_index)
+        else:
+            for i, case in enumerate(result.table.cases):
+                if case.combination.name == choice[1] and case.direction.value == choice[2]:
+                    return i
+        g = result.governing.get(check_by_id(PRESSURE_CHECK_ID))
+        if g is not None and g.case_index is not None:
+            return int(g.case_index)
+        cases = [g.case_index for g in result.governing.values() if g.case_index is not None]
+        return int(cases[0]) if cases else 0
 
     def sizing_for(self, wall: Wall) -> tuple[SizingEntry | None, bool]:
         """The wall's last sizing result and whether it still matches the inputs."""
@@ -595,7 +645,12 @@ class ProjectDocument(QObject):
             self.results = {}
             return
         old_results = self.results
-        same_basis = previous is not None and previous.soil == project.soil and previous.criteria == project.criteria
+        same_basis = (
+            previous is not None
+            and previous.soil == project.soil
+            and previous.criteria == project.criteria
+            and previous.site == project.site
+        )
         old_walls = {w.id: w for w in previous.walls} if previous is not None else {}
         results: dict[str, WallResult] = {}
         for wall in project.walls:
@@ -659,7 +714,7 @@ _SECTIONS = {
 
 _FRIENDLY = {
     "footing.width": "footing width B",
-    "footing.thickness": "footing thickness D",
+    "footing.thickness": "footing thickness t_f",
     "length": "wall length",
     "thickness": "wall thickness",
     "walls": "walls",

@@ -38,6 +38,7 @@ from PySide6.QtWidgets import (
 from engine import CAUTION, __version__
 from engine.errors import InputError
 from engine.project_file import EXTENSION
+from engine.registry import checks, codes
 from engine.schedule import write_schedule
 from engine.units import format_length
 
@@ -63,7 +64,10 @@ RECENT_LIMIT = 8
 FILE_FILTER = f"Kernline projects (*{EXTENSION});;All files (*)"
 PDF_FILTER = "PDF (*.pdf);;All files (*)"
 EXIT_AFTER_VARIABLE = "KERNLINE_EXIT_AFTER_MS"  # the frozen build's smoke check: quit this many ms after showing
-REFERENCES = "ASCE 7-16 (load combinations, section 2.4.1); IBC 2021 (sections 1605 and 1806); Das and Bowles (soil pressure under eccentric load)"
+REFERENCES = (
+    "ASCE 7-16 and ASCE 7-22 (load combinations, section 2.4); IBC 2021 (sections 1605, 1806 and 1809); "
+    "Das and Bowles (soil pressure under eccentric load)"
+)
 
 
 def exit_after_ms(environ: Mapping[str, str] | None = None) -> int | None:
@@ -239,6 +243,12 @@ class MainWindow(QMainWindow):
             "Ctrl+E",
             "Write the calculation package (design basis, every wall's checks, appendix) as a PDF",
         )
+        self.project_info_action = self._action(
+            "Project &information…",
+            self.show_project_information,
+            "Ctrl+I",
+            "Edit the project's name, number, client, address, engineer, checker, revision and notes (the title block)",
+        )
         self.quit_action = self._action("&Quit", self.close, Std.Quit, "Close Kernline")
         self.undo_action = self.document.undo_stack.createUndoAction(self, "&Undo")
         self.undo_action.setShortcut(QKeySequence(Std.Undo))
@@ -279,6 +289,8 @@ class MainWindow(QMainWindow):
         file_menu.addSeparator()
         for a in (self.save_action, self.save_as_action):
             file_menu.addAction(a)
+        file_menu.addSeparator()
+        file_menu.addAction(self.project_info_action)
         file_menu.addSeparator()
         for a in (self.export_pdf_action, self.export_action):
             file_menu.addAction(a)
@@ -436,9 +448,9 @@ class MainWindow(QMainWindow):
         self.drawings.render()
         result = doc.current_result
         if result is None:
-            self.verdict.render_unchecked(doc.current_wall, doc.missing_labels())
+            self.verdict.render_unchecked(doc.current_wall, doc.missing_text())
         else:
-            self.verdict.render(doc.current_wall, result)
+            self.verdict.render(doc.current_wall, result, doc.units)
         self.warnings_view.refresh()
         self.assumptions_view.refresh()
         count = self.assumptions_view.count
@@ -485,6 +497,16 @@ class MainWindow(QMainWindow):
         if total and sizes[1] < 0.46 * total:
             self._sizes_before_map = sizes
             self.right_splitter.setSizes([int(0.54 * total), total - int(0.54 * total)])
+
+    def show_project_information(self) -> bool:
+        """Open the project information (title block), bring it into view and put the cursor in its first field."""
+        form = self.project_form
+        shown = form.show_field("project.name", self.forms_scroll)
+        fields = [f for f in form.group.fields if f.spec.path[0] == "project"]
+        if shown and fields:
+            self.forms_scroll.ensureWidgetVisible(fields[-1])  # the whole group, from its title down
+            self.forms_scroll.ensureWidgetVisible(form.sections["Project"].toggle)
+        return shown
 
     def show_field(self, field: str) -> bool:
         """Go to an input named by the engine's field path: select its wall, open its section, focus it.
@@ -564,9 +586,7 @@ class MainWindow(QMainWindow):
         doc = self.document
         if doc.checkable:
             return False
-        self.statusBar().showMessage(
-            f"Cannot {what} yet: enter {', '.join(doc.missing_labels())} from the geotechnical report first.", 10000
-        )
+        self.statusBar().showMessage(f"Cannot {what} yet: enter {doc.missing_text()} first.", 10000)
         return True
 
     def size_current(self) -> int:
@@ -678,6 +698,7 @@ class MainWindow(QMainWindow):
             self.delete_wall_action,
             self.us_action,
             self.si_action,
+            self.project_info_action,
         ):
             a.setEnabled(enabled)
         if enabled and self.package_writer.busy:
@@ -801,7 +822,7 @@ class MainWindow(QMainWindow):
             self.statusBar().showMessage(f"Saved {saved}", 5000)
         else:
             self.statusBar().showMessage(
-                f"Saved {saved} — still to enter: {', '.join(self.document.missing_labels())}; nothing is checked until then.",
+                f"Saved {saved} — still to enter: {self.document.missing_text()}; nothing is checked until then.",
                 10000,
             )
         return True
@@ -1048,9 +1069,11 @@ class MainWindow(QMainWindow):
             self,
             "About Kernline",
             f"<h3>Kernline {__version__}</h3>"
-            "<p>Kernline checks concrete strip footings under shear walls for overturning, sliding and soil bearing "
-            "(with soil pressure beyond the kern) under ASCE 7-16 ASD load combinations in both lateral directions, "
-            "and sizes them on a grid of widths and thicknesses.</p>"
+            "<p>Kernline checks concrete strip footings under shear walls for "
+            + _listing([c.title.lower() for c in checks()])
+            + " (with soil pressure beyond the kern) under the load combinations of the chosen code basis ("
+            + "; ".join(c.title for c in codes())
+            + ") in both lateral directions, and sizes them on a grid of widths and thicknesses (and lengths).</p>"
             f"<p><b>Basis.</b> {REFERENCES}.</p>"
             f"<p><b>Caution.</b> {CAUTION}</p>",
         )
@@ -1074,6 +1097,11 @@ class MainWindow(QMainWindow):
         self.package_writer.wait()
         self.hide()
         QApplication.instance().exit(0)
+
+
+def _listing(words: list[str]) -> str:
+    """ "a", "a and b", "a, b and c"."""
+    return words[0] if len(words) == 1 else ", ".join(words[:-1]) + " and " + words[-1]
 
 
 def _forget(window: MainWindow) -> None:

@@ -26,7 +26,7 @@ from engine.combinations import combinations_of
 from engine.errors import EngineError, InputError
 from engine.model import Project, Wall
 from engine.project_file import ProjectDocument as ProjectFile
-from engine.sizing import candidate_grid, size_footing
+from engine.sizing import candidate_grid, candidate_values, size_footing
 
 from .document import SizingEntry
 
@@ -48,12 +48,15 @@ class SizingBatch:
 
 
 def estimated_work(project: Project, walls: Sequence[Wall]) -> int:
-    """Candidates x design cases (both lateral directions counted) over ``walls``."""
+    """Candidates x design cases (both lateral directions counted) over ``walls``; a wall whose length is
+    sized too counts each extension tried."""
     cases = 2 * len(combinations_of(project.criteria))
     total = 0
     for wall in walls:
         widths, thicknesses = candidate_grid(wall)
-        total += widths.size * thicknesses.size * cases
+        z = wall.sizing
+        lengths = candidate_values(0.0, z.extension_max, z.extension_step).size if z.extension_max > 0.0 else 1
+        total += widths.size * thicknesses.size * cases * lengths
     return total
 
 
@@ -68,7 +71,7 @@ def size_walls(seq: int, key: str, project: Project, walls: Sequence[Wall]) -> S
         except EngineError as err:
             errors[wall.id] = str(err)
             continue
-        entries.append(SizingEntry(wall=wall, soil=project.soil, criteria=project.criteria, result=result))
+        entries.append(SizingEntry(wall=wall, soil=project.soil, criteria=project.criteria, result=result, site=project.site))
     return SizingBatch(seq, key, tuple(entries), errors, time.perf_counter() - start)
 
 

@@ -33,9 +33,19 @@ OK_MARK = "✓"
 NG_MARK = "✗"
 NO_DEMAND_MARK = "–"
 
-# Dash patterns of the three check boundaries on the design map (overturning, sliding, bearing).
-CHECK_DASHES = ((1, 0), (6, 3), (1.5, 2.5))
-CHECK_TONES = ("#2f3439", "#7a4b8c", "#b4532a")
+# Line styles of the check boundaries on the design map, given to the registered checks in their order
+# (overturning, sliding, bearing, embedment, ...; a further check reuses them from the start): a dash
+# pattern (dash, gap, ...; (1, 0) is solid), a tone, and the glyph that draws the pattern in the legend.
+CHECK_DASHES = ((1, 0), (6, 3), (1.5, 2.5), (8, 3, 1.5, 3))
+CHECK_TONES = ("#2f3439", "#7a4b8c", "#b4532a", "#6f5f3f")
+CHECK_GLYPHS = ("──", "– –", "···", "–·–")
+
+
+def check_style(index: int) -> tuple[tuple[float, ...], str, str]:
+    """(dash pattern, tone, legend glyph) of the ``index``-th check on the design map."""
+    k = index % len(CHECK_DASHES)
+    return CHECK_DASHES[k], CHECK_TONES[k], CHECK_GLYPHS[k]
+
 
 STYLE_SHEET = f"""
 QMainWindow, QWidget#centre {{ background: {PAPER}; }}
@@ -49,6 +59,9 @@ QLineEdit {{ border: 1px solid {HAIRLINE}; border-radius: 3px; padding: 2px 4px;
 QLineEdit[assumed="true"] {{ border: 1px dashed {MUTED}; background: {PAPER}; }}
 QLineEdit:focus {{ border: 1px solid {ACCENT}; }}
 QLineEdit[invalid="true"] {{ border: 2px solid {WARM}; background: {WARM_LIGHT}; }}
+QLineEdit:read-only, QLineEdit:disabled {{ background: {PANEL}; color: {MUTED}; border: 1px dotted {HAIRLINE}; }}
+QComboBox[assumed="true"] {{ border: 1px dashed {MUTED}; border-radius: 3px; padding: 1px 4px; background: {PAPER}; }}
+QLabel:disabled {{ color: {MUTED}; }}
 QLabel#warningsTitle {{ font-weight: 600; color: {WARM}; }}
 QListWidget#warningsList {{ border: 1px solid {HAIRLINE}; background: {PAPER}; }}
 QToolButton#sectionToggle {{ border: none; font-weight: 600; text-align: left; padding: 3px 0px; }}

@@ -9,19 +9,21 @@ from PySide6.QtCore import QModelIndex, QSortFilterProxyModel, Qt, Signal
 from PySide6.QtGui import QBrush, QColor, QStandardItem, QStandardItemModel
 from PySide6.QtWidgets import QAbstractItemView, QHeaderView, QTableView, QWidget
 
-from engine.model import ALL_CHECKS
-from engine.results import BearingResult, WallResult
+from engine.results import WallResult
 from engine.units import Kind
 
 from ..style import NG_MARK, OK_MARK, WARM
 from .fields import FORCE, LONG, PRESSURE, trim, unit_factor
 
 SORT_ROLE = Qt.ItemDataRole.UserRole + 1
+FIRST_CHECK_COLUMN = 6  # after combination, direction, N, V, e and q max
 CASE_ROLE = Qt.ItemDataRole.UserRole + 2
 
 
 class CasesModel(QStandardItemModel):
-    """Rows: the wall's cases; columns: loads on the soil and the ratio of each check.
+    """Rows: the wall's cases; columns: loads on the soil and the ratio of each check evaluated per case
+    (the registered checks of the results, in their order; a geometric check such as embedment has
+    one value for the wall, shown in the verdict, not a column).
 
     A QStandardItemModel keeps the cell data on the C++ side, so painting the table does not call
     back into Python for every cell and role; an update touches only the cells whose text changed.
@@ -34,6 +36,7 @@ class CasesModel(QStandardItemModel):
         f_len = unit_factor(LONG[0] if us else LONG[1], Kind.LENGTH)
         q_unit = PRESSURE[0] if us else PRESSURE[1]
         f_q = unit_factor(q_unit, Kind.PRESSURE)
+        per_case = [c for c in result.table.checks if c.per_case]
         headers = [
             "Combination",
             "Dir.",
@@ -41,9 +44,7 @@ class CasesModel(QStandardItemModel):
             f"V ({FORCE[0] if us else FORCE[1]})",
             f"e ({LONG[0] if us else LONG[1]})",
             f"q max ({q_unit})",
-            "Overturning",
-            "Sliding",
-            "Bearing",
+            *[c.title for c in per_case],
             "Result",
         ]
         ev = result.evaluation
@@ -69,7 +70,7 @@ class CasesModel(QStandardItemModel):
                 q_max if not math.isnan(q_max) else -1.0,
             ]
             ok = True
-            for check in ALL_CHECKS:
+            for check in per_case:
                 r = case.of(check)
                 if r is None:
                     texts.append("—")
@@ -79,7 +80,7 @@ class CasesModel(QStandardItemModel):
                 mark = OK_MARK if r.passes else NG_MARK
                 if math.isinf(r.ratio):
                     texts.append("no demand")
-                elif isinstance(r, BearingResult) and not r.stable:  # the resultant beyond the footing's end
+                elif not getattr(r, "stable", True):  # the resultant beyond the footing's end
                     texts.append(f"no equilibrium {mark}")
                 else:
                     texts.append(f"{r.ratio:.2f} {mark}")
@@ -95,9 +96,10 @@ class CasesModel(QStandardItemModel):
             self.clear()
             self.setColumnCount(len(headers))
             self.setHorizontalHeaderLabels(headers)
-            for c in range(6, 9):
-                self.horizontalHeaderItem(c).setToolTip(
-                    "Ratio of capacity to demand for this case, with ✓ where it meets the required ratio; — where the check does not apply."
+            for k, check in enumerate(per_case):
+                self.horizontalHeaderItem(FIRST_CHECK_COLUMN + k).setToolTip(
+                    f"{check.title}: {check.ratio_words} for this case, with ✓ where it meets the required ratio; "
+                    "— where the check does not apply."
                 )
             self.setRowCount(len(rows))
         # one dataChanged for the whole update instead of one per cell (the proxy re-sorts once)

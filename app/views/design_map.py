@@ -1,10 +1,13 @@
 """The design map: every candidate footing width (across) and thickness (up) of the sizing grid.
 
 Passing candidates are filled, failing ones left pale, candidates narrower than the wall greyed. Each
-check's boundary is drawn where its ratio / required reaches 1 (from the engine's
-``check_normalized``), with its own dash pattern and name, so the map shows which check limits the
-size. The engine's chosen size is ringed, the current size marked with a cross. Hovering reads out
-the three ratios of a cell; clicking a passing cell adopts it (one undoable command).
+registered check's boundary is drawn where its ratio / required reaches 1 (from the engine's
+``check_normalized``, one row per check of ``SizingResult.checks``), with its own dash pattern and
+name, so the map shows which check limits the size; embedment, which depends on the thickness t_f
+only, is a level line. The engine's chosen size is ringed, the current size marked with a cross.
+Hovering reads out every check's ratio at a cell; clicking a passing cell adopts it (one undoable
+command). When sizing also chose the footing's length, the map is the one at the chosen extension and
+adopting a cell adopts that length too.
 """
 
 from __future__ import annotations
@@ -16,15 +19,16 @@ import pyqtgraph as pg
 from PySide6.QtCore import QRectF, Qt, Signal
 from PySide6.QtWidgets import QFrame, QGridLayout, QHBoxLayout, QLabel, QPushButton, QScrollArea, QVBoxLayout, QWidget
 
-from engine.model import ALL_CHECKS
-from engine.sizing import SizingResult
+from engine.registry import Check
+from engine.sizing import SizingResult, sized_footing_values
+from engine.stability import table_checks
 from engine.units import Kind
 
 from .. import commands
 from ..document import ProjectDocument, SizingEntry
-from ..style import ACCENT, ACCENT_LIGHT, CHECK_DASHES, CHECK_TONES, GRAPHITE, MUTED, PAPER, WARM, configure_pyqtgraph
+from ..style import ACCENT, ACCENT_LIGHT, GRAPHITE, MUTED, PAPER, WARM, check_style, configure_pyqtgraph
 from .elevation import _pen
-from .fields import SHORT, trim, unit_factor
+from .fields import LONG, SHORT, trim, unit_factor
 
 NOT_ALLOWED, FAILS, PASSES = 0, 1, 2
 # Clip for drawing boundaries: "no demand" (inf) becomes a large finite number.
@@ -60,6 +64,25 @@ def boundary_lines(values: np.ndarray, widths: np.ndarray, thicknesses: np.ndarr
     return np.array(xs), np.array(ys)
 
 
+def _length_sized(s: SizingResult) -> bool:
+    """Whether sizing tried more than one length (the wall has extension bounds)."""
+    return s.extensions is not None and s.extensions.size > 1
+
+
+def _extensions(entry: SizingEntry) -> dict[str, float] | None:
+    """The extensions the map's cells stand for, when sizing chose the footing's length (else None).
+
+    The map is the one at the chosen extension (the largest tried when nothing passes), added at both ends.
+    """
+    s = entry.result
+    if not _length_sized(s):
+        return None
+    assert s.extensions is not None
+    e = s.extension if s.extension is not None else float(s.extensions[-1])
+    footing = entry.wall.footing
+    return {"extension_start": footing.extension_start + e, "extension_end": footing.extension_end + e}
+
+
 class DesignMapView(QWidget):
     """Map of the sizing grid of the selected wall."""
 
@@ -73,7 +96,10 @@ class DesignMapView(QWidget):
         self.message = QLabel(self)
         self.message.setWordWrap(True)
         self.size_button = QPushButton("Size this footing")
-        self.size_button.setToolTip("Search the wall's sizing grid for the passing footing with the least B x D (Ctrl+M)")
+        self.size_button.setToolTip(
+            "Search the wall's sizing grid for the passing footing with the least B × t_f (the least volume when "
+            "its length is sized too) (Ctrl+M)"
+        )
         self.size_all_button = QPushButton("Size all walls")
         self.size_all_button.setToolTip("Size every wall of the project (Ctrl+Shift+M)")
         self.adopt_button = QPushButton("Adopt ringed size")
@@ -102,21 +128,9 @@ class DesignMapView(QWidget):
         self.image.setLookupTable(lut)
         self.image.setLevels((0, 2))
         item.addItem(self.image)
-        self.boundaries = []
-        self.boundary_labels = []
-        for k, check in enumerate(ALL_CHECKS):
-            dashes = CHECK_DASHES[k]
-            pen = _pen(CHECK_TONES[k], 2.0, Qt.PenStyle.CustomDashLine if dashes[1] else Qt.PenStyle.SolidLine)
-            if dashes[1]:
-                pen.setDashPattern(list(dashes))
-            curve = pg.PlotCurveItem(pen=pen, connect="finite")
-            curve.setZValue(3)
-            item.addItem(curve)
-            self.boundaries.append(curve)
-            label = pg.TextItem(check.value, color=CHECK_TONES[k], anchor=(0, 1))
-            label.setZValue(4)
-            item.addItem(label)
-            self.boundary_labels.append(label)
+        self.checks: tuple[Check, ...] = ()
+        self.boundaries: list[pg.PlotCurveItem] = []
+        self.boundary_labels: list[pg.TextItem] = []
         self.chosen = pg.ScatterPlotItem(size=18, symbol="o", pen=pg.mkPen(ACCENT, width=2.5), brush=pg.mkBrush(None))
         self.current = pg.ScatterPlotItem(size=14, symbol="x", pen=pg.mkPen(GRAPHITE, width=1), brush=pg.mkBrush(GRAPHITE))
         for it in (self.chosen, self.current):
@@ -124,13 +138,8 @@ class DesignMapView(QWidget):
             item.addItem(it)
         self.readout = QLabel("Hover over a cell to read its ratios; click a passing cell to adopt it.", self)
         self.readout.setObjectName("hint")
-        self.legend = QLabel(
-            "Filled cells pass every check; grey cells are narrower than the wall. "
-            "Lines: where a check reaches its required ratio:\n"
-            "── overturning   – – sliding   ··· bearing\n"
-            "◯ smallest passing size (least B × D)   ✕ current size",
-            self,
-        )
+        self.legend = QLabel(self)
+        self._set_checks(table_checks())  # the legend before any sizing: the checks a sizing will evaluate
         self.legend.setObjectName("hint")
         self.legend.setWordWrap(True)
         self.readout.setWordWrap(True)
@@ -176,6 +185,41 @@ class DesignMapView(QWidget):
         unit = SHORT[1] if self.document.units == "SI" else SHORT[0]
         return unit, unit_factor(unit, Kind.LENGTH)
 
+    def _set_checks(self, checks: tuple[Check, ...]) -> None:
+        """A boundary line, its label and a legend entry for each check of the sizing result."""
+        if checks == self.checks:
+            return
+        item = self.plot.getPlotItem()
+        for old in (*self.boundaries, *self.boundary_labels):
+            item.removeItem(old)
+        self.boundaries, self.boundary_labels = [], []
+        glyphs = []
+        for k, check in enumerate(checks):
+            dashes, tone, glyph = check_style(k)
+            pen = _pen(tone, 2.0, Qt.PenStyle.CustomDashLine if len(dashes) > 1 and dashes[1] else Qt.PenStyle.SolidLine)
+            if len(dashes) > 1 and dashes[1]:
+                pen.setDashPattern(list(dashes))
+            curve = pg.PlotCurveItem(pen=pen, connect="finite")
+            curve.setZValue(3)
+            item.addItem(curve)
+            self.boundaries.append(curve)
+            label = pg.TextItem("", color=tone, anchor=(0, 1))
+            label.setZValue(4)
+            item.addItem(label)
+            self.boundary_labels.append(label)
+            glyphs.append(f"{glyph} {check.title.lower()}")
+        self.checks = checks
+        self.legend.setText(
+            "Filled cells pass every check; grey cells are narrower than the wall. "
+            "Lines: where a check reaches its required ratio:\n"
+            + "   ".join(glyphs)
+            + "\n◯ smallest passing size (least B × t_f)   ✕ current size"
+        )
+
+    def legend_checks(self) -> list[str]:
+        """The checks the legend names, in its order."""
+        return [c.title.lower() for c in self.checks]
+
     def render(self) -> None:  # type: ignore[override]
         doc = self.document
         wall = doc.current_wall
@@ -185,7 +229,7 @@ class DesignMapView(QWidget):
         item = self.plot.getPlotItem()
         if doc.units != self._units:
             item.setLabel("bottom", f"footing width B ({unit})")
-            item.setLabel("left", f"footing thickness D ({unit})")
+            item.setLabel("left", f"footing thickness t_f ({unit})")
             self._units = doc.units
             self._grid_key = None
         if not doc.checkable:  # site values missing: nothing to size against
@@ -201,15 +245,14 @@ class DesignMapView(QWidget):
             self.current.setData([], [])
             self.adopt_button.setEnabled(False)
             if not doc.checkable:
-                self.message.setText(
-                    "Nothing to size against yet: enter " + ", ".join(doc.missing_labels()) + " (Soil, all walls)."
-                )
+                self.message.setText("Nothing to size against yet: enter " + doc.missing_text() + ".")
             else:
                 self.message.setText(
                     "Sizing…" if self.busy else f"Wall {wall.id} has not been sized yet. Press “Size this footing”."
                 )
             return
         s = entry.result
+        self._set_checks(tuple(s.checks))
         widths, thicknesses = s.widths / f, s.thicknesses / f
         state = np.where(s.allowed, np.where(s.passes, PASSES, FAILS), NOT_ALLOWED).astype(np.ubyte)
         self.image.setImage(state, autoLevels=False, levels=(0, 2))
@@ -233,7 +276,7 @@ class DesignMapView(QWidget):
             if finite.any():
                 idx = np.flatnonzero(finite)
                 mid = idx[len(idx) // 2]
-                label.setText(ALL_CHECKS[k].value)
+                label.setText(self.checks[k].title.lower())
                 label.setPos(float(xs[mid]), float(ys[mid]))
             else:
                 label.setText("")
@@ -250,7 +293,11 @@ class DesignMapView(QWidget):
 
     def _message(self, s: SizingResult, unit: str, f: float) -> str:
         if s.feasible:
-            head = f"Smallest passing footing: B {trim(s.width / f, 1)} × D {trim(s.thickness / f, 1)} {unit}"
+            assert s.width is not None and s.thickness is not None
+            head = f"Smallest passing footing: B {trim(s.width / f, 1)} × t_f {trim(s.thickness / f, 1)} {unit}"
+            if _length_sized(s) and s.length is not None:
+                long_unit = LONG[1] if self.document.units == "SI" else LONG[0]
+                head += f", L_f {trim(s.length / unit_factor(long_unit, Kind.LENGTH), 2)} {long_unit}"
             why = s.message.removeprefix("smallest passing size: ")
             return f"{head}. Why not smaller: {why}."
         return "No candidate passes. " + s.message + ("; " + "; ".join(s.suggestions) if s.suggestions else "")
@@ -278,21 +325,22 @@ class DesignMapView(QWidget):
         unit, f = self._unit()
         required = self.document.project.criteria.required
         parts = []
-        for k, check in enumerate(ALL_CHECKS):
+        for k, check in enumerate(s.checks):
             value = float(s.check_normalized[k, row, col])
+            name = check.title.lower()
             if math.isinf(value):
-                parts.append(f"{check.value} no demand")
+                parts.append(f"{name} no demand")
                 continue
             ratio = value * required.of(check)
-            parts.append(f"{check.value} {ratio:.2f} {'✓' if value >= 1.0 - 1e-9 else '✗'}")
+            parts.append(f"{name} {ratio:.2f} {'✓' if value >= 1.0 - 1e-9 else '✗'}")
         if not s.allowed[row, col]:
             verdict = "narrower than the wall it carries"
         elif s.passes[row, col]:
             verdict = "passes — click to adopt"
         else:
-            verdict = f"fails ({s.governing_check(row, col).value} governs)"
+            verdict = f"fails ({s.governing_check(row, col).title.lower()} governs)"
         return (
-            f"B {trim(s.widths[col] / f, 1)} × D {trim(s.thicknesses[row] / f, 1)} {unit}:  "
+            f"B {trim(s.widths[col] / f, 1)} × t_f {trim(s.thicknesses[row] / f, 1)} {unit}:  "
             + ",  ".join(parts)
             + f"  →  {verdict}"
         )
@@ -306,7 +354,9 @@ class DesignMapView(QWidget):
         if not s.passes[row, col]:
             return "that size does not pass every check; choose a filled cell"
         doc = self.document
-        return doc.push(commands.adopt_size(doc, doc.current_index, float(s.widths[col]), float(s.thicknesses[row])))
+        return doc.push(
+            commands.adopt_size(doc, doc.current_index, float(s.widths[col]), float(s.thicknesses[row]), _extensions(entry))
+        )
 
     def adopt_chosen(self) -> str | None:
         entry = self.entry
@@ -315,20 +365,20 @@ class DesignMapView(QWidget):
         doc = self.document
         s = entry.result
         assert s.width is not None and s.thickness is not None
-        return doc.push(commands.adopt_size(doc, doc.current_index, s.width, s.thickness))
+        return doc.push(commands.adopt_size(doc, doc.current_index, s.width, s.thickness, _extensions(entry)))
 
-    def adoptable_sizes(self) -> dict[str, tuple[float, float]]:
-        """Chosen sizes of walls whose sizing is current and differs from their footing."""
+    def adoptable_sizes(self) -> dict[str, dict[str, float]]:
+        """Chosen footing values (width, thickness and, when the length was sized, the extensions) of walls
+        whose sizing is current and differs from their footing."""
         doc = self.document
         sizes = {}
         for wall in doc.project.walls:
             entry, fresh = doc.sizing_for(wall)
             if entry is None or not fresh or not entry.result.feasible:
                 continue
-            s = entry.result
-            assert s.width is not None and s.thickness is not None
-            if abs(s.width - wall.footing.width) > 1e-9 or abs(s.thickness - wall.footing.thickness) > 1e-9:
-                sizes[wall.id] = (s.width, s.thickness)
+            values = sized_footing_values(wall, entry.result)
+            if any(abs(value - getattr(wall.footing, key)) > 1e-9 for key, value in values.items()):
+                sizes[wall.id] = values
         return sizes
 
     def adopt_all(self) -> str | None:

@@ -2,14 +2,15 @@
 
 from __future__ import annotations
 
-from PySide6.QtCore import Qt
+from PySide6.QtCore import QRect, Qt
 from PySide6.QtWidgets import QHBoxLayout, QLabel, QSizePolicy, QSplitter, QVBoxLayout, QWidget
 
 from engine.model import LateralLoad, Wall
-from engine.units import format_length
+from engine.units import Kind, format_length
 
 from ..document import ProjectDocument
 from .elevation import ElevationView
+from .fields import FORCE, trim, unit_factor
 from .pressure import CasePicker, PressurePlot
 
 
@@ -27,16 +28,46 @@ def lateral_note(wall: Wall, direction: str) -> str:
 CAPTION_LINES = 2  # a caption wraps to at most this many lines at the narrowest panel
 
 
-def _caption() -> QLabel:
-    """A hint that wraps to the panel's width; it never sets the window's minimum width or height."""
-    label = QLabel()
-    label.setObjectName("hint")
-    label.setWordWrap(True)
-    label.setSizePolicy(QSizePolicy.Policy.Ignored, QSizePolicy.Policy.Fixed)
-    label.setFixedHeight(label.fontMetrics().lineSpacing() * CAPTION_LINES + 2)
-    label.setAlignment(Qt.AlignmentFlag.AlignLeft | Qt.AlignmentFlag.AlignTop)
-    label.setContentsMargins(6, 0, 6, 0)
-    return label
+class Caption(QLabel):
+    """A hint that wraps to the panel's width; it never sets the window's minimum width.
+
+    Its height is the lines its text takes at the panel's width (one or :data:`CAPTION_LINES`), so a
+    caption that fits on one line leaves the second line's height to the drawing. The height changes
+    only when the number of lines does, not on every edit.
+    """
+
+    def __init__(self) -> None:
+        super().__init__()
+        self.setObjectName("hint")
+        self.setWordWrap(True)
+        self.setSizePolicy(QSizePolicy.Policy.Ignored, QSizePolicy.Policy.Fixed)
+        self.setAlignment(Qt.AlignmentFlag.AlignLeft | Qt.AlignmentFlag.AlignTop)
+        self.setContentsMargins(6, 0, 6, 0)
+        self.lines = 0
+        self._fit()
+
+    def setText(self, text: str) -> None:  # noqa: N802 - Qt's name
+        if text != self.text():
+            super().setText(text)
+            self._fit()
+
+    def resizeEvent(self, event) -> None:  # noqa: N802 - Qt's name
+        super().resizeEvent(event)
+        self._fit()
+
+    def _fit(self) -> None:
+        metrics = self.fontMetrics()
+        margins = self.contentsMargins()
+        width = max(1, self.width() - margins.left() - margins.right())
+        needed = metrics.boundingRect(QRect(0, 0, width, 10_000), int(Qt.TextFlag.TextWordWrap), self.text()).height()
+        lines = max(1, min(CAPTION_LINES, -(-needed // metrics.lineSpacing())))
+        if lines != self.lines:
+            self.lines = lines
+            self.setFixedHeight(metrics.lineSpacing() * lines + 2)
+
+
+def _caption() -> Caption:
+    return Caption()
 
 
 class DrawingsPanel(QWidget):
@@ -107,14 +138,18 @@ class DrawingsPanel(QWidget):
         self.elevation.render(wall, doc.units, direction)
         units = doc.units
         ft = wall.footing
-        grade = f"; grade {format_length(ft.cover, units)} above its top" if ft.cover > 0 else ""
+        grade = f"; soil cover {format_length(ft.cover, units)} to grade" if ft.cover > 0 else ""
+        weight = ""
+        if result is not None:
+            force_unit = FORCE[1] if units == "SI" else FORCE[0]
+            weight = f"; W_f {trim(result.self_weight.footing / unit_factor(force_unit, Kind.FORCE), 2)} {force_unit}"
         self.elevation_caption.setText(
-            f"footing L {format_length(wall.footing_length, units)} × B {format_length(ft.width, units)} × "
-            f"D {format_length(ft.thickness, units)}{grade}; {lateral_note(wall, direction)}"
+            f"footing L_f {format_length(wall.footing_length, units)} × B {format_length(ft.width, units)} × "
+            f"t_f {format_length(ft.thickness, units)}{grade}{weight}; {lateral_note(wall, direction)}"
         )
         if result is None:
-            self.pressure.render_unchecked(wall, doc.units, doc.missing_labels())
-            self.caption.setText("No soil pressure until the soil values are entered.")
+            self.pressure.render_unchecked(wall, doc.units, doc.missing_text())
+            self.caption.setText("No soil pressure until the missing values are entered.")
             return
         self.pressure.render(wall, result, index, doc.units)
         self.caption.setText(PressurePlot.caption(result, index, doc.units))

@@ -29,9 +29,13 @@ from PySide6.QtWidgets import (
 
 from engine.errors import InputError
 from engine.model import Project, Wall
+from engine.registry import Check, Family, checks
 from engine.units import Kind, parse_quantity
 
+from ..document import MISSING
 from ..style import ASSUMED_WORD, assumed_icon
+
+OMIT: Any = MISSING  # what an empty optional field stores: the key is removed from the file
 
 # Typing pauses this long before a valid entry is applied live (ms); Enter or leaving applies at once.
 LIVE_DELAY_MS = 350
@@ -62,6 +66,9 @@ class FieldSpec:
         scope: "wall" or "project".
         text: a free-text field (labels, names).
         step: the arrow-key step of the field (m), from the wall's sizing bounds.
+        optional: the key may be left out of the file: an empty field removes it, and a value of
+            None shows as an empty field (with ``placeholder`` saying what then applies).
+        placeholder: the grey text of an empty optional field.
     """
 
     path: tuple[str, ...]
@@ -73,6 +80,8 @@ class FieldSpec:
     scope: str = "wall"
     text: bool = False
     step: Callable[[Wall], float] | None = None
+    optional: bool = False
+    placeholder: str = ""
 
     def unit(self, system: str) -> str:
         assert self.units is not None
@@ -101,6 +110,8 @@ def show(value_si: float, kind: Kind, unit: str, decimals: int = 3) -> str:
 
 def display_text(spec: FieldSpec, project: Project, wall: Wall) -> str:
     value = spec.value(project, wall)
+    if value is None and spec.optional:
+        return ""
     if spec.text:
         return str(value)
     if spec.kind is None:
@@ -139,6 +150,8 @@ def to_raw(spec: FieldSpec, text: str, system: str) -> Any:
     text = " ".join(text.split())
     if spec.text:
         return text
+    if spec.optional and not text:
+        return OMIT
     if spec.kind is None:
         return parse_number(text)
     return quantity_text(text, spec.kind, spec.unit(system))
@@ -247,6 +260,8 @@ class QuantityField(QWidget):
         self.edit.setToolTip(spec.tip)
         self.edit.setAccessibleName(spec.label)
         self.edit.setObjectName("field_" + "_".join(spec.path))
+        if spec.placeholder:
+            self.edit.setPlaceholderText(spec.placeholder)
         self.error = QLabel(self)
         self.error.setObjectName("fieldError")
         self.error.setWordWrap(True)
@@ -405,6 +420,36 @@ def guard_wheel(root: QWidget) -> int:
     return len(boxes)
 
 
+class Note(QLabel):
+    """A wrapping hint in a form whose height always holds its text at the form's width.
+
+    (A word-wrapped label spanning a form row can be given the height of fewer lines than it needs;
+    this one asks for the lines its text takes whenever its text or width changes.)
+    """
+
+    def __init__(self, parent: QWidget | None = None) -> None:
+        super().__init__(parent)
+        self.setObjectName("hint")
+        self.setWordWrap(True)
+        self.setSizePolicy(QSizePolicy.Policy.Ignored, QSizePolicy.Policy.Fixed)
+
+    def setText(self, text: str) -> None:  # noqa: N802 - Qt's name
+        if text != self.text():
+            super().setText(text)
+            self._fit()
+
+    def resizeEvent(self, event: Any) -> None:  # noqa: N802 - Qt's name
+        super().resizeEvent(event)
+        self._fit()
+
+    def _fit(self) -> None:
+        width = max(60, self.width() - self.contentsMargins().left() - self.contentsMargins().right())
+        rect = self.fontMetrics().boundingRect(0, 0, width, 100_000, int(Qt.TextFlag.TextWordWrap), self.text())
+        height = rect.height() + 4 if self.text() else 0
+        if height != self.height() or self.minimumHeight() != height:
+            self.setFixedHeight(height)
+
+
 class Section(QWidget):
     """A titled group that folds away with its title button."""
 
@@ -433,9 +478,11 @@ class Section(QWidget):
 
 
 # ---- the fields --------------------------------------------------------------------------------------
+# Symbols in labels and tips are chosen so that none reads as a load case of ASCE 7 (D dead, L live,
+# W wind): the footing's width is B, its thickness t_f, its length L_f and its self weight W_f.
 
 _GEOMETRY_RULE = (
-    "Footing length L = extension at start + wall length + extension at end (Kernline project-file format, version 1)."
+    "Footing length L_f = extension at start + wall length + extension at end (Kernline project-file format, version 1)."
 )
 
 
@@ -519,18 +566,20 @@ FOOTING_FIELDS = (
         Kind.LENGTH,
         SHORT,
         lambda w: w.footing.width,
-        "Width of the strip footing across the wall. Up/Down steps by the sizing step. Minimum widths for "
-        "light-frame walls: IBC 2018 Table 1809.7 (not checked here).",
+        "Width B of the strip footing across the wall; at least 12 in (IBC 2021 1809.4). Up/Down steps by the "
+        "sizing step. Minimum widths for light-frame walls: IBC 2021 Table 1809.7 (not checked here).",
         step=lambda w: w.sizing.width_step,
     ),
     _wall_field(
         ("footing", "thickness"),
-        "Footing thickness D",
+        "Footing thickness t_f",
         Kind.LENGTH,
         SHORT,
         lambda w: w.footing.thickness,
-        "Depth of the footing. Adds self weight and raises the lateral arm to height + D (Kernline mechanics). "
-        "Minimum depths: ACI 318-19 13.3.1.2 (not checked here). Up/Down steps by the sizing step.",
+        "Thickness t_f of the footing. It sets the footing's self weight W_f = concrete unit weight × B × t_f × L_f "
+        "and raises the lateral arm to height + t_f (Kernline mechanics); soil cover + t_f is the depth of the "
+        "footing's bottom below grade (IBC 2021 1809.4, 1809.5). Minimum depths: ACI 318-19 13.3.1.2 (not checked "
+        "here). Up/Down steps by the sizing step.",
         step=lambda w: w.sizing.thickness_step,
     ),
     _wall_field(
@@ -555,8 +604,9 @@ FOOTING_FIELDS = (
         Kind.LENGTH,
         SHORT,
         lambda w: w.footing.cover,
-        "Depth of soil over the top of the footing. Its weight over B minus the wall (or stem) thickness is dead "
-        "load; grade is this far above the footing top (Kernline mechanics).",
+        "Depth of soil over the top of the footing; grade is this far above the footing top. Its weight over B minus "
+        "the wall (or stem) thickness is dead load (Kernline mechanics), and soil cover + t_f is the embedment "
+        "checked against IBC 2021 1809.4 and 1809.5.",
     ),
     _wall_field(
         ("footing", "unit_weight"),
@@ -564,9 +614,15 @@ FOOTING_FIELDS = (
         Kind.UNIT_WEIGHT,
         DENSITY,
         lambda w: w.footing.unit_weight,
-        "Unit weight of the footing and stem concrete; 150 pcf (23.6 kN/m³) for normal-weight reinforced "
+        "Unit weight of the footing and stem concrete (sets W_f); 150 pcf (23.6 kN/m³) for normal-weight reinforced "
         "concrete (common practice).",
     ),
+)
+
+_SIZING_RULE = (
+    "Bounds and step of the candidate grid that automatic sizing searches (inclusive). The chosen size is "
+    "the passing candidate with the least B × t_f, or with extension bounds the least volume B × t_f × L_f "
+    "(Kernline sizing rule)."
 )
 
 SIZING_FIELDS = tuple(
@@ -576,17 +632,36 @@ SIZING_FIELDS = tuple(
         Kind.LENGTH,
         SHORT,
         (lambda k: lambda w: getattr(w.sizing, k))(key),
-        "Bounds and step of the candidate grid that automatic sizing searches (inclusive). The chosen size is "
-        "the passing candidate with the least B x D (Kernline sizing rule).",
+        _SIZING_RULE + extra,
     )
-    for key, label in (
-        ("width_min", "Width from"),
-        ("width_max", "Width to"),
-        ("width_step", "Width step"),
-        ("thickness_min", "Thickness from"),
-        ("thickness_max", "Thickness to"),
-        ("thickness_step", "Thickness step"),
+    for key, label, extra in (
+        ("width_min", "Width B from", " Not below 12 in (IBC 2021 1809.4)."),
+        ("width_max", "Width B to", ""),
+        ("width_step", "Width B step", ""),
+        ("thickness_min", "Thickness t_f from", ""),
+        ("thickness_max", "Thickness t_f to", ""),
+        ("thickness_step", "Thickness t_f step", ""),
     )
+)
+
+_EXTENSION_RULE = (
+    "Sizing of the footing's length: equal extensions e are added at both ends, from 0 to this bound by this "
+    "step, on top of the extensions entered above; L_f = extension at start + wall length + extension at end + 2e. "
+    "Both bounds are given together, or neither (then the length is not sized)."
+)
+
+EXTENSION_FIELDS = tuple(
+    _wall_field(
+        ("sizing", key),
+        label,
+        Kind.LENGTH,
+        LONG,
+        (lambda k: lambda w: getattr(w.sizing, k) or None)(key),
+        _EXTENSION_RULE,
+        optional=True,
+        placeholder="length not sized",
+    )
+    for key, label in (("extension_max", "Extra extension e to"), ("extension_step", "Extra extension e step"))
 )
 
 SOIL_FIELDS = (
@@ -596,8 +671,8 @@ SOIL_FIELDS = (
         Kind.PRESSURE,
         PRESSURE,
         lambda p: p.soil.allowable_bearing,
-        "Allowable soil bearing pressure from the geotechnical report (presumptive values: IBC 2018 Table 1806.2). "
-        "Compared with the peak pressure q_max of each combination.",
+        "Allowable soil bearing pressure from the geotechnical report (or a presumptive class of IBC 2021 Table "
+        "1806.2). Compared with the peak pressure q_max of each combination.",
     ),
     _project_field(
         ("soil", "friction"),
@@ -605,8 +680,8 @@ SOIL_FIELDS = (
         None,
         None,
         lambda p: p.soil.friction,
-        "Coefficient of friction between footing and soil; resists sliding as friction x N while N > 0 "
-        "(presumptive values: IBC 2018 Table 1806.2; the geotechnical report governs).",
+        "Coefficient of friction between footing and soil; resists sliding as friction × N while N > 0 "
+        "(presumptive values: IBC 2021 Table 1806.2; the geotechnical report governs).",
     ),
     _project_field(
         ("soil", "cohesion"),
@@ -614,7 +689,7 @@ SOIL_FIELDS = (
         Kind.PRESSURE,
         PRESSURE,
         lambda p: p.soil.cohesion,
-        "Cohesion x contact area resists sliding, limited to half of N (after IBC 2018 1806.3.2).",
+        "Cohesion × contact area resists sliding, limited to half of the load it acts with (IBC 2021 1806.3.2).",
     ),
     _project_field(
         ("soil", "passive"),
@@ -622,7 +697,7 @@ SOIL_FIELDS = (
         Kind.PRESSURE_GRADIENT,
         GRADIENT,
         lambda p: p.soil.passive,
-        "Lateral bearing pressure per depth below grade on the footing's end face (IBC 2018 Table 1806.2, "
+        "Lateral bearing pressure per depth below grade on the footing's end face (IBC 2021 Table 1806.2, "
         "'lateral bearing'; the geotechnical report governs).",
     ),
     _project_field(
@@ -639,46 +714,64 @@ SOIL_FIELDS = (
         Kind.UNIT_WEIGHT,
         DENSITY,
         lambda p: p.soil.unit_weight,
-        "Unit weight of the soil over the footing (dead load) and of the overburden for a net allowable "
+        "Unit weight of the soil cover over the footing (dead load) and of the overburden for a net allowable "
         "(geotechnical report; 110 pcf is a common default).",
+    ),
+    _project_field(
+        ("soil", "report"),
+        "Geotechnical report",
+        None,
+        None,
+        lambda p: p.soil.report,
+        "The report the soil values come from (title, number, date); printed with the design basis.",
+        text=True,
     ),
 )
 
-CRITERIA_FIELDS = (
+SITE_FIELDS = (
     _project_field(
-        ("criteria", "required", "overturning"),
-        "Required overturning ratio",
-        None,
-        None,
-        lambda p: p.criteria.required.overturning,
-        "Least resisting / overturning moment about the toe. 1.0 with ASCE 7-16 ASD combinations that carry "
-        "0.6D; 1.5-2.0 with service loads (common practice; see the geotechnical report and local code).",
+        ("site", "frost_depth"),
+        "Frost depth",
+        Kind.LENGTH,
+        SHORT,
+        lambda p: p.site.frost_depth,
+        "Depth of frost penetration from the building official or the geotechnical report. The footing's bottom "
+        "(soil cover + t_f below grade) must be below it (IBC 2021 1809.5) and at least 12 in down "
+        "(IBC 2021 1809.4). Leave empty where the ground does not freeze: the 12 in minimum governs.",
+        optional=True,
+        placeholder="none given: 12 in minimum",
     ),
-    _project_field(
-        ("criteria", "required", "sliding"),
-        "Required sliding ratio",
+)
+
+
+def _required_field(check: Check) -> FieldSpec:
+    return _project_field(
+        ("criteria", "required", check.id),
+        f"Required {check.title.lower()} ratio",
         None,
         None,
-        lambda p: p.criteria.required.sliding,
-        "Least sliding resistance / shear. 1.0 with ASCE 7-16 ASD combinations; 1.5 with service loads (common practice).",
-    ),
-    _project_field(
-        ("criteria", "required", "bearing"),
-        "Required bearing ratio",
-        None,
-        None,
-        lambda p: p.criteria.required.bearing,
-        "Least allowable / peak soil pressure; 1.0 when the allowable already carries the geotechnical factor "
-        "of safety (common practice).",
-    ),
+        lambda p: p.criteria.required.of(check),
+        f"Least {check.ratio_words} ({check.basis}). 1.0 with ASD combinations, whose load factors carry the "
+        "margin (IBC 2021 1605.1.1); with service loads a factor of safety (common practice: 2.0 on overturning, "
+        "1.5 on sliding, 1.0 on bearing; see the geotechnical report and local code).",
+    )
+
+
+def required_fields() -> tuple[FieldSpec, ...]:
+    """A required-ratio field for each registered check evaluated with the code basis's combinations."""
+    return tuple(_required_field(c) for c in checks(Family.SERVICE))
+
+
+# The code basis's number options: the criteria key each field writes is the last key of its path.
+OPTION_FIELDS = (
     _project_field(
         ("criteria", "sds"),
         "S_DS",
         None,
         None,
         lambda p: p.criteria.sds,
-        "Design spectral acceleration at short periods (ASCE 7-16 11.4.5). Sets the vertical seismic effect "
-        "Ev = 0.2 S_DS D (ASCE 7-16 Eq. 12.4-4a) in the seismic combinations.",
+        "Design spectral acceleration at short periods (ASCE 7-16 and 7-22 11.4.5). Sets the vertical seismic "
+        "effect Ev = 0.2 S_DS D (ASCE 7-16 12.4.2.2) in the seismic combinations.",
     ),
     _project_field(
         ("criteria", "bearing_increase"),
@@ -686,19 +779,35 @@ CRITERIA_FIELDS = (
         None,
         None,
         lambda p: p.criteria.bearing_increase,
-        "Factor on the allowable bearing in combinations with wind or seismic, where the geotechnical report "
-        "permits one (IBC 2018 1806.1 allows 1/3 only with the alternative basic combinations; from memory). "
-        "1.0 for none.",
+        "Factor on the allowable bearing in combinations with wind or seismic, 1.0 for none. IBC 2021 1806.1 "
+        "permits one-third (4/3) with the alternative basic combinations of 1605.2, the default of that method; "
+        "otherwise only where the geotechnical report permits one.",
+    ),
+    _project_field(
+        ("criteria", "seismic_snow_factor"),
+        "Snow factor with E",
+        None,
+        None,
+        lambda p: p.criteria.seismic_snow_factor,
+        "The factor on S in the ASCE 7-22 seismic ASD combination with snow (2.4.5, combination 9), as the "
+        "edition in force prints it. Kernline has not confirmed it, so it does not supply one: needed once a "
+        "wall carries both E and S loads.",
+        optional=True,
+        placeholder="needed with E and S loads",
     ),
 )
 
 PROJECT_FIELDS = tuple(
     _project_field(("project", key), label, None, None, (lambda k: lambda p: getattr(p.info, k))(key), tip, text=True)
     for key, label, tip in (
-        ("name", "Project", "Project name, shown in the title and the calculation package."),
-        ("number", "Number", "Job number."),
-        ("engineer", "Engineer", "Engineer of record or preparer."),
-        ("client", "Client", "Client."),
-        ("address", "Address", "Site address."),
+        ("name", "Project", "Project name, shown in the window's title and on every sheet of the calculation package."),
+        ("number", "Project number", "The office's job number, in the title block."),
+        ("client", "Client", "The client, in the title block."),
+        ("address", "Site address", "Where the building stands, in the title block."),
+        ("engineer", "Engineer", "Engineer of record or preparer, in the title block."),
+        ("checker", "Checked by", "Who checked the calculations, in the title block."),
+        ("revision", "Revision", 'Revision mark of this issue ("0", "A", "for permit"), in the title block.'),
+        ("revision_date", "Revision date", "Date of this revision as it should print (e.g. 2026-03-14), in the title block."),
+        ("notes", "Notes", "General notes printed with the design basis."),
     )
 )

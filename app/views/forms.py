@@ -8,7 +8,7 @@ from __future__ import annotations
 from collections.abc import Sequence
 from typing import Any
 
-from PySide6.QtCore import Qt
+from PySide6.QtCore import QCoreApplication, QEvent, Qt
 from PySide6.QtGui import QBrush, QColor, QIcon
 from PySide6.QtWidgets import (
     QAbstractItemView,
@@ -29,24 +29,31 @@ from PySide6.QtWidgets import (
 
 from engine.combinations import combinations_of
 from engine.errors import InputError
-from engine.model import ALL_CHECKS, LateralLoad, LineLoad, LoadCase, PointLoad
+from engine.model import LateralLoad, LineLoad, LoadCase, PointLoad
+from engine.presumptive import TABLE_1806_2
+from engine.project_file import OPTION_KEYS
+from engine.registry import Check, CodeBasis, Family, checks, code_by_id, codes
 from engine.units import Kind
 
 from .. import commands
-from ..document import ProjectDocument, get_at, path_text
+from ..document import MISSING, ProjectDocument, get_at, path_text
 from ..style import WARM_LIGHT, assumed_icon
 from .fields import (
-    CRITERIA_FIELDS,
+    EXTENSION_FIELDS,
     FOOTING_FIELDS,
     FORCE,
     LINE,
     LONG,
+    OMIT,
+    OPTION_FIELDS,
     PROJECT_FIELDS,
+    SITE_FIELDS,
     SIZING_FIELDS,
     SOIL_FIELDS,
     STEM_FIELDS,
     WALL_FIELDS,
     FieldSpec,
+    Note,
     QuantityField,
     Section,
     assumed_tip,
@@ -54,6 +61,7 @@ from .fields import (
     field_problem,
     parse_number,
     quantity_text,
+    required_fields,
     show,
     to_raw,
     trim,
@@ -185,12 +193,13 @@ class FieldGroup:
         announce = None
         if spec.scope == "project" and not spec.text:  # a design value of every wall: named in the status bar
             before = field.shown_text or "not entered"
-            announce = lambda: f"{spec.label}: {before} → {self.display(field)}"  # noqa: E731 - read after the edit
-        message = doc.push(
-            commands.SetField(doc, path, value, session=field.session, text=f"Set {_words(spec.label)}"),
-            quiet=live,
-            announce=announce,
-        )
+            announce = lambda: f"{spec.label}: {before} → {self.display(field) or 'not entered'}"  # noqa: E731 - read after the edit
+        extra = companions(doc, path, value)
+        if extra:  # keys that go together: one undo step
+            command: Any = commands.set_fields(doc, f"Set {_words(spec.label)}", {path: value, **extra})
+        else:
+            command = commands.SetField(doc, path, value, session=field.session, text=f"Set {_words(spec.label)}")
+        message = doc.push(command, quiet=live, announce=announce)
         if message is not None:
             if not live:
                 # at the field its label names it: the engine's sentence without its path
@@ -216,6 +225,28 @@ class FieldGroup:
             field.edit.setModified(False)
 
 
+# The step written with a first extension bound when none is given yet (a grid of 6 in / 150 mm steps:
+# Kernline's default, common practice for footing lengths).
+EXTENSION_STEP = {"US": "6 in", "SI": "150 mm"}
+
+
+def companions(doc: ProjectDocument, path: tuple[Any, ...], value: Any) -> dict[tuple[Any, ...], Any]:
+    """Other keys an edit at ``path`` changes with it, in the same undo step.
+
+    The extension bounds of a wall's sizing go together (the reader refuses one without the other):
+    the first extension bound typed brings the step along; clearing the bound clears the step too.
+    """
+    if len(path) < 2 or path[-2:] != ("sizing", "extension_max"):
+        return {}
+    step_path = (*path[:-1], "extension_step")
+    has_step = get_at(doc.raw, step_path) is not MISSING
+    if value is OMIT:
+        return {step_path: OMIT} if has_step else {}
+    if not has_step:
+        return {step_path: EXTENSION_STEP["SI" if doc.units == "SI" else "US"]}
+    return {}
+
+
 def _focus(group: FieldGroup, rest: str, section: Section | None, scroll: QScrollArea) -> bool:
     """Open ``section`` and focus the field whose path is ``rest`` (or, for a section's name, its first field)."""
     fields = [f for f in group.fields if ".".join(f.spec.path) == rest]
@@ -223,6 +254,7 @@ def _focus(group: FieldGroup, rest: str, section: Section | None, scroll: QScrol
         fields = [f for f in group.fields if ".".join(f.spec.path).startswith(rest + ".")]
     if section is not None:
         section.toggle.setChecked(True)
+        _settle(scroll)
     if not fields:
         if section is not None:
             scroll.ensureWidgetVisible(section)
@@ -230,6 +262,12 @@ def _focus(group: FieldGroup, rest: str, section: Section | None, scroll: QScrol
     scroll.ensureWidgetVisible(fields[0])
     fields[0].edit.setFocus()
     return True
+
+
+def _settle(scroll: QScrollArea) -> None:
+    """Lay the form out now, so that a section just opened has its place before the view scrolls to it
+    (the layout requests Qt would handle on its next pass, the scroll area's own included)."""
+    QCoreApplication.sendPostedEvents(None, QEvent.Type.LayoutRequest)
 
 
 def _words(label: str) -> str:
@@ -265,7 +303,7 @@ LOAD_TIPS = (
     "Positive downward; a negative W line or point load is uplift. Lateral loads are magnitudes; the window checks "
     "both directions (Kernline mechanics).",
     "Line: where it starts; point: where it acts (both from the wall's start end); lateral: height above the top of "
-    "the footing (the arm about the base is height + D).",
+    "the footing (the arm about the footing's base is height + t_f).",
     "Line loads only: where the load ends (the whole wall when not given).",
     "Your description, printed beside the load.",
 )
@@ -604,8 +642,11 @@ def _load_row(load: Any, units: str) -> tuple[list[str], list[bool]]:
 # ---- combinations table ------------------------------------------------------------------------------
 
 COMBO_CASES = CASES
-COMBO_COLUMNS = ("Name", *COMBO_CASES, "OT", "SL", "BR")
-_CHECK_KEYS = tuple(c.value for c in ALL_CHECKS)
+
+
+def combination_checks() -> tuple[Check, ...]:
+    """The checks a load combination can name: the registered per-case checks of the ASD / service family."""
+    return tuple(c for c in checks(Family.SERVICE) if c.per_case)
 
 
 class CombinationsEditor(QWidget):
@@ -615,19 +656,11 @@ class CombinationsEditor(QWidget):
         super().__init__(parent)
         self.document = document
         self.custom = QCheckBox("Use our own list of combinations")
-        self.custom.setToolTip(
-            "Replace the method's preset (ASCE 7-16 2.4.1 with 2.4.5 for E, or the service-load list) by a list "
-            "edited here. Starts as a copy of the preset."
-        )
-        self.table = QTableWidget(0, len(COMBO_COLUMNS), self)
+        self.custom.setToolTip("Replace the method's preset combinations by a list edited here. Starts as a copy of the preset.")
+        self.checks: tuple[Check, ...] = ()
+        self.table = QTableWidget(0, 0, self)
         self.table.setObjectName("combinationsTable")
-        self.table.setHorizontalHeaderLabels(COMBO_COLUMNS)
-        self.table.horizontalHeaderItem(len(COMBO_COLUMNS) - 3).setToolTip("Checked for overturning")
-        self.table.horizontalHeaderItem(len(COMBO_COLUMNS) - 2).setToolTip("Checked for sliding")
-        self.table.horizontalHeaderItem(len(COMBO_COLUMNS) - 1).setToolTip("Checked for bearing")
-        header = self.table.horizontalHeader()
-        header.setSectionResizeMode(QHeaderView.ResizeMode.ResizeToContents)
-        header.setSectionResizeMode(0, QHeaderView.ResizeMode.Stretch)
+        self._set_columns()
         self.table.verticalHeader().setDefaultSectionSize(20)
         self.table.verticalHeader().hide()
         self.table.setMinimumHeight(180)
@@ -657,13 +690,28 @@ class CombinationsEditor(QWidget):
     def is_custom(self) -> bool:
         return isinstance(get_at(self.document.raw, ("criteria", "combinations"), None), list)
 
+    def _set_columns(self) -> None:
+        """One column per load case, then one per check a combination can name (from the registry)."""
+        self.checks = combination_checks()
+        columns = ("Name", *COMBO_CASES, *(c.symbol for c in self.checks))
+        self.table.setColumnCount(len(columns))
+        self.table.setHorizontalHeaderLabels(columns)
+        first = 1 + len(COMBO_CASES)
+        for k, check in enumerate(self.checks):
+            self.table.horizontalHeaderItem(first + k).setToolTip(f"Checked for {check.title.lower()} ({check.symbol})")
+        header = self.table.horizontalHeader()
+        header.setSectionResizeMode(QHeaderView.ResizeMode.ResizeToContents)
+        header.setSectionResizeMode(0, QHeaderView.ResizeMode.Stretch)
+
     def refresh(self) -> None:
         doc = self.document
         custom = self.is_custom()
-        key = (doc.project.criteria, custom)
+        key = (doc.project.criteria, custom, combination_checks())
         if key == self._key:
             return
         self._key = key
+        if combination_checks() != self.checks:
+            self._set_columns()
         combos = combinations_of(doc.project.criteria)
         self._refreshing = True
         try:
@@ -682,7 +730,7 @@ class CombinationsEditor(QWidget):
                     if custom:
                         flags |= Qt.ItemFlag.ItemIsEditable
                     item.setFlags(flags)
-                for k, check in enumerate(ALL_CHECKS):
+                for k, check in enumerate(self.checks):
                     col = 1 + len(COMBO_CASES) + k
                     item = self.table.item(row, col) or QTableWidgetItem()
                     if self.table.item(row, col) is None:
@@ -704,7 +752,7 @@ class CombinationsEditor(QWidget):
                 {
                     "name": combo.name,
                     "factors": {case.value: factor for case, factor in combo.factors},
-                    "checks": [c.value for c in ALL_CHECKS if c in combo.checks],
+                    "checks": [c.id for c in self.checks if c in combo.checks],
                 }
             )
         return out
@@ -743,14 +791,15 @@ class CombinationsEditor(QWidget):
                 except InputError as err:
                     return err.problem
             return doc.push(commands.SetField(doc, (*base, "factors", case), value, text=f"Set factor on {case}"))
-        key = _CHECK_KEYS[col - 1 - len(COMBO_CASES)]
-        checks = list(get_at(doc.raw, (*base, "checks"), list(_CHECK_KEYS)))
-        if checked and key not in checks:
-            checks.append(key)
-        elif not checked and key in checks:
-            checks.remove(key)
-        checks = [k for k in _CHECK_KEYS if k in checks]
-        return doc.push(commands.SetField(doc, (*base, "checks"), checks, text="Set checks of combination"))
+        keys = [c.id for c in self.checks]
+        key = keys[col - 1 - len(COMBO_CASES)]
+        named = list(get_at(doc.raw, (*base, "checks"), keys))
+        if checked and key not in named:
+            named.append(key)
+        elif not checked and key in named:
+            named.remove(key)
+        named = [k for k in keys if k in named]
+        return doc.push(commands.SetField(doc, (*base, "checks"), named, text="Set checks of combination"))
 
     def _add(self) -> None:
         doc = self.document
@@ -800,7 +849,7 @@ class WallForm(QWidget):
         self.sections["Loads"] = Section("Loads", self.loads, True)
         layout.addWidget(self.sections["Loads"])
         box, form = _form()
-        for spec in SIZING_FIELDS:
+        for spec in SIZING_FIELDS + EXTENSION_FIELDS:
             self.group.add(spec, form)
         self.sections["Sizing range"] = Section("Sizing range", box, False)
         layout.addWidget(self.sections["Sizing range"])
@@ -838,19 +887,97 @@ class WallForm(QWidget):
         return _focus(self.group, rest, section, scroll)
 
     def focus_order(self) -> list[QWidget]:
-        return (
-            [f.edit for f in self.group.fields[: len(WALL_FIELDS) + len(STEM_FIELDS) + len(FOOTING_FIELDS)]]
-            + [self.loads.table]
-            + [f.edit for f in self.group.fields[len(WALL_FIELDS) + len(STEM_FIELDS) + len(FOOTING_FIELDS) :]]
-        )
+        before_loads = len(WALL_FIELDS) + len(STEM_FIELDS) + len(FOOTING_FIELDS)
+        fields = self.group.fields
+        return [f.edit for f in fields[:before_loads]] + [self.loads.table] + [f.edit for f in fields[before_loads:]]
 
 
-METHODS = (("ASCE 7-16 ASD combinations", "asce7-16-asd"), ("Service loads with factors of safety", "service-fs"))
 BASES = (("gross", "gross"), ("net of overburden", "net"))
+SLIDING_BASES = (
+    ("friction on the whole vertical load N", "total"),
+    ("friction on the dead load only", "dead"),
+)
+EV_AT_SOIL = (("kept: (0.6 − 0.14 S_DS)D", True), ("zero: 0.6D (exception 2)", False))
+OVERTURNING_REDUCTIONS = (
+    ("none", 0.0),
+    ("10 % (modal response spectrum, 12.9)", 0.10),
+    ("25 % (equivalent lateral force, 12.8)", 0.25),
+)
+WIND_OMEGAS = (("1.3 (wind of ASCE 7 chapters 26 to 31)", 1.3), ("1.0", 1.0))
+REPORT_VALUES = "the geotechnical report"
+
+
+def method_name(code: CodeBasis) -> str:
+    """A code basis's title without its clauses, ASD abbreviated: "ASCE 7-16, ASD" (the full title is its tooltip)."""
+    return code.title.split(" (")[0].replace("allowable stress design", "ASD")
+
+
+def presumptive_choices() -> list[tuple[str, int | None]]:
+    """ "the geotechnical report", then each class of IBC 2021 Table 1806.2 with its material."""
+    return [(REPORT_VALUES, None)] + [(f"IBC Table 1806.2 class {n}: {c.material}", n) for n, c in sorted(TABLE_1806_2.items())]
+
+
+def presumptive_text(number: int, units: str) -> str:
+    """The values class ``number`` of IBC 2021 Table 1806.2 sets, in the display units (read-only text)."""
+    c = TABLE_1806_2[number]
+    pressure = "kPa" if units == "SI" else "psf"
+    gradient = "kPa/m" if units == "SI" else "psf/ft"
+
+    def value(si: float, kind: Kind, unit: str) -> str:
+        return show(si, kind, unit, 1).replace(" ", "\u00a0")  # a number and its unit stay on one line
+
+    return (
+        f"Set by class {number} of IBC 2021 Table 1806.2: allowable bearing "
+        f"{value(c.allowable_bearing, Kind.PRESSURE, pressure)}, lateral bearing "
+        f"{value(c.lateral_bearing, Kind.PRESSURE_GRADIENT, gradient)} below natural grade, "
+        f"friction {trim(c.friction, 2)} on the dead load (note a), cohesion "
+        f"{value(c.cohesion, Kind.PRESSURE, pressure)} (note b). Choose {REPORT_VALUES} to enter your own."
+    )
+
+
+class Choice:
+    """A choice box bound to one key of the project: its entries (words, value), label and tooltip."""
+
+    def __init__(self, path: tuple[str, ...], label: str, entries: Sequence[tuple[str, Any]], tip: str) -> None:
+        self.path = path
+        self.box = _compact(QComboBox())
+        self.box.setObjectName("choice_" + "_".join(path))
+        self.box.setAccessibleName(label)
+        for text, value in entries:
+            self.box.addItem(text, value)
+        self.box.setToolTip(tip)
+        self.label = QLabel(label)
+        self.label.setToolTip(tip)
+        self.label.setBuddy(self.box)
+        self.tip = tip
+        self.shown_index = 0
+
+    def index_of(self, value: Any) -> int:
+        for i in range(self.box.count()):
+            data = self.box.itemData(i)
+            if data == value or (
+                isinstance(data, float)
+                and isinstance(value, (int, float))
+                and not isinstance(value, bool)
+                and abs(data - value) < 1e-9
+            ):
+                return i
+        return -1
+
+    def show_value(self, value: Any, assumption: Any = None) -> None:
+        index = self.index_of(value)
+        self.box.setCurrentIndex(max(0, index))
+        self.shown_index = self.box.currentIndex()
+        on = assumption is not None
+        if bool(self.box.property("assumed")) != on:
+            self.box.setProperty("assumed", on)
+            self.box.style().unpolish(self.box)
+            self.box.style().polish(self.box)
+        self.box.setToolTip(f"{assumed_tip(assumption)}\n\n{self.tip}" if on else self.tip)
 
 
 class ProjectForm(QWidget):
-    """Project-wide inputs: soil, design criteria and combinations, title block."""
+    """Project-wide inputs: soil, site, design criteria and combinations, project information."""
 
     def __init__(self, document: ProjectDocument, parent: QWidget | None = None) -> None:
         super().__init__(parent)
@@ -860,34 +987,105 @@ class ProjectForm(QWidget):
         layout.setContentsMargins(0, 0, 0, 0)
         layout.setSpacing(0)
         self.sections: dict[str, Section] = {}
+        self.choices: dict[tuple[str, ...], Choice] = {}
+        self.rows: dict[str, tuple[QFormLayout, QWidget]] = {}  # criteria option key -> its row
 
+        # soil
         box, form = _form()
-        for spec in SOIL_FIELDS[:1]:
-            self.group.add(spec, form)
-        self.basis = _compact(QComboBox())
-        for text, value in BASES:
-            self.basis.addItem(text, value)
-        self.basis.setToolTip(
-            "Whether the allowable is a gross pressure or net of the overburden at the footing base "
-            "(then q_max - soil weight x (cover + D) is compared); the geotechnical report says which."
+        self.source = self._choice(
+            form,
+            ("soil", "presumptive_class"),
+            "Soil values from",
+            presumptive_choices(),
+            "Where the bearing, friction, cohesion and lateral bearing values come from: the geotechnical report, "
+            "or a class of presumptive load-bearing values of IBC 2021 Table 1806.2 where the building official "
+            "accepts them (1806.2).",
         )
-        form.addRow("Allowable is", self.basis)
-        for spec in SOIL_FIELDS[1:]:
+        self.presumptive_note = Note()
+        self.presumptive_note.hide()
+        form.addRow(self.presumptive_note)
+        self.group.add(SOIL_FIELDS[0], form)
+        self.basis = self._choice(
+            form,
+            ("soil", "bearing_basis"),
+            "Allowable is",
+            BASES,
+            "Whether the allowable is a gross pressure or net of the overburden at the footing base "
+            "(then q_max - soil unit weight × (soil cover + t_f) is compared); the geotechnical report says which.",
+        ).box
+        for spec in SOIL_FIELDS[1:-1]:
             self.group.add(spec, form)
+        self.sliding = self._choice(
+            form,
+            ("soil", "sliding_basis"),
+            "Sliding resisted by",
+            SLIDING_BASES,
+            "The load that friction and the cohesion cap act on: the combination's whole vertical load N, or "
+            "its dead load only as IBC 2021 Table 1806.2 note a and 1806.3.2 say (the default with a presumptive "
+            "class).",
+        ).box
+        self.group.add(SOIL_FIELDS[-1], form)
         self.sections["Soil"] = Section("Soil (all walls)", box, True)
         layout.addWidget(self.sections["Soil"])
 
+        # site
         box, form = _form()
-        self.method = _compact(QComboBox())
-        for text, value in METHODS:
-            self.method.addItem(text, value)
-        self.method.setToolTip(
-            "ASCE 7-16 ASD: section 2.4.1 combinations with 2.4.5 / 12.4.2.3 for E, required ratios 1.0. "
-            "Service loads: unfactored combinations with factors of safety 2.0 / 1.5 / 1.0 (common practice)."
-        )
-        form.addRow("Method", self.method)
-        for spec in CRITERIA_FIELDS:
+        for spec in SITE_FIELDS:
             self.group.add(spec, form)
+        self.sections["Site"] = Section("Site (all walls)", box, True)
+        layout.addWidget(self.sections["Site"])
+
+        # criteria: the method, the required ratios, then the options of the method
+        box, form = _form()
+        self.method = self._choice(
+            form,
+            ("criteria", "method"),
+            "Method",
+            [(method_name(code), code.id) for code in codes()],
+            "The code basis: its load combinations, required ratios and options. Options the method does not "
+            "take are hidden, and choosing another method removes those the new one does not take (one undo step).",
+        ).box
+        for i, code in enumerate(codes()):
+            self.method.setItemData(i, f"{code.title}\n\n{code.wording}", Qt.ItemDataRole.ToolTipRole)
+        self.required_specs = required_fields()
+        for spec in self.required_specs:
+            self.group.add(spec, form)
+        option_fields = {spec.path[-1]: spec for spec in OPTION_FIELDS}
+        self.group.add(option_fields["sds"], form)
+        self.group.add(option_fields["bearing_increase"], form)
+        self._choice(
+            form,
+            ("criteria", "ev_at_soil"),
+            "Ev where dead load resists E",
+            EV_AT_SOIL,
+            "The vertical seismic effect Ev = 0.2 S_DS D in the counteracting seismic combination. ASCE 7-16 "
+            "12.4.2.2, exception 2, permits Ev = 0 where the demand is on the soil-structure interface of a "
+            "foundation.",
+        )
+        self._choice(
+            form,
+            ("criteria", "seismic_overturning_reduction"),
+            "Seismic overturning reduction",
+            OVERTURNING_REDUCTIONS,
+            "ASCE 7-16 12.13.4: the overturning effect of the seismic loads at the soil-foundation interface may "
+            "be reduced by 25 % with the equivalent lateral force procedure (12.8) or 10 % with the modal response "
+            "spectrum analysis (12.9). Applied to the E lateral loads in the overturning and bearing checks.",
+        )
+        self._choice(
+            form,
+            ("criteria", "wind_omega"),
+            "Omega on 0.6W",
+            WIND_OMEGAS,
+            "IBC 2021 1605.2: omega = 1.3 on 0.6W for wind loads of ASCE 7 chapters 26 to 31; 1.0 for other wind loads.",
+        )
+        self.group.add(option_fields["seismic_snow_factor"], form)
+        for key in OPTION_KEYS + ("sds", "bearing_increase"):
+            widget = self.choices[("criteria", key)].box if ("criteria", key) in self.choices else None
+            if widget is None:
+                widget = next(f for f in self.group.fields if f.spec.path == ("criteria", key))
+            self.rows[key] = (form, widget)
+        self.method_note = Note()
+        form.addRow(self.method_note)
         self.sections["Criteria"] = Section("Design criteria (all walls)", box, True)
         layout.addWidget(self.sections["Criteria"])
 
@@ -898,61 +1096,161 @@ class ProjectForm(QWidget):
         box, form = _form()
         for spec in PROJECT_FIELDS:
             self.group.add(spec, form)
-        self.sections["Project"] = Section("Project", box, False)
+        self.sections["Project"] = Section("Project information (title block)", box, False)
         layout.addWidget(self.sections["Project"])
 
-        self._shown_index: dict[tuple[str, ...], int] = {}
-        self.method.activated.connect(lambda _i: self._set_choice(self.method, ("criteria", "method"), "Method", "Set method"))
-        self.basis.activated.connect(
-            lambda _i: self._set_choice(self.basis, ("soil", "bearing_basis"), "Allowable is", "Set bearing basis")
-        )
+        for path, choice in self.choices.items():
+            self.document.field_labels[path_text(path)] = choice.label.text()
+            choice.box.activated.connect(lambda _i, p=path: self._on_choice(p))
 
-    def _set_choice(self, box: QComboBox, path: tuple[str, ...], label: str, text: str) -> None:
+    def _choice(
+        self, form: QFormLayout, path: tuple[str, ...], label: str, entries: Sequence[tuple[str, Any]], tip: str
+    ) -> Choice:
+        choice = Choice(path, label, entries, tip)
+        form.addRow(choice.label, choice.box)
+        self.choices[path] = choice
+        return choice
+
+    # ---- edits ---------------------------------------------------------------------------------
+
+    def _on_choice(self, path: tuple[str, ...]) -> None:
+        choice = self.choices[path]
         doc = self.document
-        value = box.currentData()
-        if get_at(doc.raw, path, None) == value:
-            return
-        before = box.itemText(self._shown_index.get(path, box.currentIndex()))
-        after = box.currentText()
-        doc.push(commands.SetField(doc, path, value, text=text), announce=f"{label}: {before} → {after}")
+        value = choice.box.currentData()
+        before = choice.box.itemText(choice.shown_index)
+        after = choice.box.currentText()
+        label = choice.label.text()
+        if path == ("criteria", "method"):
+            if value == doc.project.criteria.method.id and get_at(doc.raw, path) == value:
+                return
+            command, removed = commands.change_method(doc, value)
+            note = f" (removed {', '.join(removed)}: not an option of this method)" if removed else ""
+            entered = get_at(doc.raw, ("criteria", "bearing_increase"))
+            default = code_by_id(value).bearing_increase
+            if isinstance(entered, (int, float)) and abs(float(entered) - default) > 1e-9:
+                note += f"; the allowable increase stays {trim(float(entered), 3)} as entered (this method's default is {trim(default, 3)})"
+            doc.push(command, announce=f"{label}: {before} → {after}{note}")
+        elif path == ("soil", "presumptive_class"):
+            if value == doc.project.soil.presumptive_class:
+                return
+            doc.push(commands.set_presumptive_class(doc, value), announce=f"{label}: {before} → {after}")
+        else:
+            if get_at(doc.raw, path) == value:
+                return
+            doc.push(commands.SetField(doc, path, value, text=f"Set {_words(label)}"), announce=f"{label}: {before} → {after}")
         self.refresh()
 
+    def set_choice(self, path: tuple[str, ...], value: Any) -> None:
+        """Choose ``value`` in the choice box of ``path`` as a user would (for tests and keyboard use)."""
+        choice = self.choices[path]
+        index = choice.index_of(value)
+        if index < 0:
+            raise ValueError(f"{value!r} is not a choice of {path_text(path)}")
+        choice.box.setCurrentIndex(index)
+        choice.box.activated.emit(index)
+
+    # ---- rendering -----------------------------------------------------------------------------
+
     def refresh(self, force: bool = False) -> list[str]:
-        project = self.document.project
+        doc = self.document
+        project = doc.project
         dropped = self.group.refresh(force)
-        self.method.setCurrentIndex(max(0, self.method.findData(project.criteria.method.value)))
-        self.basis.setCurrentIndex(max(0, self.basis.findData(project.soil.bearing_basis.value)))
-        self._shown_index = {
-            ("criteria", "method"): self.method.currentIndex(),
-            ("soil", "bearing_basis"): self.basis.currentIndex(),
+        assumed = doc.assumptions_by_field()
+        criteria, soil = project.criteria, project.soil
+        values = {
+            ("soil", "presumptive_class"): soil.presumptive_class,
+            ("soil", "bearing_basis"): soil.bearing_basis.value,
+            ("soil", "sliding_basis"): soil.sliding_basis.value,
+            ("criteria", "method"): criteria.method.id,
+            ("criteria", "ev_at_soil"): criteria.ev_at_soil,
+            ("criteria", "seismic_overturning_reduction"): criteria.seismic_overturning_reduction,
+            ("criteria", "wind_omega"): criteria.wind_omega,
         }
+        for path, choice in self.choices.items():
+            choice.show_value(values[path], assumed.get(path_text(path)))
+        self._show_options(criteria.method)
+        self._show_presumptive(soil.presumptive_class)
         self.combinations.refresh()
         return dropped
 
+    def option_label(self, key: str) -> str:
+        """The words beside the field or choice of criteria option ``key``."""
+        path = ("criteria", key)
+        if path in self.choices:
+            return self.choices[path].label.text()
+        f = self.group.field_at(path)
+        return f.spec.label if f is not None else key
+
+    def _show_options(self, method: CodeBasis) -> None:
+        """Show the fields of the options ``method`` takes; hide the others (and say which)."""
+        hidden = []
+        for key, (form, widget) in self.rows.items():
+            shown = key in method.options
+            if form.isRowVisible(widget) != shown:
+                form.setRowVisible(widget, shown)
+            if not shown:
+                hidden.append(self.option_label(key))
+        text = method.title + "."
+        if hidden:
+            text += " Not options of this method: " + "; ".join(hidden) + "."
+        if self.method_note.text() != text:
+            self.method_note.setText(text)
+
+    def _show_presumptive(self, number: int | None) -> None:
+        """With a presumptive class its values are shown as read-only text and their fields disabled."""
+        on = number is not None
+        self.presumptive_note.setVisible(on)
+        if on:
+            self.presumptive_note.setText(presumptive_text(number, self.document.units))
+        for f in self.group.fields:
+            if f.spec.path[:1] == ("soil",) and f.spec.path[-1] in commands.PRESUMPTIVE_KEYS:
+                f.setEnabled(not on)
+                self.group.labels[id(f)].setEnabled(not on)
+                f.edit.setReadOnly(on)
+
+    def field_widget(self, field: str) -> QWidget | None:
+        """The input at an engine field path ("soil.cohesion", "criteria.method"), or None."""
+        path = tuple(field.split("."))
+        if path in self.choices:
+            return self.choices[path].box
+        f = self.group.field_at(path)
+        return f.edit if f is not None else None
+
     def show_field(self, field: str, scroll: QScrollArea) -> bool:
         """Show and focus the project's input at ``field`` ("soil.cohesion", "criteria.required.sliding")."""
-        if field == "soil.bearing_basis" or field == "criteria.method":
-            box = self.basis if field.startswith("soil") else self.method
-            section = self.sections["Soil" if field.startswith("soil") else "Criteria"]
-            section.toggle.setChecked(True)
+        head = field.split(".")[0]
+        names = {"soil": "Soil", "site": "Site", "criteria": "Criteria", "project": "Project"}
+        path = tuple(field.split("."))
+        if path in self.choices:
+            self.sections[names[head]].toggle.setChecked(True)
+            _settle(scroll)
+            box = self.choices[path].box
             scroll.ensureWidgetVisible(box)
             box.setFocus()
             return True
         if field.startswith("criteria.combinations"):
             self.sections["Combinations"].toggle.setChecked(True)
+            _settle(scroll)
             scroll.ensureWidgetVisible(self.combinations)
             self.combinations.table.setFocus()
             return True
-        head = field.split(".")[0]
-        section = self.sections.get({"soil": "Soil", "criteria": "Criteria", "project": "Project"}.get(head, ""))
+        section = self.sections.get(names.get(head, ""))
         return _focus(self.group, field, section, scroll)
 
     def focus_order(self) -> list[QWidget]:
-        fields = self.group.fields
-        return [
-            fields[0].edit,
-            self.basis,
-            *[f.edit for f in fields[1 : len(SOIL_FIELDS)]],
-            self.method,
-            *[f.edit for f in fields[len(SOIL_FIELDS) :]],
-        ]
+        """Every input in the order the form shows it (fields and choice boxes)."""
+        order: list[QWidget] = []
+        for section in self.sections.values():
+            form = section.content.layout()
+            if not isinstance(form, QFormLayout):
+                continue
+            for row in range(form.rowCount()):
+                item = form.itemAt(row, QFormLayout.ItemRole.FieldRole)
+                widget = item.widget() if item is not None else None
+                if isinstance(widget, QComboBox):
+                    order.append(widget)
+                elif widget is not None:
+                    f = next((f for f in self.group.fields if f is widget), None)
+                    if f is not None:
+                        order.append(f.edit)
+        return order

@@ -154,7 +154,7 @@ class AssumptionsView(QWidget):
         )
 
     def rows(self) -> list[tuple[str, str, str]]:
-        return [tuple(self.tree.topLevelItem(i).text(c) for c in range(3)) for i in range(self.count)]  # type: ignore[misc]
+        return [tuple(self.tree.topLevelItem(i).text(c) for c in range(len(ASSUMPTION_COLUMNS))) for i in range(self.count)]  # type: ignore[misc]
 
     def _on_item(self, item: QTreeWidgetItem, _column: int = 0) -> None:
         field = item.data(0, FIELD_ROLE)

@@ -16,7 +16,7 @@ from PySide6.QtCore import QPointF, QRectF, Qt
 from PySide6.QtGui import QColor
 from PySide6.QtWidgets import QComboBox, QWidget
 
-from engine.model import ALL_CHECKS, Wall
+from engine.model import Wall
 from engine.results import WallResult
 from engine.soil_pressure import PressureDiagram, pressure_diagram
 from engine.units import Kind
@@ -42,15 +42,17 @@ class CasePicker(QComboBox):
         self.setObjectName("casePicker")
         self.setToolTip(
             "The combination and direction drawn in the elevation and the pressure diagram. "
-            "Governing: the case with the lowest ratio / required for that check."
+            "Governing: the case with the lowest ratio / required for that check (embedment depends on no case)."
         )
         self.setSizeAdjustPolicy(QComboBox.SizeAdjustPolicy.AdjustToMinimumContentsLengthWithIcon)
         self.setMinimumContentsLength(20)
         self._key: tuple[str, ...] = ()
 
     def fill(self, result: WallResult, choice: tuple) -> None:
-        """Offer the governing case of each check and every case; select ``choice``."""
-        governing_titles = tuple(case_title(result, result.governing[c].case_index) for c in ALL_CHECKS)
+        """Offer the governing case of each check that has one (a geometric check has none) and every case;
+        select ``choice``."""
+        governing = [(c, g.case_index) for c, g in result.governing.items() if g.case_index is not None]
+        governing_titles = tuple(f"{c.id}:{case_title(result, i)}" for c, i in governing)
         cases = tuple(case_title(result, i) for i in range(len(result.table.cases)))
         key = governing_titles + ("|",) + cases
         self.blockSignals(True)
@@ -58,8 +60,8 @@ class CasePicker(QComboBox):
             if key != self._key:
                 self._key = key
                 self.clear()
-                for check, title in zip(ALL_CHECKS, governing_titles, strict=True):
-                    self.addItem(f"Governing {check.value}: {title}", ("governing", check))
+                for check, i in governing:
+                    self.addItem(f"Governing {check.title.lower()}: {case_title(result, i)}", ("governing", check))
                 self.insertSeparator(self.count())
                 for title, case in zip(cases, result.table.cases, strict=True):
                     self.addItem(title, ("case", case.combination.name, case.direction.value))
@@ -220,7 +222,7 @@ class PressurePlot(pg.PlotWidget):
         self.layout_labels()
         return diagram
 
-    def render_unchecked(self, wall: Wall, units: str, missing: list[str]) -> None:
+    def render_unchecked(self, wall: Wall, units: str, missing: str) -> None:
         """Nothing is checked yet (site values missing): the footing line and a notice of what to enter."""
         plot = self.getPlotItem()
         l_unit = LONG[1] if units == "SI" else LONG[0]
@@ -239,7 +241,7 @@ class PressurePlot(pg.PlotWidget):
         self._y_range = (-0.25, 1.0)
         plot.setYRange(*self._y_range, padding=0.0)
         plot.hideAxis("left")  # no pressure: no pressure scale
-        self.notice.setText("Not checked: enter " + ", ".join(missing) + "\n(Soil, all walls) to see the soil pressure")
+        self.notice.setText("Not checked: enter " + missing.replace(" and ", "\nand ") + "\nto see the soil pressure")
         self._placements = [Placement(self.notice, [Spot(0.5 * length, 0.45, (0.5, 0.5))], 1)]
         self.layout_labels()
 

@@ -16,13 +16,22 @@ from PySide6.QtWidgets import (
     QWidget,
 )
 
+from engine.registry import checks
 from engine.schedule import schedule_headers, schedule_rows
 
 from ..document import ProjectDocument
 from ..style import WARM
 
-# Shown first, so the verdict stays on screen in a narrow window; copy and CSV keep the engine's order.
-EARLY_COLUMNS = ("Wall", "Result", "Overturning ratio", "Sliding ratio", "Bearing ratio", "Footing width", "Footing thickness")
+
+def early_columns() -> tuple[str, ...]:
+    """Shown first, so the verdict stays on screen in a narrow window; copy and CSV keep the engine's order.
+
+    The wall, its result, the ratio of each registered check (as the schedule names it) and the size.
+    """
+    ratios = [f"{c.title} ratio" for c in checks()]
+    return ("Wall", "Result", *ratios, "Footing width", "Footing thickness")
+
+
 NOTE = "Sizes as entered; ratios are the governing case of each check."
 
 
@@ -66,7 +75,7 @@ class ScheduleView(QWidget):
         self.headers = schedule_headers(doc.units)
         if not doc.checkable:  # nothing is checked until the site values are in
             self.rows = []
-            self.note.setText("Not checked yet: enter " + ", ".join(doc.missing_labels()) + " (Soil, all walls).")
+            self.note.setText("Not checked yet: enter " + doc.missing_text() + ".")
         else:
             self.rows = schedule_rows(doc.project, [doc.results[w.id] for w in doc.project.walls])
             self.note.setText(NOTE)
@@ -94,7 +103,7 @@ class ScheduleView(QWidget):
     def _order_columns(self) -> None:
         """Move the verdict columns forward on screen only (the model's column order is untouched)."""
         header = self.table.horizontalHeader()
-        logical = [self.headers.index(name) for name in EARLY_COLUMNS if name in self.headers]
+        logical = [self.headers.index(name) for name in early_columns() if name in self.headers]
         logical += [c for c in range(len(self.headers)) if c not in logical]
         for visual, column in enumerate(logical):
             if header.visualIndex(column) != visual:

@@ -21,13 +21,22 @@ from PySide6.QtWidgets import (
     QWidget,
 )
 
+from engine.results import Governing
 from engine.units import format_length
 
 from .. import commands
 from ..document import ProjectDocument
 from ..style import GRAPHITE, MUTED, NG_MARK, OK_MARK, WARM
 
-COLUMNS = ("Wall", "Footing B × D", "Worst")
+COLUMNS = ("Wall", "Footing B × t_f", "Worst")
+
+
+def _worst_tip(worst: Governing) -> str:
+    """Which check is worst, and where (a geometric check has no case)."""
+    where = ""
+    if worst.case_index is not None and not math.isinf(worst.ratio):
+        where = f" in {worst.combination}" + ("" if worst.direction == "none" else f" ({worst.direction})")
+    return f"worst: {worst.check.title.lower()}, ratio {worst.ratio:.2f} vs required {worst.required:.2f}{where}"
 
 
 class WallsView(QWidget):
@@ -48,7 +57,8 @@ class WallsView(QWidget):
         self.tree.setEditTriggers(QAbstractItemView.EditTrigger.EditKeyPressed | QAbstractItemView.EditTrigger.DoubleClicked)
         self.tree.header().setSectionResizeMode(QHeaderView.ResizeMode.ResizeToContents)
         self.tree.header().setStretchLastSection(True)
-        self.tree.headerItem().setToolTip(2, "The lowest ratio / required of the three checks, with ✓ OK or ✗ NG")
+        self.tree.headerItem().setToolTip(1, "Footing width B × thickness t_f")
+        self.tree.headerItem().setToolTip(2, "The lowest ratio / required of every check, with ✓ OK or ✗ NG")
         self.tree.setToolTip("The project's walls. F2 or double-click renames; the mark reads ✓ OK or ✗ NG.")
         self.buttons: dict[str, QPushButton] = {}
         grid = QHBoxLayout()
@@ -131,7 +141,7 @@ class WallsView(QWidget):
                     item.setForeground(2, tone)
                 for col, tip in (
                     (0, wall.label or wall.id),
-                    (2, f"worst: {worst.check.value}, ratio {worst.ratio:.2f} vs required {worst.required:.2f}"),
+                    (2, _worst_tip(worst)),
                 ):
                     if item.toolTip(col) != tip:
                         item.setToolTip(col, tip)

@@ -27,7 +27,11 @@ def test_switch_to_si_and_back(qtbot, window):
     assert "kN/m" in window.wall_form.loads.table.item(0, 2).text()
     assert "m" in window.walls_view.tree.topLevelItem(0).text(1)
     assert doc.project.walls == model  # the SI values inside do not change
-    assert window.verdict.texts() == us_verdict  # ratios do not depend on units
+    si_verdict = window.verdict.texts()
+    ratios = {k: v for k, v in si_verdict.items() if k != "embedment"}
+    assert ratios == {k: v for k, v in us_verdict.items() if k != "embedment"}  # ratios do not depend on units
+    assert si_verdict["embedment"][0] == "depth 0.610 m ≥ 0.457 m"  # 2 ft against the 18 in frost depth
+    assert si_verdict["embedment"][1] == us_verdict["embedment"][1]
     # a bare number now means millimetres
     f = field(window, "footing", "width")
     f.edit.setText("500")
