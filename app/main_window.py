@@ -38,7 +38,7 @@ from PySide6.QtWidgets import (
 from engine import CAUTION, __version__
 from engine.errors import InputError
 from engine.project_file import EXTENSION
-from engine.registry import checks, codes
+from engine.registry import Family, checks, codes
 from engine.schedule import write_schedule
 from engine.units import format_length
 
@@ -1072,7 +1072,7 @@ class MainWindow(QMainWindow):
             "<p>Kernline checks concrete strip footings under shear walls for "
             + _listing([c.title.lower() for c in checks()])
             + " (with soil pressure beyond the kern) under the load combinations of the chosen code basis ("
-            + "; ".join(c.title for c in codes())
+            + "; ".join(c.title for c in codes(Family.SERVICE))
             + ") in both lateral directions, and sizes them on a grid of widths and thicknesses (and lengths).</p>"
             f"<p><b>Basis.</b> {REFERENCES}.</p>"
             f"<p><b>Caution.</b> {CAUTION}</p>",

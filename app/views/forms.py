@@ -1041,11 +1041,11 @@ class ProjectForm(QWidget):
             form,
             ("criteria", "method"),
             "Method",
-            [(method_name(code), code.id) for code in codes()],
+            [(method_name(code), code.id) for code in codes(Family.SERVICE)],
             "The code basis: its load combinations, required ratios and options. Options the method does not "
             "take are hidden, and choosing another method removes those the new one does not take (one undo step).",
         ).box
-        for i, code in enumerate(codes()):
+        for i, code in enumerate(codes(Family.SERVICE)):
             self.method.setItemData(i, f"{code.title}\n\n{code.wording}", Qt.ItemDataRole.ToolTipRole)
         self.required_specs = required_fields()
         for spec in self.required_specs:

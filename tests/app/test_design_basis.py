@@ -17,6 +17,7 @@ from window_helpers import INCH, PSF, demo_raw, field, select_wall, type_into
 from app.document import new_project_raw, site_gaps
 from engine.codes import codes
 from engine.presumptive import TABLE_1806_2
+from engine.registry import Family
 from engine.stability import table_checks
 
 
@@ -30,8 +31,8 @@ def _option_visible(form, key: str) -> bool:
 
 def test_the_method_choice_offers_every_registered_code_basis_by_title(window):
     box = window.project_form.method
-    assert [box.itemData(i) for i in range(box.count())] == [c.id for c in codes()]
-    for i, code in enumerate(codes()):
+    assert [box.itemData(i) for i in range(box.count())] == [c.id for c in codes(Family.SERVICE)]
+    for i, code in enumerate(codes(Family.SERVICE)):
         assert box.itemText(i).split(",")[0] in code.title  # "ASCE 7-16, ASD" for "ASCE 7-16, allowable ..."
         assert code.title in box.itemData(i, Qt.ItemDataRole.ToolTipRole)  # the whole title in the entry's tooltip
 
@@ -60,7 +61,7 @@ def test_a_method_switch_removes_the_options_it_refuses_in_one_undo_step(qtbot, 
 
 def test_the_fields_of_options_a_method_does_not_take_are_hidden(qtbot, window):
     form = window.project_form
-    for code in codes():
+    for code in codes(Family.SERVICE):
         form.set_choice(("criteria", "method"), code.id)
         for key in form.rows:
             assert _option_visible(form, key) == (key in code.options), (code.id, key)
