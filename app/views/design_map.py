@@ -212,7 +212,8 @@ class DesignMapView(QWidget):
         self.legend.setText(
             "Filled cells pass every check; grey cells are narrower than the wall. "
             "Lines: where a check reaches its required ratio:\n"
-            + "   ".join(glyphs)
+            # two lines to a row, so that a glyph never parts from its check's name at a wrap
+            + "\n".join("    ".join(glyphs[i : i + 2]) for i in range(0, len(glyphs), 2))
             + "\n◯ smallest passing size (least B × t_f)   ✕ current size"
         )
 

@@ -1203,7 +1203,7 @@ class ProjectForm(QWidget):
         if on:
             self.presumptive_note.setText(presumptive_text(number, self.document.units))
         for f in self.group.fields:
-            if f.spec.path[:1] == ("soil",) and f.spec.path[-1] in commands.PRESUMPTIVE_KEYS:
+            if f.spec.path[:1] == ("soil",) and f.spec.path[-1] in commands.PRESUMPTIVE_KEYS and f.isEnabled() == on:
                 f.setEnabled(not on)
                 self.group.labels[id(f)].setEnabled(not on)
                 f.edit.setReadOnly(on)

@@ -17,7 +17,7 @@ from window_helpers import field
 
 import engine.registry as registry
 from engine.registry import Check, CheckArrays, Family, register_check
-from engine.stability import _case_layout
+from engine.stability import _case_layout, table_checks
 
 CLEARANCE_RATIO = 0.5  # below 1.0: the test check fails at every size
 
@@ -94,7 +94,7 @@ def test_a_registered_check_shows_in_the_verdict_walls_and_map(qtbot, clearance,
 def test_the_registry_is_as_it_was_after_the_test_check(window):
     """The fixture removes its check: the window of a later test shows the registered checks only."""
     assert "test-clearance" not in window.verdict.texts()
-    assert list(window.verdict.texts()) == [c.id for c in registry.checks() if c.family is not Family.STRENGTH]
+    assert list(window.verdict.texts()) == [c.id for c in table_checks()]
 
 
 # ---- names a reader cannot misread ---------------------------------------------------------------------
