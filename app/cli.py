@@ -24,9 +24,9 @@ import sys
 from collections.abc import Sequence
 from pathlib import Path
 
-from engine import CAUTION, __version__
-from engine.errors import EngineError, InputError
-from engine.file_safety import FilePathError, check_input_file, check_output_path, check_writable
+from kernline.engine import CAUTION, __version__
+from kernline.engine.errors import EngineError, InputError
+from kernline.engine.file_safety import FilePathError, check_input_file, check_output_path, check_writable
 
 EXIT_OK, EXIT_FAIL, EXIT_INPUT, EXIT_INTERNAL = 0, 1, 2, 3
 EXIT_INTERRUPTED = 130  # 128 + SIGINT, what a shell reports for Ctrl+C
@@ -151,7 +151,7 @@ def _window(path: str | None, demo: bool) -> int:
         )
         return EXIT_INTERNAL
     try:
-        from app.main_window import launch
+        from kernline.app.main_window import launch
     except ImportError as err:
         print(
             f"kernline: the window cannot start here ({err}). The headless commands work: kernline check, size.", file=sys.stderr
@@ -170,8 +170,8 @@ def _no_display() -> bool:
 
 
 def _save_demo(path: str) -> int:
-    from engine.file_safety import atomic_write_text
-    from engine.resources import resource_path
+    from kernline.engine.file_safety import atomic_write_text
+    from kernline.engine.resources import resource_path
 
     text = resource_path("demo.kernline").read_text(encoding="utf-8")
     atomic_write_text(Path(path), text)
@@ -180,10 +180,10 @@ def _save_demo(path: str) -> int:
 
 
 def _check(path: str, as_json: bool) -> int:
-    from engine.input_warnings import input_warnings
-    from engine.project_file import load_project
-    from engine.results import check_project, results_json
-    from engine.summary import check_table, warnings_text
+    from kernline.engine.input_warnings import input_warnings
+    from kernline.engine.project_file import load_project
+    from kernline.engine.results import check_project, results_json
+    from kernline.engine.summary import check_table, warnings_text
 
     check_input_file(path)
     doc = load_project(path)
@@ -203,11 +203,11 @@ def _warn(text: str) -> None:
 
 
 def _size(path: str, as_json: bool, write: bool) -> int:
-    from engine.input_warnings import input_warnings
-    from engine.project_file import load_project, save_project, with_footing_sizes
-    from engine.results import check_wall, results_json
-    from engine.sizing import size_footing, sized_footing_values, sized_wall
-    from engine.summary import size_table, warnings_text
+    from kernline.engine.input_warnings import input_warnings
+    from kernline.engine.project_file import load_project, save_project, with_footing_sizes
+    from kernline.engine.results import check_wall, results_json
+    from kernline.engine.sizing import size_footing, sized_footing_values, sized_wall
+    from kernline.engine.summary import size_table, warnings_text
 
     check_input_file(path)
     if write:  # before the sizing, which takes a while: a file that cannot be written is said at once
@@ -240,11 +240,11 @@ def _size(path: str, as_json: bool, write: bool) -> int:
 
 def _report(path: str, output: str, walls: str | None) -> int:
     try:
-        from engine.report import write_report
+        from kernline.engine.report import write_report
     except ImportError:
         print("kernline: the calculation package is not built yet in this version", file=sys.stderr)
         return EXIT_INTERNAL
-    from engine.project_file import load_project
+    from kernline.engine.project_file import load_project
 
     check_input_file(path)
     check_output_path(output, inputs=[path])
@@ -257,11 +257,11 @@ def _report(path: str, output: str, walls: str | None) -> int:
 
 def _schedule(path: str, output: str) -> int:
     try:
-        from engine.schedule import write_schedule
+        from kernline.engine.schedule import write_schedule
     except ImportError:
         print("kernline: the CSV schedule is not built yet in this version", file=sys.stderr)
         return EXIT_INTERNAL
-    from engine.project_file import load_project
+    from kernline.engine.project_file import load_project
 
     check_input_file(path)
     check_output_path(output, inputs=[path])

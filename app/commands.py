@@ -13,14 +13,13 @@ import copy
 from collections.abc import Sequence
 from typing import TYPE_CHECKING, Any
 
+from kernline.engine.units import length_text
 from PySide6.QtGui import QUndoCommand
-
-from engine.units import length_text
 
 from .document import MISSING, PathKey, RawPath, get_at, unique_wall_id, wall_template
 
 if TYPE_CHECKING:  # pragma: no cover
-    from engine.model import Project
+    from kernline.engine.model import Project
 
     from .document import ProjectDocument
 
@@ -414,8 +413,8 @@ def change_method(document: ProjectDocument, method_id: str) -> tuple[RawEdit, l
     alternative combinations, say), so the window never leaves one behind. Returns the command and the
     keys it removes.
     """
-    from engine.project_file import OPTION_KEYS
-    from engine.registry import code_by_id
+    from kernline.engine.project_file import OPTION_KEYS
+    from kernline.engine.registry import code_by_id
 
     code = code_by_id(method_id)
     criteria = document.raw.get("criteria")

@@ -19,17 +19,24 @@ from dataclasses import dataclass
 from pathlib import Path
 from typing import Any
 
+from kernline.engine.errors import InputError
+from kernline.engine.input_warnings import InputWarning, input_warnings
+from kernline.engine.model import Assumption, DesignCriteria, Project, Site, SoilProperties, Wall
+from kernline.engine.project_file import (
+    FORMAT,
+    VERSION,
+    atomic_write_text,
+    dumps_project,
+    load_project,
+    parse_project,
+    save_project,
+)
+from kernline.engine.registry import Check, CodeBasis, check_by_id, code_by_id
+from kernline.engine.resources import resource_path
+from kernline.engine.results import WallResult, check_wall
+from kernline.engine.sizing import SizingResult
 from PySide6.QtCore import QObject, Signal
 from PySide6.QtGui import QUndoStack
-
-from engine.errors import InputError
-from engine.input_warnings import InputWarning, input_warnings
-from engine.model import Assumption, DesignCriteria, Project, Site, SoilProperties, Wall
-from engine.project_file import FORMAT, VERSION, atomic_write_text, dumps_project, load_project, parse_project, save_project
-from engine.registry import Check, CodeBasis, check_by_id, code_by_id
-from engine.resources import resource_path
-from engine.results import WallResult, check_wall
-from engine.sizing import SizingResult
 
 from .recovery import new_session
 

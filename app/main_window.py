@@ -18,6 +18,12 @@ from collections.abc import Mapping
 from pathlib import Path
 from typing import Any
 
+from kernline.engine import CAUTION, __version__
+from kernline.engine.errors import InputError
+from kernline.engine.project_file import EXTENSION
+from kernline.engine.registry import Family, checks, codes
+from kernline.engine.schedule import write_schedule
+from kernline.engine.units import format_length
 from PySide6.QtCore import QSettings, QStandardPaths, Qt, QTimer
 from PySide6.QtGui import QAction, QActionGroup, QCloseEvent, QKeySequence
 from PySide6.QtWidgets import (
@@ -34,13 +40,6 @@ from PySide6.QtWidgets import (
     QVBoxLayout,
     QWidget,
 )
-
-from engine import CAUTION, __version__
-from engine.errors import InputError
-from engine.project_file import EXTENSION
-from engine.registry import Family, checks, codes
-from engine.schedule import write_schedule
-from engine.units import format_length
 
 from . import commands, recovery
 from .document import ProjectDocument, absolute, split_field

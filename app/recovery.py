@@ -34,7 +34,7 @@ from dataclasses import dataclass
 from pathlib import Path
 from typing import Any
 
-from engine.file_safety import atomic_write_text
+from kernline.engine.file_safety import atomic_write_text
 
 FORMAT = "kernline-recovery"
 VERSION = 2  # 1: the single shared autosave file of Kernline before per-document records

@@ -20,13 +20,12 @@ from dataclasses import dataclass, field
 from pathlib import Path
 from typing import Any
 
+from kernline.engine.combinations import combinations_of
+from kernline.engine.errors import EngineError, InputError
+from kernline.engine.model import Project, Wall
+from kernline.engine.project_file import ProjectDocument as ProjectFile
+from kernline.engine.sizing import candidate_grid, candidate_values, size_footing
 from PySide6.QtCore import QObject, QRunnable, QThreadPool, Signal
-
-from engine.combinations import combinations_of
-from engine.errors import EngineError, InputError
-from engine.model import Project, Wall
-from engine.project_file import ProjectDocument as ProjectFile
-from engine.sizing import candidate_grid, candidate_values, size_footing
 
 from .document import SizingEntry
 
@@ -162,7 +161,7 @@ def write_package(raw: dict[str, Any], project: Project, path: Path) -> PackageO
     The raw dict goes along so that the package prints the geotechnical report named in
     ``soil.report`` (see :func:`engine.report.write_report`).
     """
-    from engine.report import write_report  # reportlab is imported only when a package is written
+    from kernline.engine.report import write_report  # reportlab is imported only when a package is written
 
     start = time.perf_counter()
     walls = len(project.walls)

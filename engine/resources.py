@@ -6,13 +6,13 @@ import sys
 from importlib import resources as _importlib_resources
 from pathlib import Path
 
-_PACKAGE = "kernline_resources"
+_PACKAGE = "kernline.resources"
 
 
 def resource_path(name: str) -> Path:
     """Return the path of resource ``name`` (a file name inside ``resources/``).
 
-    Looks in a frozen build's bundle first, then in the installed ``kernline_resources`` package,
+    Looks in a frozen build's bundle first, then in the installed ``kernline.resources`` package,
     then beside the source tree.
     """
     bundle = getattr(sys, "_MEIPASS", None)

@@ -2,7 +2,7 @@
 
 import sys
 
-from app.cli import main
+from kernline.app.cli import main
 
 if __name__ == "__main__":
     sys.exit(main())

@@ -1,1 +1,1 @@
-"""Kernline's resource files (units definitions, demo project, icons), installed as ``kernline_resources``."""
+"""Kernline's resource files (units definitions, demo project, icons), installed as ``kernline.resources``."""

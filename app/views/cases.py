@@ -5,12 +5,11 @@ from __future__ import annotations
 import math
 from typing import Any
 
+from kernline.engine.results import WallResult
+from kernline.engine.units import Kind
 from PySide6.QtCore import QModelIndex, QSortFilterProxyModel, Qt, Signal
 from PySide6.QtGui import QBrush, QColor, QStandardItem, QStandardItemModel
 from PySide6.QtWidgets import QAbstractItemView, QHeaderView, QTableView, QWidget
-
-from engine.results import WallResult
-from engine.units import Kind
 
 from ..style import NG_MARK, OK_MARK, WARM
 from .fields import FORCE, LONG, PRESSURE, trim, unit_factor

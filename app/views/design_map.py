@@ -16,13 +16,12 @@ import math
 
 import numpy as np
 import pyqtgraph as pg
+from kernline.engine.registry import Check
+from kernline.engine.sizing import SizingResult, sized_footing_values
+from kernline.engine.stability import table_checks
+from kernline.engine.units import Kind
 from PySide6.QtCore import QRectF, Qt, Signal
 from PySide6.QtWidgets import QFrame, QGridLayout, QHBoxLayout, QLabel, QPushButton, QScrollArea, QVBoxLayout, QWidget
-
-from engine.registry import Check
-from engine.sizing import SizingResult, sized_footing_values
-from engine.stability import table_checks
-from engine.units import Kind
 
 from .. import commands
 from ..document import ProjectDocument, SizingEntry

@@ -2,11 +2,10 @@
 
 from __future__ import annotations
 
+from kernline.engine.model import LateralLoad, Wall
+from kernline.engine.units import Kind, format_length
 from PySide6.QtCore import QRect, Qt
 from PySide6.QtWidgets import QHBoxLayout, QLabel, QSizePolicy, QSplitter, QVBoxLayout, QWidget
-
-from engine.model import LateralLoad, Wall
-from engine.units import Kind, format_length
 
 from ..document import ProjectDocument
 from .elevation import ElevationView

@@ -13,12 +13,11 @@ from dataclasses import dataclass
 
 import numpy as np
 import pyqtgraph as pg
+from kernline.engine.model import LateralLoad, LineLoad, PointLoad, Wall
+from kernline.engine.units import Kind
 from PySide6.QtCore import QPointF, QRectF, Qt
 from PySide6.QtGui import QBrush, QColor, QPen
 from PySide6.QtWidgets import QGraphicsRectItem
-
-from engine.model import LateralLoad, LineLoad, PointLoad, Wall
-from engine.units import Kind
 
 from ..style import CONCRETE, CONCRETE_EDGE, GRAPHITE, LOAD, MUTED, SOIL, WALL, configure_pyqtgraph
 from .fields import FORCE, LINE, LONG, trim, unit_factor

@@ -14,6 +14,10 @@ from collections.abc import Callable
 from dataclasses import dataclass
 from typing import Any
 
+from kernline.engine.errors import InputError
+from kernline.engine.model import Project, Wall
+from kernline.engine.registry import Check, Family, checks
+from kernline.engine.units import Kind, parse_quantity
 from PySide6.QtCore import QEvent, QObject, Qt, QTimer, Signal
 from PySide6.QtGui import QContextMenuEvent, QKeyEvent, QKeySequence
 from PySide6.QtWidgets import (
@@ -26,11 +30,6 @@ from PySide6.QtWidgets import (
     QVBoxLayout,
     QWidget,
 )
-
-from engine.errors import InputError
-from engine.model import Project, Wall
-from engine.registry import Check, Family, checks
-from engine.units import Kind, parse_quantity
 
 from ..document import MISSING
 from ..style import ASSUMED_WORD, assumed_icon

@@ -8,6 +8,13 @@ from __future__ import annotations
 from collections.abc import Sequence
 from typing import Any
 
+from kernline.engine.combinations import combinations_of
+from kernline.engine.errors import InputError
+from kernline.engine.model import LateralLoad, LineLoad, LoadCase, PointLoad
+from kernline.engine.presumptive import TABLE_1806_2
+from kernline.engine.project_file import OPTION_KEYS
+from kernline.engine.registry import Check, CodeBasis, Family, checks, code_by_id, codes
+from kernline.engine.units import Kind
 from PySide6.QtCore import QCoreApplication, QEvent, Qt
 from PySide6.QtGui import QBrush, QColor, QIcon
 from PySide6.QtWidgets import (
@@ -26,14 +33,6 @@ from PySide6.QtWidgets import (
     QVBoxLayout,
     QWidget,
 )
-
-from engine.combinations import combinations_of
-from engine.errors import InputError
-from engine.model import LateralLoad, LineLoad, LoadCase, PointLoad
-from engine.presumptive import TABLE_1806_2
-from engine.project_file import OPTION_KEYS
-from engine.registry import Check, CodeBasis, Family, checks, code_by_id, codes
-from engine.units import Kind
 
 from .. import commands
 from ..document import MISSING, ProjectDocument, get_at, path_text

@@ -12,14 +12,13 @@ import math
 
 import numpy as np
 import pyqtgraph as pg
+from kernline.engine.model import Wall
+from kernline.engine.results import WallResult
+from kernline.engine.soil_pressure import PressureDiagram, pressure_diagram
+from kernline.engine.units import Kind
 from PySide6.QtCore import QPointF, QRectF, Qt
 from PySide6.QtGui import QColor
 from PySide6.QtWidgets import QComboBox, QWidget
-
-from engine.model import Wall
-from engine.results import WallResult
-from engine.soil_pressure import PressureDiagram, pressure_diagram
-from engine.units import Kind
 
 from ..style import ACCENT, ACCENT_LIGHT, GRAPHITE, MUTED, WARM, configure_pyqtgraph
 from .elevation import Placement, Spot, _pen, place_labels, style_axes

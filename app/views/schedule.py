@@ -2,6 +2,8 @@
 
 from __future__ import annotations
 
+from kernline.engine.registry import checks
+from kernline.engine.schedule import schedule_headers, schedule_rows
 from PySide6.QtCore import Qt, Signal
 from PySide6.QtGui import QColor, QGuiApplication
 from PySide6.QtWidgets import (
@@ -15,9 +17,6 @@ from PySide6.QtWidgets import (
     QVBoxLayout,
     QWidget,
 )
-
-from engine.registry import checks
-from engine.schedule import schedule_headers, schedule_rows
 
 from ..document import ProjectDocument
 from ..style import WARM

@@ -11,15 +11,14 @@ from __future__ import annotations
 import math
 from typing import Any
 
+from kernline.engine.model import LateralLoad, Wall
+from kernline.engine.registry import Check
+from kernline.engine.results import Governing, WallResult
+from kernline.engine.stability import table_checks
+from kernline.engine.units import format_length
 from PySide6.QtCore import QRectF, QSize, Qt
 from PySide6.QtGui import QBrush, QColor, QPainter, QPalette, QPen
 from PySide6.QtWidgets import QGridLayout, QLabel, QSizePolicy, QVBoxLayout, QWidget
-
-from engine.model import LateralLoad, Wall
-from engine.registry import Check
-from engine.results import Governing, WallResult
-from engine.stability import table_checks
-from engine.units import format_length
 
 from ..style import ACCENT, GRAPHITE, HAIRLINE, MUTED, WARM, mark
 

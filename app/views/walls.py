@@ -7,6 +7,8 @@ from __future__ import annotations
 
 import math
 
+from kernline.engine.results import Governing
+from kernline.engine.units import format_length
 from PySide6.QtCore import Qt, QTimer
 from PySide6.QtGui import QColor
 from PySide6.QtWidgets import (
@@ -20,9 +22,6 @@ from PySide6.QtWidgets import (
     QVBoxLayout,
     QWidget,
 )
-
-from engine.results import Governing
-from engine.units import format_length
 
 from .. import commands
 from ..document import ProjectDocument

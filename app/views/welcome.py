@@ -9,10 +9,9 @@ from __future__ import annotations
 from collections.abc import Sequence
 from pathlib import Path
 
+from kernline.engine import __version__
 from PySide6.QtCore import Qt, Signal
 from PySide6.QtWidgets import QFrame, QHBoxLayout, QLabel, QPushButton, QSizePolicy, QVBoxLayout, QWidget
-
-from engine import __version__
 
 from ..style import ACCENT, ACCENT_FAINT, GRAPHITE, HAIRLINE, MUTED, PAPER, WARM
 

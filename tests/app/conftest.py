@@ -10,11 +10,10 @@ import shutil
 from pathlib import Path
 
 import pytest
+from kernline.engine.resources import resource_path
 from PySide6.QtCore import QSettings
 from PySide6.QtWidgets import QFileDialog, QMessageBox
 from shiboken6 import isValid
-
-from engine.resources import resource_path
 
 
 class Dialogs:
@@ -44,7 +43,7 @@ class Dialogs:
         self.abouts.append(f"{title}: {text}")
 
     def recovery(self, _parent, orphans):
-        from app.views.recovery_dialog import RecoveryChoice
+        from kernline.app.views.recovery_dialog import RecoveryChoice
 
         orphans = list(orphans)
         self.recovery_offers.append(orphans)
@@ -62,7 +61,7 @@ def dialogs(monkeypatch: pytest.MonkeyPatch) -> Dialogs:
     monkeypatch.setattr(QMessageBox, "question", d.question)
     monkeypatch.setattr(QMessageBox, "warning", d.warning)
     monkeypatch.setattr(QMessageBox, "about", d.about)
-    from app.views.recovery_dialog import RecoveryDialog
+    from kernline.app.views.recovery_dialog import RecoveryDialog
 
     monkeypatch.setattr(RecoveryDialog, "ask", staticmethod(d.recovery))
     monkeypatch.setattr(QFileDialog, "getSaveFileName", lambda *a, **k: (d.save_path, ""))
@@ -87,7 +86,7 @@ def demo_file(tmp_path: Path) -> Path:
 @pytest.fixture
 def make_window(qtbot, tmp_path: Path, settings: QSettings):
     """Build windows sharing the test's settings and recovery folder."""
-    from app.main_window import MainWindow
+    from kernline.app.main_window import MainWindow
 
     made = []
 

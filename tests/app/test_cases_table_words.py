@@ -3,12 +3,11 @@
 import copy
 import json
 
+from kernline.app.views.cases import CasesModel
+from kernline.engine.project_file import parse_project
+from kernline.engine.resources import resource_path
+from kernline.engine.results import check_wall
 from PySide6.QtCore import Qt
-
-from app.views.cases import CasesModel
-from engine.project_file import parse_project
-from engine.resources import resource_path
-from engine.results import check_wall
 
 BEARING_COLUMN = 8
 

@@ -11,14 +11,13 @@ from __future__ import annotations
 
 import numpy as np
 import pytest
+from kernline.app.document import new_project_raw, site_gaps
+from kernline.engine.codes import codes
+from kernline.engine.presumptive import TABLE_1806_2
+from kernline.engine.registry import Family
+from kernline.engine.stability import table_checks
 from PySide6.QtCore import Qt
 from window_helpers import INCH, PSF, demo_raw, field, select_wall, type_into
-
-from app.document import new_project_raw, site_gaps
-from engine.codes import codes
-from engine.presumptive import TABLE_1806_2
-from engine.registry import Family
-from engine.stability import table_checks
 
 
 def _option_visible(form, key: str) -> bool:

@@ -7,10 +7,9 @@ import math
 
 import numpy as np
 import pytest
+from kernline.engine.model import ALL_CHECKS, Check
 from PySide6.QtCore import Qt
 from window_helpers import INCH, demo_raw, engine_answer, engine_pressure_psf, field, select_wall, type_into
-
-from engine.model import ALL_CHECKS, Check
 
 
 def test_typing_a_footing_width_updates_model_drawings_and_verdict(qtbot, window):
@@ -177,7 +176,7 @@ def test_custom_combinations_are_editable_as_a_table(qtbot, window):
 
 def test_a_bad_load_cell_is_refused_and_marked(qtbot, window):
     """ "lots" in a value cell: message under the table, the cell marked, the load unchanged."""
-    from app.views.forms import _ERROR_ROLE
+    from kernline.app.views.forms import _ERROR_ROLE
 
     doc = window.document
     loads = window.wall_form.loads

@@ -10,15 +10,14 @@ import sys
 from pathlib import Path
 
 import pytest
+from kernline.app.main_window import EXIT_AFTER_VARIABLE, FILE_FILTER, exit_after_ms, package_file_name
+from kernline.app.views.pressure import MIN_HEIGHT
+from kernline.engine import CAUTION, __version__
+from kernline.engine.units import format_length
 from pypdf import PdfReader
 from PySide6.QtCore import Qt
 from PySide6.QtWidgets import QFileDialog, QMessageBox
 from window_helpers import field, select_wall, type_into
-
-from app.main_window import EXIT_AFTER_VARIABLE, FILE_FILTER, exit_after_ms, package_file_name
-from app.views.pressure import MIN_HEIGHT
-from engine import CAUTION, __version__
-from engine.units import format_length
 
 ROOT = Path(__file__).resolve().parents[2]
 LEFT = Qt.MouseButton.LeftButton
@@ -242,7 +241,7 @@ def test_launch_quits_with_code_zero_when_asked_by_the_environment(tmp_path, arg
         XDG_DATA_HOME=str(tmp_path / "data"),
         **{EXIT_AFTER_VARIABLE: "200"},
     )
-    code = f"from app.main_window import launch; import sys; sys.exit(launch({arguments}))"
+    code = f"from kernline.app.main_window import launch; import sys; sys.exit(launch({arguments}))"
     done = subprocess.run([sys.executable, "-c", code], cwd=ROOT, env=env, timeout=60, capture_output=True, text=True)
     assert done.returncode == 0, done.stderr
 

@@ -7,10 +7,9 @@ status bar, internal paths in messages).
 from __future__ import annotations
 
 import pytest
+from kernline.engine.model import Check
 from PySide6.QtCore import Qt
 from window_helpers import INCH, demo_raw, field, select_wall, type_into
-
-from engine.model import Check
 
 
 def _live_type(qtbot, window, f, text: str) -> None:

@@ -5,10 +5,9 @@ from __future__ import annotations
 
 import json
 
+from kernline.engine.project_file import load_project
 from PySide6.QtWidgets import QMessageBox
 from window_helpers import field, type_into
-
-from engine.project_file import load_project
 
 
 def test_open_then_save_leaves_the_file_byte_identical(qtbot, make_window, demo_file):

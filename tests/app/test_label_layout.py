@@ -9,10 +9,9 @@ from __future__ import annotations
 import itertools
 
 import pytest
+from kernline.engine.schedule import schedule_headers
 from PySide6.QtCore import QPointF, QRectF
 from window_helpers import field, select_wall, type_into
-
-from engine.schedule import schedule_headers
 
 SIZES = [(1480, 940), (1280, 800)]
 

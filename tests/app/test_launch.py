@@ -3,10 +3,9 @@ the event loop's exit code."""
 
 from __future__ import annotations
 
+import kernline.app.main_window as main_window
 from PySide6.QtCore import QSettings, QTimer
 from PySide6.QtWidgets import QApplication
-
-import app.main_window as main_window
 
 
 def _run_launch(monkeypatch, tmp_path, **kwargs) -> tuple[int, list]:

@@ -6,10 +6,9 @@ from __future__ import annotations
 import json
 
 import pytest
+from kernline.app.document import new_project_raw, parse_for_window, site_gaps
+from kernline.engine.project_file import load_project
 from window_helpers import field, type_into
-
-from app.document import new_project_raw, parse_for_window, site_gaps
-from engine.project_file import load_project
 
 SITE = (("soil", "allowable_bearing"), ("soil", "friction"), ("soil", "cohesion"), ("soil", "unit_weight"))
 
@@ -129,6 +128,6 @@ def test_the_demo_has_every_site_value(window):
 
 
 def load_project_raw():
-    from engine.resources import resource_path
+    from kernline.engine.resources import resource_path
 
     return load_project(resource_path("demo.kernline")).raw

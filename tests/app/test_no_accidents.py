@@ -4,14 +4,13 @@ a project-wide design value is named in the status bar."""
 
 from __future__ import annotations
 
+from kernline.app.views import fields
+from kernline.app.views.fields import display_text
+from kernline.engine.project_file import load_project
 from PySide6.QtCore import QPoint, QPointF, Qt
 from PySide6.QtGui import QWheelEvent
 from PySide6.QtWidgets import QApplication, QMessageBox
 from window_helpers import field, select_wall, type_into
-
-from app.views import fields
-from app.views.fields import display_text
-from engine.project_file import load_project
 
 
 def test_save_stops_on_an_entry_that_is_not_valid(qtbot, make_window, demo_file, dialogs):

@@ -1,8 +1,7 @@
 """Typing still waiting for its pause is applied before a save (no lost keystrokes)."""
 
+from kernline.engine.project_file import load_project
 from PySide6.QtWidgets import QFileDialog
-
-from engine.project_file import load_project
 
 
 def test_save_applies_typing_that_has_not_paused(window, tmp_path, monkeypatch):

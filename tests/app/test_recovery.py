@@ -10,10 +10,9 @@ import sys
 from pathlib import Path
 
 import pytest
+from kernline.app import recovery
+from kernline.engine.project_file import load_project
 from window_helpers import field, type_into
-
-from app import recovery
-from engine.project_file import load_project
 
 ROOT = Path(__file__).resolve().parents[2]
 
@@ -22,7 +21,7 @@ ROOT = Path(__file__).resolve().parents[2]
 OTHER_PROCESS = """
 import json, sys
 from pathlib import Path
-from app.recovery import RecoverySlot
+from kernline.app.recovery import RecoverySlot
 folder, document, raw_file = sys.argv[1:4]
 slot = RecoverySlot(Path(folder), Path(document), "0123456789abcdef0123456789abcdef")
 slot.acquire()
@@ -293,9 +292,8 @@ def test_the_record_name_hashes_the_absolute_path(tmp_path, monkeypatch):
 
 
 def test_the_dialog_restores_the_ticked_and_discards_the_rest(qtbot, tmp_path):
+    from kernline.app.views.recovery_dialog import RecoveryDialog
     from PySide6.QtCore import Qt
-
-    from app.views.recovery_dialog import RecoveryDialog
 
     orphans = [
         recovery.Orphan(

@@ -10,14 +10,13 @@ import re
 from dataclasses import dataclass
 from typing import Any
 
+import kernline.engine.registry as registry
 import numpy as np
 import pytest
+from kernline.engine.registry import Check, CheckArrays, Family, register_check
+from kernline.engine.stability import _case_layout, table_checks
 from PySide6.QtWidgets import QAbstractButton, QLabel
 from window_helpers import field
-
-import engine.registry as registry
-from engine.registry import Check, CheckArrays, Family, register_check
-from engine.stability import _case_layout, table_checks
 
 CLEARANCE_RATIO = 0.5  # below 1.0: the test check fails at every size
 

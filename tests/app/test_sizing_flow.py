@@ -4,11 +4,10 @@ from __future__ import annotations
 
 import numpy as np
 import pytest
+from kernline.app.runner import SizingRunner
+from kernline.engine.sizing import size_footing
 from PySide6.QtCore import QPoint, QPointF, Qt
 from window_helpers import select_wall
-
-from app.runner import SizingRunner
-from engine.sizing import size_footing
 
 
 def _size_current(qtbot, window):

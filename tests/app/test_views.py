@@ -3,13 +3,12 @@
 from __future__ import annotations
 
 import numpy as np
+from kernline.engine import CAUTION
+from kernline.engine.model import Check
+from kernline.engine.schedule import schedule_csv
 from PySide6.QtCore import Qt
 from PySide6.QtWidgets import QApplication
 from window_helpers import engine_pressure_psf, select_wall
-
-from engine import CAUTION
-from engine.model import Check
-from engine.schedule import schedule_csv
 
 
 def test_the_picker_shows_any_case_in_the_pressure_plot(window):

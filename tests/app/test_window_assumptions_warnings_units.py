@@ -7,10 +7,7 @@ from __future__ import annotations
 import json
 
 import pytest
-from PySide6.QtWidgets import QApplication
-from window_helpers import demo_raw, field, select_wall, type_into
-
-from app.views.fields import (
+from kernline.app.views.fields import (
     EXTENSION_FIELDS,
     FOOTING_FIELDS,
     OPTION_FIELDS,
@@ -22,7 +19,9 @@ from app.views.fields import (
     to_raw,
     unit_label,
 )
-from engine.units import Kind, parse_quantity
+from kernline.engine.units import Kind, parse_quantity
+from PySide6.QtWidgets import QApplication
+from window_helpers import demo_raw, field, select_wall, type_into
 
 QUANTITY_SPECS = [
     s

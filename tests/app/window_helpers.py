@@ -6,12 +6,11 @@ import copy
 import json
 from typing import Any
 
+from kernline.engine.project_file import parse_project
+from kernline.engine.resources import resource_path
+from kernline.engine.results import check_wall
+from kernline.engine.soil_pressure import pressure_diagram
 from PySide6.QtCore import Qt
-
-from engine.project_file import parse_project
-from engine.resources import resource_path
-from engine.results import check_wall
-from engine.soil_pressure import pressure_diagram
 
 PSF = 4.4482216152605 / 0.3048**2  # Pa per psf (exact definitions, NIST SP 811)
 INCH = 0.0254

@@ -20,11 +20,11 @@ import time
 from dataclasses import replace
 from pathlib import Path
 
-from engine.model import INCH, SizingBounds
-from engine.project_file import load_project, parse_project
-from engine.resources import resource_path
-from engine.results import check_wall
-from engine.sizing import candidate_grid, size_footing
+from kernline.engine.model import INCH, SizingBounds
+from kernline.engine.project_file import load_project, parse_project
+from kernline.engine.resources import resource_path
+from kernline.engine.results import check_wall
+from kernline.engine.sizing import candidate_grid, size_footing
 
 
 def median_time(fn, repeat: int) -> tuple[float, float]:
@@ -77,7 +77,7 @@ def main() -> None:
         runs = []
         for _ in range(10):
             t = time.perf_counter()
-            subprocess.run([sys.executable, "-m", "app.cli", "check", demo], capture_output=True, check=False)
+            subprocess.run([sys.executable, "-m", "kernline.app.cli", "check", demo], capture_output=True, check=False)
             runs.append(time.perf_counter() - t)
         print(
             f"kernline check demo, start to exit: median {statistics.median(runs):.3f} s, min {min(runs):.3f} s (target < 0.35 s)"
@@ -94,7 +94,7 @@ def main() -> None:
         path = Path(tmp) / "thousand.kernline"
         path.write_text(json.dumps(raw), encoding="utf-8")
         t = time.perf_counter()
-        subprocess.run([sys.executable, "-m", "app.cli", "size", str(path)], capture_output=True, check=False)
+        subprocess.run([sys.executable, "-m", "kernline.app.cli", "size", str(path)], capture_output=True, check=False)
         elapsed = time.perf_counter() - t
         print(
             f"kernline size, 1,000 walls (demo walls repeated, grids of 1,800-3,145 candidates): {elapsed:.2f} s ({elapsed:.2f} ms per wall)"

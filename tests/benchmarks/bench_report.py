@@ -25,8 +25,8 @@ import time
 from pathlib import Path
 from typing import Any
 
-from engine.project_file import dumps_project, load_project, parse_project
-from engine.resources import resource_path
+from kernline.engine.project_file import dumps_project, load_project, parse_project
+from kernline.engine.resources import resource_path
 
 WALLS = 20
 
@@ -61,14 +61,14 @@ def main() -> None:
         for _ in range(runs):
             t = time.perf_counter()
             subprocess.run(
-                [sys.executable, "-m", "app.cli", "report", str(project_file), "-o", str(out)],
+                [sys.executable, "-m", "kernline.app.cli", "report", str(project_file), "-o", str(out)],
                 check=True,
                 env=env,
                 capture_output=True,
             )
             fresh.append(time.perf_counter() - t)
 
-        from engine.report import write_report
+        from kernline.engine.report import write_report
 
         project = twenty_wall_project()
         write_report(project, out)  # warm up: imports, font registration

@@ -35,7 +35,7 @@ os.environ.setdefault("QT_QPA_PLATFORM", "offscreen")
 sys.path.insert(0, {root!r})
 from PySide6.QtCore import QSettings
 from PySide6.QtWidgets import QApplication
-from app.main_window import MainWindow
+from kernline.app.main_window import MainWindow
 app = QApplication(sys.argv[:1])
 tmp = tempfile.mkdtemp()
 window = MainWindow(settings=QSettings(str(Path(tmp) / "s.ini"), QSettings.Format.IniFormat), recovery_dir=Path(tmp) / "r")
@@ -74,10 +74,9 @@ def cold_starts(count: int) -> list[float]:
 
 def edit_latency(edits: int) -> tuple[list[float], list[float]]:
     sys.path.insert(0, str(ROOT))
+    from kernline.app.main_window import MainWindow
     from PySide6.QtCore import QSettings
     from PySide6.QtWidgets import QApplication
-
-    from app.main_window import MainWindow
 
     app = QApplication.instance() or QApplication(sys.argv[:1])
     tmp = tempfile.mkdtemp()

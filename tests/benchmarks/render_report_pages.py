@@ -18,9 +18,9 @@ import sys
 import tempfile
 from pathlib import Path
 
-from engine.project_file import load_project
-from engine.report import render_report
-from engine.resources import resource_path
+from kernline.engine.project_file import load_project
+from kernline.engine.report import render_report
+from kernline.engine.resources import resource_path
 
 ROOT = Path(__file__).resolve().parents[2]
 OUT = ROOT / "resources" / "report"

@@ -39,7 +39,7 @@ def main(argv: list[str]) -> int:
     out = Path(argv[1]) if len(argv) > 1 else ROOT / "resources" / "screenshots"
     out.mkdir(parents=True, exist_ok=True)
     app = QApplication.instance() or QApplication(sys.argv[:1])
-    from app.main_window import MainWindow
+    from kernline.app.main_window import MainWindow
 
     with tempfile.TemporaryDirectory() as tmp:
         settings = QSettings(str(Path(tmp) / "settings.ini"), QSettings.Format.IniFormat)
@@ -77,7 +77,7 @@ def main(argv: list[str]) -> int:
         window.close()
 
         # the welcome panel of a plain start, with two recent projects (copies of the demo)
-        from engine.resources import resource_path
+        from kernline.engine.resources import resource_path
 
         recent = []
         for name in ("clinic.kernline", "warehouse-annex.kernline"):

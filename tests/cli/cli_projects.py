@@ -9,12 +9,14 @@ import sys
 from pathlib import Path
 from typing import Any
 
-from engine.resources import resource_path
+from kernline.engine.resources import resource_path
 
 
 def run(*args: str, cwd: Path | None = None, timeout: float = 120) -> subprocess.CompletedProcess[str]:
     """``kernline ARGS`` in a new interpreter (the installed entry point's module)."""
-    return subprocess.run([sys.executable, "-m", "app.cli", *args], capture_output=True, text=True, timeout=timeout, cwd=cwd)
+    return subprocess.run(
+        [sys.executable, "-m", "kernline.app.cli", *args], capture_output=True, text=True, timeout=timeout, cwd=cwd
+    )
 
 
 def demo_raw() -> dict[str, Any]:

@@ -5,15 +5,14 @@ import subprocess
 import sys
 
 import pytest
-
-from app import cli
-from engine.resources import resource_path
+from kernline.app import cli
+from kernline.engine.resources import resource_path
 
 DEMO = str(resource_path("demo.kernline"))
 
 
 def run(*args: str) -> subprocess.CompletedProcess:
-    return subprocess.run([sys.executable, "-m", "app.cli", *args], capture_output=True, text=True, timeout=120)
+    return subprocess.run([sys.executable, "-m", "kernline.app.cli", *args], capture_output=True, text=True, timeout=120)
 
 
 def test_check_demo_prints_table_and_exits_1_for_the_failing_wall(capsys):
@@ -82,7 +81,7 @@ def test_size_json_carries_the_sizing_record(capsys):
 def test_headless_commands_do_not_import_qt(tmp_path):
     """check and size must run where Qt is absent: they import no PySide6 or pyqtgraph."""
     code = (
-        "import sys; from app import cli; "
+        "import sys; from kernline.app import cli; "
         f"cli.main(['check', {DEMO!r}]); cli.main(['size', {DEMO!r}]); "
         "bad = [m for m in sys.modules if m.startswith(('PySide6', 'pyqtgraph', 'reportlab'))]; "
         "print('QT', bad); sys.exit(1 if bad else 0)"

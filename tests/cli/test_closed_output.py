@@ -10,8 +10,7 @@ from pathlib import Path
 
 import pytest
 from cli_projects import demo_project, demo_raw, many_walls, write_project
-
-from app import cli
+from kernline.app import cli
 
 
 def quiet(stderr: str) -> bool:
@@ -25,7 +24,7 @@ def run_with_closed_stdout(*args: str) -> subprocess.CompletedProcess[str]:
     os.close(read_end)
     try:
         return subprocess.run(
-            [sys.executable, "-m", "app.cli", *args], stdout=write_end, stderr=subprocess.PIPE, text=True, timeout=120
+            [sys.executable, "-m", "kernline.app.cli", *args], stdout=write_end, stderr=subprocess.PIPE, text=True, timeout=120
         )
     finally:
         os.close(write_end)

@@ -8,8 +8,7 @@ from pathlib import Path
 
 import pytest
 from cli_projects import run
-
-from app import cli
+from kernline.app import cli
 
 COMMANDS = [
     ["check"],

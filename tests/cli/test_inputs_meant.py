@@ -13,7 +13,7 @@ from cli_projects import demo_raw, write_project
 
 
 def kernline(*args: str) -> subprocess.CompletedProcess[str]:
-    return subprocess.run([sys.executable, "-m", "app.cli", *args], capture_output=True, text=True, timeout=120)
+    return subprocess.run([sys.executable, "-m", "kernline.app.cli", *args], capture_output=True, text=True, timeout=120)
 
 
 @pytest.mark.parametrize(

@@ -18,8 +18,7 @@ from collections import Counter
 from pathlib import Path
 
 from cli_projects import demo_raw, many_walls, run, write_project
-
-from engine.file_safety import TEMP_MARK
+from kernline.engine.file_safety import TEMP_MARK
 
 WALLS = 300
 TRIES = 20
@@ -49,7 +48,7 @@ def test_kill_during_size_write_leaves_the_old_or_the_new_document(tmp_path: Pat
         path.write_bytes(old)
         delay = 1.1 * duration * k / (TRIES - 1)
         proc = subprocess.Popen(
-            [sys.executable, "-m", "app.cli", "size", str(path), "--write"],
+            [sys.executable, "-m", "kernline.app.cli", "size", str(path), "--write"],
             stdout=subprocess.DEVNULL,
             stderr=subprocess.DEVNULL,
         )
@@ -80,7 +79,7 @@ def test_kill_in_the_middle_of_the_write_leaves_the_old_document_and_the_next_sa
     code = (
         "import os, signal, sys\n"
         "os.fsync = lambda fd: os.kill(os.getpid(), signal.SIGKILL)\n"
-        "from app import cli\n"
+        "from kernline.app import cli\n"
         "cli.main(['size', sys.argv[1], '--write'])\n"
     )
     killed = subprocess.run([sys.executable, "-c", code, str(path)], capture_output=True, timeout=120)

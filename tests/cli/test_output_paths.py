@@ -10,8 +10,7 @@ from pathlib import Path
 
 import pytest
 from cli_projects import demo_project, run
-
-from app import cli
+from kernline.app import cli
 
 
 @pytest.fixture

@@ -10,9 +10,8 @@ from pathlib import Path
 
 import pytest
 from cli_projects import demo_raw, write_project
-
-from app import cli
-from engine.schedule import guard_cell
+from kernline.app import cli
+from kernline.engine.schedule import guard_cell
 
 HOSTILE = ['=HYPERLINK("http://example.com","x")', "+1+2", "-2+3", "@SUM(A1:A9)", "\tx", "\rx"]
 

@@ -9,9 +9,8 @@ from pathlib import Path
 
 import pytest
 from cli_projects import demo_project
-
-from app import cli
-from engine.file_safety import TEMP_MARK
+from kernline.app import cli
+from kernline.engine.file_safety import TEMP_MARK
 
 
 @pytest.fixture

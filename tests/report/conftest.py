@@ -3,10 +3,9 @@
 from __future__ import annotations
 
 import pytest
+from kernline.engine.project_file import ProjectDocument, load_project
+from kernline.engine.resources import resource_path
 from report_helpers import RenderedPackage, render
-
-from engine.project_file import ProjectDocument, load_project
-from engine.resources import resource_path
 
 
 @pytest.fixture(scope="session")

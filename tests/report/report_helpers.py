@@ -9,7 +9,7 @@ import re
 from dataclasses import dataclass
 from typing import Any
 
-from engine.project_file import ProjectDocument, parse_project
+from kernline.engine.project_file import ProjectDocument, parse_project
 
 ISSUED = dt.date(2026, 3, 14)
 
@@ -55,7 +55,7 @@ def page_texts(pdf: bytes) -> list[str]:
 
 
 def render(project: Any, **options: Any) -> RenderedPackage:
-    from engine.report import render_report
+    from kernline.engine.report import render_report
 
     options.setdefault("issued", ISSUED)
     pdf = render_report(project, **options)

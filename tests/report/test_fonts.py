@@ -1,7 +1,7 @@
 """The calculation package uses the fonts shipped in resources/, not whatever the machine has."""
 
-from engine.report import FONT_FOLDER, _fonts
-from engine.resources import resource_path
+from kernline.engine.report import FONT_FOLDER, _fonts
+from kernline.engine.resources import resource_path
 
 
 def test_shipped_dejavu_is_found_and_used():

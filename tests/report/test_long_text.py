@@ -9,14 +9,13 @@ import subprocess
 import sys
 from typing import Any
 
+import kernline.engine.report as report
 import pytest
+from kernline.engine.calc_package import INFO_LIMIT, LABEL_LIMIT, brief
+from kernline.engine.project_file import parse_project
+from kernline.engine.report import _break_word, _clip, _fonts, _width, _wrap_plain
+from kernline.engine.resources import resource_path
 from report_helpers import TITLE_BLOCK_START, body, page_texts
-
-import engine.report as report
-from engine.calc_package import INFO_LIMIT, LABEL_LIMIT, brief
-from engine.project_file import parse_project
-from engine.report import _break_word, _clip, _fonts, _width, _wrap_plain
-from engine.resources import resource_path
 
 LONG = 50_000
 
@@ -111,7 +110,7 @@ def test_measuring_grows_linearly_with_the_length_of_the_text(monkeypatch: pytes
 
 def test_table_cell_is_cut_to_its_line_limit() -> None:
     """Whatever reaches a table cell, its row stays shorter than a sheet: the text ends in an ellipsis."""
-    from engine.report import _CELL_MAX_LINES, GridSpec, _Builder
+    from kernline.engine.report import _CELL_MAX_LINES, GridSpec, _Builder
 
     builder = _Builder(_fonts())
     spec = GridSpec((90.0,), "L", 7.0, 8.5)
@@ -134,7 +133,7 @@ def long_label_package(tmp_path_factory: pytest.TempPathFactory) -> list[str]:
     name, written by the command line (which must finish well inside the timeout)."""
     folder = tmp_path_factory.mktemp("long")
     project = folder / "x.kernline"
-    command = [sys.executable, "-m", "app.cli"]
+    command = [sys.executable, "-m", "kernline.app.cli"]
     subprocess.run([*command, "demo", "--save", str(project)], check=True, capture_output=True, timeout=60)
     raw = json.loads(project.read_text(encoding="utf-8"))
     raw["walls"][0]["label"] = "W" * LONG

@@ -165,7 +165,7 @@ def test_a_coarse_eccentricity_would_be_caught() -> None:
 
 def test_uplift_point_load_arrow_points_up(demo_document) -> None:
     """E4's chord uplift (E −1.20 kip) is drawn pointing up, its compression pointing down (review item 4)."""
-    from engine.calc_package import Arrow, _Fmt, elevation_drawing
+    from kernline.engine.calc_package import Arrow, _Fmt, elevation_drawing
 
     wall = next(w for w in demo_document.project.walls if w.id == "E4")
     drawing = elevation_drawing(wall, _Fmt("US"), 372.0, 236.0)

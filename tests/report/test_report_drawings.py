@@ -11,8 +11,7 @@ from __future__ import annotations
 from collections.abc import Iterator
 
 import pytest
-
-from engine.calc_package import (
+from kernline.engine.calc_package import (
     CONTENT_WIDTH,
     Arrow,
     Dimension,
@@ -27,9 +26,9 @@ from engine.calc_package import (
     pressure_drawing,
     section_drawing,
 )
-from engine.model import Check
-from engine.results import check_wall
-from engine.soil_pressure import pressure_diagram
+from kernline.engine.model import Check
+from kernline.engine.results import check_wall
+from kernline.engine.soil_pressure import pressure_diagram
 
 WALLS = ("N1", "S2", "C3", "E4")
 Box = tuple[float, float, float, float]  # x0, y0, x1, y1
@@ -38,9 +37,8 @@ Segment = tuple[float, float, float, float]
 
 def _label_box(label: Label) -> Box:
     """The label's box as the renderer draws it (the package's font, subscripts at their size)."""
+    from kernline.engine.report import _SUB_SCALE, _fonts
     from reportlab.pdfbase.pdfmetrics import stringWidth
-
-    from engine.report import _SUB_SCALE, _fonts
 
     fonts = _fonts()
     font = fonts.bold if label.bold else fonts.regular

@@ -14,13 +14,12 @@ import sys
 from pathlib import Path
 
 import pytest
+from kernline.engine.errors import InputError
+from kernline.engine.model import Check
+from kernline.engine.report import render_report, write_report
+from kernline.engine.results import check_wall
+from kernline.engine.units import Kind, format_quantity
 from report_helpers import RenderedPackage, page_texts, render, variant
-
-from engine.errors import InputError
-from engine.model import Check
-from engine.report import render_report, write_report
-from engine.results import check_wall
-from engine.units import Kind, format_quantity
 
 HOSTILE = '<b>&amp; "x" </para>'
 
@@ -202,7 +201,7 @@ def test_soil_report_is_named_or_left_blank(demo_document) -> None:
 
 def test_without_dejavu_the_builtin_font_is_used(demo_document, monkeypatch) -> None:
     """With no DejaVu font the package still renders, with ASCII stand-ins for symbols Helvetica lacks."""
-    import engine.report as report
+    import kernline.engine.report as report
 
     monkeypatch.setattr(report, "_fonts", lambda: report._Fonts("Helvetica", "Helvetica-Bold", False))
     package = render(demo_document, wall_ids=["N1"])
@@ -213,7 +212,7 @@ def test_without_dejavu_the_builtin_font_is_used(demo_document, monkeypatch) -> 
 
 def test_missing_font_folder_falls_back_to_helvetica() -> None:
     """Looking for DejaVu in a folder without it gives the built-in font, not an error."""
-    from engine.report import _fonts
+    from kernline.engine.report import _fonts
 
     fonts = _fonts("/nonexistent-folder")
     assert (fonts.regular, fonts.unicode) == ("Helvetica", False)
@@ -240,7 +239,7 @@ def test_write_report_refuses_bad_paths(demo_document, tmp_path: Path) -> None:
 
 def test_importing_the_package_modules_does_not_import_reportlab() -> None:
     """engine.report imports reportlab lazily, and engine.calc_package never does (fast command line)."""
-    code = "import sys, engine.calc_package, engine.report; print('reportlab' in sys.modules)"
+    code = "import sys, kernline.engine.calc_package, kernline.engine.report; print('reportlab' in sys.modules)"
     out = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, check=True)
     assert out.stdout.strip() == "False"
     source = Path(__file__).resolve().parents[2] / "engine" / "calc_package.py"
@@ -249,13 +248,13 @@ def test_importing_the_package_modules_does_not_import_reportlab() -> None:
 
 def test_command_line_report(tmp_path: Path) -> None:
     """kernline report FILE -o OUT --walls C3 writes the package of that wall; a bad id exits 2 with a message."""
-    from engine.resources import resource_path
+    from kernline.engine.resources import resource_path
 
     demo = resource_path("demo.kernline")
     out = tmp_path / "c3.pdf"
     env = dict(os.environ, QT_QPA_PLATFORM="offscreen")
     done = subprocess.run(
-        [sys.executable, "-m", "app.cli", "report", str(demo), "-o", str(out), "--walls", "C3"],
+        [sys.executable, "-m", "kernline.app.cli", "report", str(demo), "-o", str(out), "--walls", "C3"],
         capture_output=True,
         text=True,
         env=env,
@@ -265,7 +264,7 @@ def test_command_line_report(tmp_path: Path) -> None:
     assert any("Sheet subject Wall C3 " in t for t in texts)
     assert not any("Sheet subject Wall N1 " in t for t in texts)
     bad = subprocess.run(
-        [sys.executable, "-m", "app.cli", "report", str(demo), "-o", str(out), "--walls", "Q7"],
+        [sys.executable, "-m", "kernline.app.cli", "report", str(demo), "-o", str(out), "--walls", "Q7"],
         capture_output=True,
         text=True,
         env=env,

@@ -13,13 +13,12 @@ import math
 import re
 
 import pytest
+from kernline.engine.model import Check
+from kernline.engine.results import check_wall
+from kernline.engine.schedule import schedule_rows
+from kernline.engine.sizing import size_footing
+from kernline.engine.units import Kind, format_length, format_quantity, to_display
 from report_helpers import RenderedPackage
-
-from engine.model import Check
-from engine.results import check_wall
-from engine.schedule import schedule_rows
-from engine.sizing import size_footing
-from engine.units import Kind, format_length, format_quantity, to_display
 
 US = "US"
 
@@ -73,7 +72,7 @@ def shown(result) -> str:
 
 def test_ratio_text_never_contradicts_the_verdict() -> None:
     """A failing 0.997 is not printed as 1.00; a passing 1.004 is (rule of engine.calc_package.ratio_text)."""
-    from engine.calc_package import ratio_text
+    from kernline.engine.calc_package import ratio_text
 
     assert ratio_text(0.997, 1.0, False) == "0.997"
     assert ratio_text(0.9996, 1.0, False) == "0.9996"

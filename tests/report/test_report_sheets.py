@@ -13,10 +13,9 @@ import subprocess
 from pathlib import Path
 
 import pytest
+from kernline.engine import CAUTION, __version__
+from kernline.engine.report import BAND_HEIGHT, MARGIN_BOTTOM, SEAL_SIZE
 from report_helpers import ISSUED, RenderedPackage, normalize
-
-from engine import CAUTION, __version__
-from engine.report import BAND_HEIGHT, MARGIN_BOTTOM, SEAL_SIZE
 
 
 def test_every_page_has_its_title_block(demo: RenderedPackage, demo_document) -> None:
@@ -88,7 +87,7 @@ def test_cautions_page_is_present(demo: RenderedPackage) -> None:
 
 def test_design_basis_lists_the_combinations_and_soil_source(demo: RenderedPackage, demo_document) -> None:
     """The design basis lists every combination in force, the S_DS, and the report the soil values come from."""
-    from engine.combinations import combinations_of
+    from kernline.engine.combinations import combinations_of
 
     basis = demo.text_of("Design basis")
     for combo in combinations_of(demo_document.project.criteria):

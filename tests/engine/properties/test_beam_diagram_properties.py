@@ -13,8 +13,7 @@ import numpy as np
 import pytest
 from hypothesis import assume, given, settings
 from hypothesis import strategies as st
-
-from engine.concrete.longitudinal import (
+from kernline.engine.concrete.longitudinal import (
     CANNOT_SPREAD,
     BeamLineLoad,
     BeamPointLoad,
@@ -23,7 +22,7 @@ from engine.concrete.longitudinal import (
     design_longitudinal,
     rigid_soil_stations,
 )
-from engine.concrete.transverse import Materials
+from kernline.engine.concrete.transverse import Materials
 
 FAST = settings(max_examples=80, deadline=None)
 

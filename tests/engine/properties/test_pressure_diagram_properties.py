@@ -15,9 +15,8 @@ import numpy as np
 import pytest
 from hypothesis import given, settings
 from hypothesis import strategies as st
-
-from engine.bearing import bearing_ratio
-from engine.soil_pressure import pressure_at, pressure_diagram, pressure_distribution
+from kernline.engine.bearing import bearing_ratio
+from kernline.engine.soil_pressure import pressure_at, pressure_diagram, pressure_distribution
 
 FAST = settings(max_examples=100, deadline=None)
 

@@ -13,11 +13,10 @@ import dataclasses
 import numpy as np
 from hypothesis import given, settings
 from hypothesis import strategies as st
-
-from engine.errors import InputError
-from engine.project_file import parse_project
-from engine.results import check_wall
-from engine.sizing import size_footing
+from kernline.engine.errors import InputError
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
+from kernline.engine.sizing import size_footing
 
 FAST = settings(max_examples=60, deadline=None)
 

@@ -12,10 +12,9 @@ import math
 import pytest
 from hypothesis import given, settings
 from hypothesis import strategies as st
-
-from engine.model import ALL_CHECKS
-from engine.project_file import parse_project
-from engine.results import check_wall
+from kernline.engine.model import ALL_CHECKS
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
 
 FT = 0.3048
 LBF = 4.4482216152605

@@ -17,10 +17,9 @@ import math
 import pytest
 from hypothesis import given, settings
 from hypothesis import strategies as st
-
-from engine.model import ALL_CHECKS, Check, LineLoad, LoadCase
-from engine.project_file import parse_project
-from engine.results import check_wall
+from kernline.engine.model import ALL_CHECKS, Check, LineLoad, LoadCase
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
 
 FAST = settings(max_examples=60, deadline=None)
 FT = 0.3048

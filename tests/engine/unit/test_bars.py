@@ -7,8 +7,7 @@ tests/engine/verification/test_aci318_19_wall_footing_rules.py).
 from __future__ import annotations
 
 import pytest
-
-from engine.concrete.bars import (
+from kernline.engine.concrete.bars import (
     BARS,
     bar,
     counted_text,
@@ -19,7 +18,7 @@ from engine.concrete.bars import (
     practical_spacings,
     spaced_text,
 )
-from engine.errors import InputError
+from kernline.engine.errors import InputError
 
 INCH = 0.0254
 

@@ -17,10 +17,9 @@ from dataclasses import replace
 from pathlib import Path
 
 import pytest
-
-from engine.project_file import parse_project
-from engine.results import check_wall
-from engine.sizing import candidate_values, size_footing, sized_footing_values, sized_wall
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
+from kernline.engine.sizing import candidate_values, size_footing, sized_footing_values, sized_wall
 
 INCH = 0.0254
 FOOT = 0.3048
@@ -309,7 +308,7 @@ def test_size_write_stores_the_extensions(tmp_path):
     path = tmp_path / "overturning.kernline"
     path.write_text(json.dumps(_overturning_raw(), indent=2) + "\n", encoding="utf-8")
     done = subprocess.run(
-        [sys.executable, "-m", "app.cli", "size", str(path), "--write"],
+        [sys.executable, "-m", "kernline.app.cli", "size", str(path), "--write"],
         capture_output=True,
         text=True,
         timeout=120,

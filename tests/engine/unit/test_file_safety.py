@@ -11,9 +11,8 @@ from collections.abc import Iterator
 from pathlib import Path
 
 import pytest
-
-from engine.errors import InputError
-from engine.file_safety import (
+from kernline.engine.errors import InputError
+from kernline.engine.file_safety import (
     TEMP_MARK,
     FilePathError,
     atomic_write_bytes,

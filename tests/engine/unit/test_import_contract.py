@@ -36,13 +36,14 @@ class Block(importlib.abc.MetaPathFinder):
         if name.split('.')[0] in {blocked!r}:
             raise ImportError('blocked for the test: ' + name)
 sys.meta_path.insert(0, Block())
-import pkgutil, importlib, engine
-for m in pkgutil.iter_modules(engine.__path__):
-    importlib.import_module('engine.' + m.name)
-from engine.project_file import load_project
-from engine.resources import resource_path
-from engine.results import check_project
-from engine.sizing import size_footing
+import pkgutil, importlib
+import kernline.engine as engine
+for m in pkgutil.walk_packages(engine.__path__, 'kernline.engine.'):
+    importlib.import_module(m.name)
+from kernline.engine.project_file import load_project
+from kernline.engine.resources import resource_path
+from kernline.engine.results import check_project
+from kernline.engine.sizing import size_footing
 doc = load_project(resource_path('demo.kernline'))
 check_project(doc.project)
 [size_footing(doc.project, w) for w in doc.project.walls]

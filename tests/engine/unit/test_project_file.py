@@ -5,12 +5,11 @@ import json
 import os
 
 import pytest
-
-from engine import project_file
-from engine.errors import FormatVersionError, InputError
-from engine.model import BearingBasis, LateralLoad, LineLoad, LoadCase, Method, PointLoad
-from engine.project_file import load_project, loads_project, parse_project, save_project, with_footing_sizes
-from engine.resources import resource_path
+from kernline.engine import project_file
+from kernline.engine.errors import FormatVersionError, InputError
+from kernline.engine.model import BearingBasis, LateralLoad, LineLoad, LoadCase, Method, PointLoad
+from kernline.engine.project_file import load_project, loads_project, parse_project, save_project, with_footing_sizes
+from kernline.engine.resources import resource_path
 
 INCH, FOOT = 0.0254, 0.3048
 

@@ -7,12 +7,11 @@ import copy
 import json
 
 import pytest
-
-from engine.errors import InputError
-from engine.input_warnings import input_warnings
-from engine.project_file import dumps_project, loads_project, parse_project
-from engine.resources import resource_path
-from engine.results import check_project, results_json
+from kernline.engine.errors import InputError
+from kernline.engine.input_warnings import input_warnings
+from kernline.engine.project_file import dumps_project, loads_project, parse_project
+from kernline.engine.resources import resource_path
+from kernline.engine.results import check_project, results_json
 
 INCH, FOOT, LBF = 0.0254, 0.3048, 4.4482216152605
 

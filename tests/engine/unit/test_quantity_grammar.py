@@ -13,10 +13,9 @@ import json
 import pytest
 from hypothesis import given, settings
 from hypothesis import strategies as st
-
-from engine.errors import InputError
-from engine.project_file import parse_project
-from engine.units import Kind, parse_quantity, stored_text
+from kernline.engine.errors import InputError
+from kernline.engine.project_file import parse_project
+from kernline.engine.units import Kind, parse_quantity, stored_text
 
 INCH, FOOT, LBF = 0.0254, 0.3048, 4.4482216152605
 KIP = 1000 * LBF

@@ -4,12 +4,11 @@ from dataclasses import replace
 
 import numpy as np
 import pytest
-
-from engine.model import ALL_CHECKS, INCH, Check
-from engine.project_file import parse_project
-from engine.results import check_wall
-from engine.sizing import candidate_values, size_footing
-from engine.stability import case_table, evaluate
+from kernline.engine.model import ALL_CHECKS, INCH, Check
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
+from kernline.engine.sizing import candidate_values, size_footing
+from kernline.engine.stability import case_table, evaluate
 
 FOOT = 0.3048
 
@@ -106,7 +105,7 @@ def test_infeasible_sizing_says_which_check_fails_and_what_helps():
 
 def test_an_absurd_grid_is_refused_when_the_file_is_read():
     """Steps far too fine for the range are refused with the field path, before any memory is taken."""
-    from engine.errors import InputError
+    from kernline.engine.errors import InputError
 
     with pytest.raises(InputError) as err:
         project(sizing={"width_max": "900 m", "width_step": "1 mm"})

@@ -1,12 +1,11 @@
 """Design-case expansion and load bookkeeping (engine.combinations, engine.loads, engine.stability)."""
 
 import pytest
-
-from engine.combinations import asce7_16_asd, design_cases, service_fs
-from engine.loads import self_weight, vertical_resultants
-from engine.model import Check, LoadCase
-from engine.project_file import parse_project
-from engine.results import check_wall
+from kernline.engine.combinations import asce7_16_asd, design_cases, service_fs
+from kernline.engine.loads import self_weight, vertical_resultants
+from kernline.engine.model import Check, LoadCase
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
 
 FOOT, INCH = 0.3048, 0.0254
 KIP = 4448.2216152605

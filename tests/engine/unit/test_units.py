@@ -3,10 +3,9 @@
 import math
 
 import pytest
-
-from engine import units
-from engine.errors import InputError
-from engine.units import Kind, format_length, format_quantity, parse_quantity
+from kernline.engine import units
+from kernline.engine.errors import InputError
+from kernline.engine.units import Kind, format_length, format_quantity, parse_quantity
 
 # Exact conversion factors: NIST Special Publication 811 (2008), appendix B.8/B.9:
 # 1 in = 0.0254 m, 1 ft = 0.3048 m, 1 lbf = 4.448 221 615 260 5 N.

@@ -20,11 +20,10 @@ from __future__ import annotations
 
 import numpy as np
 import pytest
-
-from engine.codes import asce7_16_lrfd
-from engine.concrete.bars import BARS, practical_bars, practical_spacings
-from engine.concrete.plain import plain_permitted
-from engine.concrete.transverse import (
+from kernline.engine.codes import asce7_16_lrfd
+from kernline.engine.concrete.bars import BARS, practical_bars, practical_spacings
+from kernline.engine.concrete.plain import plain_permitted
+from kernline.engine.concrete.transverse import (
     Construction,
     Materials,
     design_transverse,
@@ -34,8 +33,8 @@ from engine.concrete.transverse import (
     minimum_steel,
     one_way_shear_strength,
 )
-from engine.model import LoadCase
-from engine.registry import Check, Family, code_by_id
+from kernline.engine.model import LoadCase
+from kernline.engine.registry import Check, Family, code_by_id
 
 INCH = 0.0254
 FOOT = 0.3048

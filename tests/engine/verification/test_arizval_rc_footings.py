@@ -13,9 +13,8 @@ dimension (``width`` = 1 m).
 from __future__ import annotations
 
 import pytest
-
-from engine.bearing import bearing_ratio
-from engine.soil_pressure import pressure_distribution
+from kernline.engine.bearing import bearing_ratio
+from kernline.engine.soil_pressure import pressure_distribution
 
 
 def _strip():

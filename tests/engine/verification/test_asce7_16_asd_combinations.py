@@ -16,11 +16,10 @@ including combinations 1 to 3 and the Lr and R branches of 4 and 6, is derived t
 from __future__ import annotations
 
 import pytest
-
-from engine.combinations import asce7_16_asd
-from engine.model import LoadCase
-from engine.project_file import parse_project
-from engine.results import check_wall
+from kernline.engine.combinations import asce7_16_asd
+from kernline.engine.model import LoadCase
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
 
 KIP = 4448.2216152605  # N
 

@@ -27,10 +27,9 @@ E = 6 (lateral), S_DS = 1.0. All arithmetic on the R2 combinations (status D):
 from __future__ import annotations
 
 import pytest
-
-from engine.errors import InputError
-from engine.project_file import parse_project
-from engine.results import check_wall
+from kernline.engine.errors import InputError
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
 
 KIP = 4448.2216152605  # N (NIST SP 811)
 

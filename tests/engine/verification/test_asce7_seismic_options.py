@@ -46,10 +46,9 @@ ratio 1.165. With r = 0.25, e = 3.7854 ft > L/6 = 3.333 ft, so q_max = 2 x 23.3 
 from __future__ import annotations
 
 import pytest
-
-from engine.errors import InputError
-from engine.project_file import parse_project
-from engine.results import check_wall
+from kernline.engine.errors import InputError
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
 
 LBF = 4.4482216152605  # N (NIST SP 811)
 KIP = 1000.0 * LBF

@@ -10,8 +10,7 @@ docs/verification.md, case 2): Q = 100, B = 10, L = 1, e = 3 gives 33.33.
 from __future__ import annotations
 
 import pytest
-
-from engine.soil_pressure import pressure_distribution
+from kernline.engine.soil_pressure import pressure_distribution
 
 
 def _identity_case():

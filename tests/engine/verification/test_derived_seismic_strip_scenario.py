@@ -19,10 +19,9 @@ overturning reduction (x 0.75 on M) are outside the contract.
 from __future__ import annotations
 
 import pytest
-
-from engine.model import Check
-from engine.project_file import parse_project
-from engine.results import check_wall
+from kernline.engine.model import Check
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
 
 FOOT = 0.3048
 KIP = 4448.2216152605  # N

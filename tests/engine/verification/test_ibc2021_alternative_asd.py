@@ -30,10 +30,9 @@ W = 8 (lateral), E = 6 (lateral). Every V and H is arithmetic on the M equations
 from __future__ import annotations
 
 import pytest
-
-from engine.errors import InputError
-from engine.project_file import parse_project
-from engine.results import check_wall
+from kernline.engine.errors import InputError
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
 
 LBF = 4.4482216152605  # N (NIST SP 811)
 KIP = 1000.0 * LBF

@@ -43,12 +43,11 @@ from __future__ import annotations
 
 import numpy as np
 import pytest
-
-from engine.checks import EMBEDMENT
-from engine.errors import InputError
-from engine.project_file import parse_project
-from engine.results import check_wall
-from engine.sizing import size_footing
+from kernline.engine.checks import EMBEDMENT
+from kernline.engine.errors import InputError
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
+from kernline.engine.sizing import size_footing
 
 INCH = 0.0254
 FOOT = 0.3048

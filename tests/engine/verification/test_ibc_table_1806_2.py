@@ -17,10 +17,9 @@ load, R2). Check values (all D; docs/verification.md, case 11):
 from __future__ import annotations
 
 import pytest
-
-from engine.project_file import parse_project
-from engine.results import check_wall
-from engine.sliding import cohesion_resistance, friction_resistance, passive_resistance
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
+from kernline.engine.sliding import cohesion_resistance, friction_resistance, passive_resistance
 
 FOOT = 0.3048
 LBF = 4.4482216152605  # N

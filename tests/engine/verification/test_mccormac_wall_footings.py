@@ -21,10 +21,9 @@ q_u = 3.04 ksf, f'c = 3000 psi, checked as plain concrete.
 from __future__ import annotations
 
 import pytest
-
-from engine.codes.asce7_16_lrfd import combinations
-from engine.concrete.plain import design_plain
-from engine.concrete.transverse import (
+from kernline.engine.codes.asce7_16_lrfd import combinations
+from kernline.engine.concrete.plain import design_plain
+from kernline.engine.concrete.transverse import (
     Construction,
     Materials,
     design_transverse,
@@ -32,8 +31,8 @@ from engine.concrete.transverse import (
     one_way_shear_strength,
     steel_required,
 )
-from engine.model import LoadCase
-from engine.registry import Check, Family
+from kernline.engine.model import LoadCase
+from kernline.engine.registry import Check, Family
 
 INCH = 0.0254
 FOOT = 0.3048

@@ -20,10 +20,9 @@ derived 0.6D extension ("0.6D + W").
 from __future__ import annotations
 
 import pytest
-
-from engine.model import Check
-from engine.project_file import parse_project
-from engine.results import check_wall
+from kernline.engine.model import Check
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
 
 FOOT = 0.3048
 KIP = 4448.2216152605  # N (exact: 1 lbf = 4.4482216152605 N, NIST SP 811)

@@ -19,9 +19,8 @@ it a triangle of length 3(L/2 - e) with q_max = 2P / (3B(L/2 - e)) (R; docs/veri
 from __future__ import annotations
 
 import pytest
-
-from engine.bearing import bearing_ratio
-from engine.soil_pressure import pressure_diagram, pressure_distribution
+from kernline.engine.bearing import bearing_ratio
+from kernline.engine.soil_pressure import pressure_diagram, pressure_distribution
 
 FOOT = 0.3048
 KIP = 4448.2216152605  # N

@@ -14,9 +14,8 @@ W at 9 ft above the top of a 1 ft footing (arm 10 ft) sized to put e where wante
 from __future__ import annotations
 
 import pytest
-
-from engine.project_file import parse_project
-from engine.results import check_wall
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
 
 FOOT = 0.3048
 KIP = 4448.2216152605  # N

@@ -16,9 +16,8 @@ Sources (the SEAINT mail list's public archive, seaintarchive.org; docs/verifica
 from __future__ import annotations
 
 import pytest
-
-from engine.sliding import friction_resistance, passive_resistance, sliding_ratio
-from engine.soil_pressure import pressure_distribution
+from kernline.engine.sliding import friction_resistance, passive_resistance, sliding_ratio
+from kernline.engine.soil_pressure import pressure_distribution
 
 FOOT = 0.3048
 LBF = 4.4482216152605  # N

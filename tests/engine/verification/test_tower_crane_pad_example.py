@@ -16,10 +16,9 @@ combination applies the source's unfactored numbers.
 from __future__ import annotations
 
 import pytest
-
-from engine.project_file import parse_project
-from engine.results import check_wall
-from engine.soil_pressure import pressure_distribution
+from kernline.engine.project_file import parse_project
+from kernline.engine.results import check_wall
+from kernline.engine.soil_pressure import pressure_distribution
 
 
 def _raw() -> dict:
