@@ -24,9 +24,16 @@ import sys
 from collections.abc import Sequence
 from pathlib import Path
 
-from kernline.engine import CAUTION, __version__
-from kernline.engine.errors import EngineError, InputError
-from kernline.engine.file_safety import FilePathError, check_input_file, check_output_path, check_writable
+from kernline.engine import (
+    CAUTION,
+    EngineError,
+    FilePathError,
+    InputError,
+    __version__,
+    check_input_file,
+    check_output_path,
+    check_writable,
+)
 
 EXIT_OK, EXIT_FAIL, EXIT_INPUT, EXIT_INTERNAL = 0, 1, 2, 3
 EXIT_INTERRUPTED = 130  # 128 + SIGINT, what a shell reports for Ctrl+C
@@ -170,8 +177,7 @@ def _no_display() -> bool:
 
 
 def _save_demo(path: str) -> int:
-    from kernline.engine.file_safety import atomic_write_text
-    from kernline.engine.resources import resource_path
+    from kernline.engine import atomic_write_text, resource_path
 
     text = resource_path("demo.kernline").read_text(encoding="utf-8")
     atomic_write_text(Path(path), text)
@@ -180,15 +186,12 @@ def _save_demo(path: str) -> int:
 
 
 def _check(path: str, as_json: bool) -> int:
-    from kernline.engine.input_warnings import input_warnings
-    from kernline.engine.project_file import load_project
-    from kernline.engine.results import check_project, results_json
-    from kernline.engine.summary import check_table, warnings_text
+    from kernline.engine import check_project, check_table, load_project, results_json, warnings_for, warnings_text
 
     check_input_file(path)
     doc = load_project(path)
     results = check_project(doc.project)
-    _warn(warnings_text(input_warnings(doc.project, results)))
+    _warn(warnings_text(warnings_for(doc.project, results)))
     if as_json:
         print(json.dumps(results_json(results, project=doc.project), indent=2, allow_nan=False))
     else:
@@ -203,11 +206,19 @@ def _warn(text: str) -> None:
 
 
 def _size(path: str, as_json: bool, write: bool) -> int:
-    from kernline.engine.input_warnings import input_warnings
-    from kernline.engine.project_file import load_project, save_project, with_footing_sizes
-    from kernline.engine.results import check_wall, results_json
-    from kernline.engine.sizing import size_footing, sized_footing_values, sized_wall
-    from kernline.engine.summary import size_table, warnings_text
+    from kernline.engine import (
+        check_wall,
+        load_project,
+        results_json,
+        save_project,
+        size_footing,
+        size_table,
+        sized_footing_values,
+        sized_wall,
+        warnings_for,
+        warnings_text,
+        with_footing_sizes,
+    )
 
     check_input_file(path)
     if write:  # before the sizing, which takes a while: a file that cannot be written is said at once
@@ -227,7 +238,7 @@ def _size(path: str, as_json: bool, write: bool) -> int:
     if write:  # written before anything is printed, so a closed output pipe cannot stop the write
         save_project(path, with_footing_sizes(doc.raw, sizes, project.units))
         written = len(sizes)
-    _warn(warnings_text(input_warnings(project, results)))
+    _warn(warnings_text(warnings_for(project, results)))
     if as_json:
         sizing = {s.wall_id: s.as_json() for s in sized}
         print(json.dumps(results_json(tuple(results), sizing, project=project), indent=2, allow_nan=False))
@@ -240,11 +251,11 @@ def _size(path: str, as_json: bool, write: bool) -> int:
 
 def _report(path: str, output: str, walls: str | None) -> int:
     try:
-        from kernline.engine.report import write_report
+        from kernline.engine import write_report
     except ImportError:
         print("kernline: the calculation package is not built yet in this version", file=sys.stderr)
         return EXIT_INTERNAL
-    from kernline.engine.project_file import load_project
+    from kernline.engine import load_project
 
     check_input_file(path)
     check_output_path(output, inputs=[path])
@@ -257,11 +268,11 @@ def _report(path: str, output: str, walls: str | None) -> int:
 
 def _schedule(path: str, output: str) -> int:
     try:
-        from kernline.engine.schedule import write_schedule
+        from kernline.engine import write_schedule
     except ImportError:
         print("kernline: the CSV schedule is not built yet in this version", file=sys.stderr)
         return EXIT_INTERNAL
-    from kernline.engine.project_file import load_project
+    from kernline.engine import load_project
 
     check_input_file(path)
     check_output_path(output, inputs=[path])

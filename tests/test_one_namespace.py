@@ -49,3 +49,15 @@ def test_the_engine_ships_type_information():
     import kernline.engine
 
     assert (Path(kernline.engine.__file__).parent / "py.typed").is_file()
+
+
+def test_the_facade_names_what_they_say():
+    """Every facade name resolves to a function or class, never to a module that shadows it."""
+    import inspect
+
+    import kernline.engine as engine
+
+    for name in engine._FACADE:
+        value = getattr(engine, name)
+        assert not inspect.ismodule(value), name
+    assert callable(engine.warnings_for) and callable(engine.registered_checks)
