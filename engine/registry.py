@@ -120,6 +120,11 @@ class Check(metaclass=_CheckMeta):
         return _CHECK_ORDER[self.id] < _CHECK_ORDER[other.id]
 
 
+def json_number(value: float | None) -> float | None:
+    """A number for the results JSON: null for None, infinity (no demand) and NaN."""
+    return None if value is None or value != value or value in (float("inf"), float("-inf")) else float(value)
+
+
 _CHECKS: list[Check] = []
 _CHECK_ORDER: dict[str, int] = {}
 
@@ -253,6 +258,7 @@ __all__ = [
     "checks",
     "code_by_id",
     "codes",
+    "json_number",
     "register_check",
     "register_code",
 ]

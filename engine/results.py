@@ -20,6 +20,7 @@ from .combinations import DesignCase
 from .loads import SelfWeight, self_weight
 from .model import Project, Wall
 from .registry import Check
+from .registry import json_number as _num
 from .stability import CaseTable, Evaluation, case_table, evaluate
 
 # Relative tolerance on "ratio >= required", so that a ratio equal to its requirement up to
@@ -239,10 +240,6 @@ def check_wall(project: Project, wall: Wall, table: CaseTable | None = None) -> 
 def check_project(project: Project) -> tuple[WallResult, ...]:
     """Check every wall of the project."""
     return tuple(check_wall(project, wall) for wall in project.walls)
-
-
-def _num(value: float) -> float | None:
-    return None if value is None or math.isinf(value) or math.isnan(value) else float(value)
 
 
 def _check_json(check: Check, result: Any) -> dict[str, Any]:

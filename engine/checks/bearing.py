@@ -13,6 +13,7 @@ import numpy as np
 
 from .. import bearing
 from ..registry import Check, CheckArrays, Family, register_check
+from ..registry import json_number as _num
 
 if TYPE_CHECKING:  # pragma: no cover
     from ..stability import Statics
@@ -32,10 +33,6 @@ class BearingResult:
     ratio: float
     required: float
     passes: bool
-
-
-def _num(value: float) -> float | None:
-    return None if value is None or not np.isfinite(value) else float(value)
 
 
 @dataclass(frozen=True, eq=False, repr=False)
