@@ -83,9 +83,9 @@ class SelfWeight:
 
 
 def self_weight(wall: Wall, soil: SoilProperties, width: ArrayLike, thickness: ArrayLike) -> SelfWeight:
-    """Self weight of footing, stem and soil cover for footing width B and thickness D (case D).
+    """Self weight of footing, stem and soil cover for footing width B and thickness t_f (load case D).
 
-    Footing gc*B*D*L; stem gc*ts*hs*L when the stem is there; soil over the footing gs*c*(B - t)*L,
+    Footing gc*B*t_f*L_f; stem gc*ts*hs*L when the stem is there; soil over the footing gs*c*(B - t)*L,
     with c the cover and t the stem thickness (or the wall's when there is no stem). Width and
     thickness may be numpy arrays (the sizing grid); the result broadcasts.
     """

@@ -184,7 +184,7 @@ Load = LineLoad | PointLoad | LateralLoad
 
 @dataclass(frozen=True, slots=True, kw_only=True)
 class StripFooting:
-    """The continuous footing: width B across the wall, thickness D, extensions past the wall ends.
+    """The continuous footing: width B across the wall, thickness t_f, extensions past the wall ends.
 
     ``cover`` is the depth of soil over the top of the footing; ``offset`` is reserved for a
     transverse offset of the wall on the footing (not used by the in-plane checks).

@@ -2,7 +2,7 @@
 
 Every candidate of the grid is checked against every case at once (numpy broadcasting over
 cases x thicknesses x widths; no Python loop over candidates). The choice is the passing candidate
-with the least cross-section B*D (the least concrete per length of footing), ties going to the
+with the least cross-section B*t_f (the least concrete per length of footing), ties going to the
 thinner, then the narrower (common practice: excavation depth costs more than width). The full
 feasibility map is returned for the window's design map.
 """
