@@ -72,6 +72,15 @@ class _LegacyChecks(Sequence[Check]):
 ALL_CHECKS: Sequence[Check] = _LegacyChecks()
 
 
+class WallConstruction(Enum):
+    """What the wall is built of: it sets the footing's critical sections (ACI 318-19 Table 13.2.7.1)
+    and how the wall delivers its overturning to the footing along its length."""
+
+    CONCRETE = "concrete"
+    MASONRY = "masonry"
+    LIGHT_FRAME = "light-frame"
+
+
 class SlidingBasis(Enum):
     """What friction and the cohesion cap act on.
 
@@ -183,6 +192,21 @@ Load = LineLoad | PointLoad | LateralLoad
 
 
 @dataclass(frozen=True, slots=True, kw_only=True)
+class Reinforcement:
+    """The footing's bars as the engineer gave them (SI: spacing in m).
+
+    ``transverse``: (bar, spacing) across the width, bottom face; ``bottom`` and ``top``: (count,
+    bar) along the length. Any part may be None (Kernline designs it). ``plain``: no bars, ACI 318-19
+    chapter 14. The bar objects are :class:`engine.concrete.bars.Bar`.
+    """
+
+    transverse: tuple[Any, float] | None = None
+    bottom: tuple[int, Any] | None = None
+    top: tuple[int, Any] | None = None
+    plain: bool = False
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
 class StripFooting:
     """The continuous footing: width B across the wall, thickness t_f, extensions past the wall ends.
 
@@ -197,6 +221,7 @@ class StripFooting:
     cover: float = 0.0
     unit_weight: float = 150.0 * PCF
     offset: float = 0.0
+    reinforcement: Reinforcement | None = None
 
     def __post_init__(self) -> None:
         _positive(self.width, "width")
@@ -276,6 +301,8 @@ class Wall:
     stem: Stem = field(default_factory=Stem)
     loads: tuple[Load, ...] = ()
     sizing: SizingBounds = field(default_factory=SizingBounds)
+    construction: WallConstruction = WallConstruction.LIGHT_FRAME
+    chord_offset: float = 3.0 * INCH
 
     def __post_init__(self) -> None:
         _require(bool(self.id.strip()), "id", "must not be empty")
@@ -414,6 +441,7 @@ class DesignCriteria:
     seismic_overturning_reduction: float = 0.0
     wind_omega: float = 1.3
     seismic_snow_factor: float | None = None
+    seismic_design_category: str | None = None
 
     def __post_init__(self) -> None:
         if self.method is None:
@@ -455,6 +483,26 @@ class Assumption:
 
 
 @dataclass(frozen=True, slots=True, kw_only=True)
+class ConcreteSettings:
+    """The footing's concrete design inputs (SI): f'c, fy (Pa), cover to the bottom bars (m), λ, and
+    the strength combinations (a code basis of the STRENGTH family)."""
+
+    fc: float
+    fy: float
+    cover: float
+    lam: float = 1.0
+    strength_method: CodeBasis = None  # type: ignore[assignment]  # None: ASCE 7-16 strength design
+
+    def __post_init__(self) -> None:
+        if self.strength_method is None:
+            object.__setattr__(self, "strength_method", code_by_id("asce7-16-lrfd"))
+        _positive(self.fc, "fc")
+        _positive(self.fy, "fy")
+        _non_negative(self.cover, "cover")
+        _require(0.0 < self.lam <= 1.0, "lambda", "must be above 0 and at most 1.0 (ACI 318-19 19.2.4)")
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
 class Site:
     """Site conditions that are not soil strengths: the frost depth (m; None when not entered)."""
 
@@ -480,6 +528,7 @@ class Project:
     site: Site = field(default_factory=Site)
     walls: tuple[Wall, ...] = ()
     assumptions: tuple[Assumption, ...] = ()
+    concrete: ConcreteSettings | None = None
 
     def __post_init__(self) -> None:
         _require(self.units in ("US", "SI"), "units", f'expected "US" or "SI", got "{self.units}"')

@@ -15,16 +15,18 @@ import difflib
 import json
 import math
 import os
+import re
 from collections.abc import Iterator
 from contextlib import contextmanager
 from contextvars import ContextVar
-from dataclasses import dataclass
+from dataclasses import dataclass, replace
 from functools import lru_cache
 from pathlib import Path
 from typing import Any
 
 from .checks.embedment import MIN_WIDTH
 from .combinations import MAX_SDS, default_required
+from .concrete.bars import parse_counted, parse_spaced
 from .errors import FormatVersionError, InputError
 from .file_safety import atomic_write_text, check_input_file
 from .model import (
@@ -32,6 +34,7 @@ from .model import (
     Assumption,
     BearingBasis,
     Check,
+    ConcreteSettings,
     DesignCriteria,
     LateralLoad,
     LineLoad,
@@ -40,6 +43,7 @@ from .model import (
     PointLoad,
     Project,
     ProjectInfo,
+    Reinforcement,
     RequiredRatios,
     Site,
     SizingBounds,
@@ -48,6 +52,7 @@ from .model import (
     Stem,
     StripFooting,
     Wall,
+    WallConstruction,
 )
 from .presumptive import TABLE_1806_2
 from .registry import CodeBasis, Family, check_by_id, checks, codes
@@ -63,11 +68,14 @@ _CASES = {c.value: c for c in LoadCase}
 # Inside these sections an unknown key is refused (a misspelt key would otherwise be ignored and a
 # default used). Users keep their own data under the top-level "extra" object or under any key that
 # starts with "x-"; both are kept exactly on save.
-TOP_KEYS = ("format", "version", "units", "project", "criteria", "soil", "site", "walls", "extra")
+TOP_KEYS = ("format", "version", "units", "project", "criteria", "soil", "site", "concrete", "walls", "extra")
+CONCRETE_KEYS = ("fc", "fy", "cover", "lambda", "strength_method")
+REINFORCEMENT_KEYS = ("transverse", "bottom", "top")
+SEISMIC_DESIGN_CATEGORIES = ("A", "B", "C", "D", "E", "F")
 PROJECT_KEYS = ("name", "number", "engineer", "checker", "client", "address", "revision", "revision_date", "notes")
 # the options a code basis may accept (each basis lists its own in CodeBasis.options)
 OPTION_KEYS = ("ev_at_soil", "seismic_overturning_reduction", "wind_omega", "seismic_snow_factor")
-CRITERIA_KEYS = ("method", "sds", "bearing_increase", "required", "combinations", *OPTION_KEYS)
+CRITERIA_KEYS = ("method", "sds", "bearing_increase", "required", "combinations", "seismic_design_category", *OPTION_KEYS)
 REQUIRED_KEYS = tuple(c.id for c in checks(Family.SERVICE))
 SITE_KEYS = ("frost_depth",)
 COMBINATION_KEYS = ("name", "factors", "checks")
@@ -83,8 +91,8 @@ SOIL_KEYS = (
     "sliding_basis",
     "presumptive_class",
 )
-WALL_KEYS = ("id", "label", "length", "thickness", "footing", "stem", "loads", "sizing")
-FOOTING_KEYS = ("width", "thickness", "extension_start", "extension_end", "cover", "unit_weight", "offset")
+WALL_KEYS = ("id", "label", "length", "thickness", "construction", "chord_offset", "footing", "stem", "loads", "sizing")
+FOOTING_KEYS = ("width", "thickness", "extension_start", "extension_end", "cover", "unit_weight", "offset", "reinforcement")
 STEM_KEYS = ("height", "thickness")
 LOAD_KEYS = {
     "line": ("type", "case", "value", "start", "end", "label", "reverses"),
@@ -112,6 +120,10 @@ MAX_FACTOR = 10.0  # a load factor, a required ratio or a bearing increase
 MAX_FRICTION = 2.0  # a friction coefficient (tan of a friction angle; 2 is over 63 degrees)
 MAX_DEPTH = 64  # nesting of JSON objects and lists
 MAX_INT_DIGITS = 100
+
+# Pressures from this value up are material strengths (f'c, fy), shown in psi or MPa, not psf or kPa.
+MATERIAL_STRENGTH = 1.0e6
+PSI = 4.4482216152605 / 0.0254**2
 
 # Where the values taken by default come from (the "basis" of each assumption).
 BASIS_CONCRETE = "normal-weight concrete, common practice"
@@ -216,6 +228,8 @@ def _format(value: float, kind: Kind) -> str:
     system = _system.get()
     if kind is Kind.LENGTH:
         return format_length(value, system)
+    if kind is Kind.PRESSURE and value >= MATERIAL_STRENGTH:  # a material strength: psi or MPa
+        return f"{value / PSI:,.0f} psi" if system == "US" else f"{value / 1e6:,.1f} MPa"
     return format_quantity(value, kind, system)
 
 
@@ -398,6 +412,12 @@ def _criteria(raw: Any, seismic_walls: list[str], seismic_snow_walls: list[str] 
                 )
         else:
             _assume("wind_omega", "1.3", "IBC 2021 1605.2: omega = 1.3 for wind of ASCE 7 chapters 26 to 31")
+    sdc = None
+    if "seismic_design_category" in obj:
+        sdc = obj["seismic_design_category"]
+        if not isinstance(sdc, str) or sdc.strip().upper() not in SEISMIC_DESIGN_CATEGORIES:
+            raise InputError("seismic_design_category", f"expected one of A to F (ASCE 7-16 11.6), got {_show(sdc)}")
+        sdc = sdc.strip().upper()
     snow_factor = None
     if "seismic_snow_factor" in obj:
         snow_factor = _number(obj, "seismic_snow_factor", non_negative=True, limit=1.0, limit_reason="a companion snow factor")
@@ -417,6 +437,7 @@ def _criteria(raw: Any, seismic_walls: list[str], seismic_snow_walls: list[str] 
         seismic_overturning_reduction=reduction,
         wind_omega=omega,
         seismic_snow_factor=snow_factor,
+        seismic_design_category=sdc,
     )
 
 
@@ -436,6 +457,61 @@ def _bearing_increase(obj: dict[str, Any], method: CodeBasis) -> float:
             "bearing_increase", f"is a factor that raises the allowable with W or E: 1.0 for none or more, got {value:g}"
         )
     return value
+
+
+def _concrete(raw: Any) -> ConcreteSettings:
+    """The footing's concrete: f'c, fy, cover to the bottom bars, λ and the strength combinations."""
+    obj = _object(raw, "")
+    _keys(obj, CONCRETE_KEYS)
+    strength = _choice(
+        obj,
+        "strength_method",
+        {c.id: c for c in codes(Family.STRENGTH)},
+        "asce7-16-lrfd",
+        "ASCE 7-16 2.3.1 and 2.3.6 strength combinations (Kernline's default)",
+    )
+    lam = _number(obj, "lambda", 1.0, "normal-weight concrete (ACI 318-19 19.2.4)", positive=True)
+    if lam > 1.0:
+        raise InputError("lambda", f"is at most 1.0 (ACI 318-19 Table 19.2.4.2), got {lam:g}")
+    return ConcreteSettings(
+        fc=_quantity(obj, "fc", Kind.PRESSURE, "3000 psi", "a common f'c for footings, common practice", positive=True),
+        fy=_quantity(obj, "fy", Kind.PRESSURE, "60 ksi", "Grade 60 bars (ASTM A615)", positive=True),
+        cover=_quantity(
+            obj, "cover", Kind.LENGTH, "3 in", "concrete cast against earth (ACI 318-19 Table 20.5.1.3.1)", positive=True
+        ),
+        lam=lam,
+        strength_method=strength,
+    )
+
+
+def _reinforcement(raw: Any) -> Reinforcement | None:
+    """ "plain", or {"transverse": "#5 @ 12 in", "bottom": "3 #5", "top": "2 #4"} (any part may be left
+    out: Kernline designs it), or absent (None: Kernline designs all of it)."""
+    if raw is None:
+        return None
+    if raw == "plain":
+        return Reinforcement(plain=True)
+    if isinstance(raw, str):
+        raise InputError("", f'expected "plain" or an object of bars such as {{"transverse": "#5 @ 12 in"}}, got {_show(raw)}')
+    obj = _object(raw, "")
+    _keys(obj, REINFORCEMENT_KEYS)
+    parts: dict[str, Any] = {}
+    if "transverse" in obj:
+        with _scope("transverse"):
+            parts["transverse"] = (
+                parse_spaced(_text(obj, "transverse"))
+                if isinstance(obj["transverse"], str)
+                else _bad_bars(obj["transverse"], '"#5 @ 12 in"')
+            )
+    for face in ("bottom", "top"):
+        if face in obj:
+            with _scope(face):
+                parts[face] = parse_counted(obj[face]) if isinstance(obj[face], str) else _bad_bars(obj[face], '"3 #5"')
+    return Reinforcement(**parts)
+
+
+def _bad_bars(value: Any, example: str) -> Any:
+    raise InputError("", f"expected bars such as {example}, got {_show(value)}")
 
 
 def _site(raw: Any) -> Site:
@@ -624,6 +700,9 @@ def _wall(raw: Any, units: str) -> Wall:
             unit_weight=_quantity(f, "unit_weight", Kind.UNIT_WEIGHT, "150 pcf", BASIS_CONCRETE, non_negative=True),
             offset=_quantity(f, "offset", Kind.LENGTH) if "offset" in f else 0.0,  # not used by the in-plane checks
         )
+        if "reinforcement" in f:
+            with _scope("reinforcement"):
+                footing = replace(footing, reinforcement=_reinforcement(f["reinforcement"]))
     with _scope("stem"):
         s = _object(obj.get("stem"), "")
         _keys(s, STEM_KEYS)
@@ -705,6 +784,14 @@ def _wall(raw: Any, units: str) -> Wall:
             bounds["extension_max"] = _quantity(z, "extension_max", Kind.LENGTH, positive=True)
             bounds["extension_step"] = _quantity(z, "extension_step", Kind.LENGTH, positive=True)
         sizing = _sizing_bounds(bounds)
+    construction = _choice(
+        obj,
+        "construction",
+        {c.value: c for c in WallConstruction},
+        WallConstruction.LIGHT_FRAME.value,
+        "a light-frame wall: the moment section halfway to the wall's centre (ACI 318-19 Table 13.2.7.1, as masonry)",
+    )
+    chord_offset = _quantity(obj, "chord_offset", Kind.LENGTH, non_negative=True) if "chord_offset" in obj else 3.0 * INCH
     return Wall(
         id=wid,
         label=_text(obj, "label"),
@@ -714,6 +801,8 @@ def _wall(raw: Any, units: str) -> Wall:
         stem=stem,
         loads=tuple(loads),
         sizing=sizing,
+        construction=construction,
+        chord_offset=chord_offset,
     )
 
 
@@ -830,13 +919,27 @@ def parse_project(raw: Any) -> Project:
                 soil = _soil(obj.get("soil"), "soil" in obj)
             with _scope("site"):
                 site = _site(obj.get("site"))
+            concrete = None
+            if "concrete" in obj:
+                with _scope("concrete"):
+                    concrete = _concrete(obj["concrete"])
+
             walls = []
             for i, w in enumerate(walls_raw):
                 with _scope(f"walls[{i}]"):
                     walls.append(_wall_cached(w, units))
+            if concrete is None:  # without a concrete design how the wall is built is not used: nothing was assumed
+                found[:] = [a for a in found if not re.search(r"^walls\[\d+\]\.(construction|chord_offset)$", a.field)]
             with _scope(""):
                 return Project(
-                    info=info, units=units, criteria=criteria, soil=soil, site=site, walls=tuple(walls), assumptions=tuple(found)
+                    info=info,
+                    units=units,
+                    criteria=criteria,
+                    soil=soil,
+                    site=site,
+                    walls=tuple(walls),
+                    assumptions=tuple(found),
+                    concrete=concrete,
                 )
         finally:
             _system.reset(t_system)
