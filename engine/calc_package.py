@@ -42,7 +42,7 @@ from .results import CaseResult, Governing, WallResult, check_wall
 from .schedule import schedule_rows
 from .sizing import SizingResult, size_footing
 from .soil_pressure import PressureDiagram, pressure_diagram
-from .stability import table_checks
+from .stability import reported_checks, table_checks
 from .units import Kind, format_length, format_quantity, to_display, unit_label
 
 PROGRAM = "Kernline"
@@ -992,17 +992,17 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
     for k, (r, row) in enumerate(zip(reports, rows_in, strict=True)):
         # schedule columns: wall, label, wall length, B, D, L, then (ratio, required, case) per check, result
         cells: list[Cell] = [plain(row[0]), plain(brief(_clean(row[1]))), f"{row[3]} × {row[4]} × {row[5]}"]
-        for j, check in enumerate(table_checks()):
+        for j, check in enumerate(reported_checks(project)):
             ratio, required = row[6 + 3 * j : 8 + 3 * j]
             g = r.result.governing[check]
             if ratio == "no demand":
                 cells.append("no demand")
-            elif g.case_index is None:
+            elif not g.combination:
                 cells.append(f"{ratio_text(g.ratio, g.required, g.passes)} / {required}")
             else:
                 shown = ratio_text(g.ratio, g.required, g.passes)
                 cells.append(f"{shown} / {required}\n{case_name(g.combination, g.direction)}")
-        failing = [_CHECK_WORD.get(c, c.id) for c in table_checks() if not r.result.governing[c].passes]
+        failing = [_CHECK_WORD.get(c, c.id) for c in reported_checks(project) if not r.result.governing[c].passes]
         cells.append("passes" if r.result.passes else "FAILS: " + ", ".join(failing))
         if not r.result.passes:
             fail_rows.append(k)
@@ -1021,12 +1021,12 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
                 "Wall",
                 "Label",
                 formula("Footing B × t_{f} × L_{f}"),
-                *(_CHECK_TITLE.get(c, c.title) for c in table_checks()),
+                *(_CHECK_TITLE.get(c, c.title) for c in reported_checks(project)),
                 "Result",
             ),
             tuple(rows),
-            (0.06, 0.19, 0.15, *((0.50 / len(table_checks()),) * len(table_checks())), 0.10),
-            align="L" * (4 + len(table_checks())),
+            (0.06, 0.19, 0.15, *((0.50 / len(reported_checks(project)),) * len(reported_checks(project))), 0.10),
+            align="L" * (4 + len(reported_checks(project))),
             font_size=7.0,
             fail_rows=tuple(fail_rows),
         ),
@@ -1102,7 +1102,7 @@ def _wall_verdict(result: WallResult) -> Verdict:
     for check in result.governing:
         g = result.governing[check]
         if not g.passes:
-            where = f", {case_name(g.combination, g.direction)}" if g.case_index is not None else ""
+            where = f", {case_name(g.combination, g.direction)}" if g.combination else ""
             parts.append(
                 f"{_CHECK_WORD.get(check, check.id)} (ratio {ratio_text(g.ratio, g.required, g.passes)} < {g.required:.2f} "
                 f"required{where})"
@@ -1626,7 +1626,7 @@ def _results_table(result: WallResult) -> list[Block]:
         rows.append(
             (
                 _CHECK_TITLE.get(check, check.title),
-                case_name(g.combination, g.direction) if g.case_index is not None else "(no combination: geometry)",
+                case_name(g.combination, g.direction) if g.combination else "(no combination: geometry)",
                 ratio_text(g.ratio, g.required, g.passes),
                 f"{g.required:.2f}",
                 verdict,

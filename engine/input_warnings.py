@@ -18,8 +18,9 @@ from .results import WallResult
 # flagged: the footing then rocks on a short strip, and the rigid-footing pressure model and the
 # footing's strength along its length deserve a second look (common practice).
 MIN_CONTACT_SHARE = 0.5
-# The concrete section is parsed; the design that uses it is wired into the checks in a later version.
-CONCRETE_DESIGN_WIRED = False
+# The concrete section feeds the flexure and one-way shear checks across the footing's width; the
+# design along the length is reported but not yet a check (see engine.concrete.longitudinal).
+CONCRETE_DESIGN_WIRED = True
 
 
 @dataclass(frozen=True, slots=True, kw_only=True)
@@ -67,8 +68,7 @@ def input_warnings(project: Project, results: Sequence[WallResult] | None = None
         out.append(
             InputWarning(
                 field="concrete",
-                message="is read, but this version does not yet design the footing's concrete (flexure, shear, "
-                "reinforcement): the footing's own strength is not checked",
+                message="is read, but this version does not design the footing's concrete",
             )
         )
     for i, wall in enumerate(project.walls):

@@ -90,6 +90,8 @@ class Check(metaclass=_CheckMeta):
     SLIDING: ClassVar[Check]
     BEARING: ClassVar[Check]
     EMBEDMENT: ClassVar[Check]
+    FLEXURE: ClassVar[Check]
+    ONE_WAY_SHEAR: ClassVar[Check]
 
     @property
     def value(self) -> str:

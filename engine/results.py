@@ -19,7 +19,7 @@ from .checks import BearingResult, EmbedmentResult, OverturningResult, SlidingRe
 from .combinations import DesignCase
 from .loads import SelfWeight, self_weight
 from .model import Project, Wall
-from .registry import Check
+from .registry import Check, Family
 from .registry import json_number as _num
 from .stability import CaseTable, Evaluation, case_table, evaluate
 
@@ -198,8 +198,8 @@ def governing_case(table: CaseTable, evaluation: Evaluation, check: Check) -> Go
             check=check,
             ratio=ratio,
             required=required,
-            combination="",
-            direction="",
+            combination=getattr(record, "combination", ""),  # a strength check names its most loaded case
+            direction=getattr(record, "direction", ""),
             case_index=None,
             passes=meets(ratio, required),
             record=record,
@@ -219,7 +219,11 @@ def governing_case(table: CaseTable, evaluation: Evaluation, check: Check) -> Go
 
 
 def check_wall(project: Project, wall: Wall, table: CaseTable | None = None) -> WallResult:
-    """Check ``wall`` on its current footing for every registered check, combination and direction."""
+    """Check ``wall`` on its current footing for every registered check, combination and direction.
+
+    With a concrete section in the project the footing's own strength checks (flexure, one-way shear)
+    run too, on the strength combinations (:func:`strength_table`).
+    """
     table = table or case_table(wall, project.soil, project.criteria, project.site)
     b, d = wall.footing.width, wall.footing.thickness
     ev = evaluate(table, b, d)
@@ -231,10 +235,28 @@ def check_wall(project: Project, wall: Wall, table: CaseTable | None = None) -> 
         length=wall.footing_length,
         self_weight=SelfWeight(footing=float(sw.footing), stem=float(sw.stem), soil=float(sw.soil)),
         cases=CaseResults(table, ev),
-        governing={check: governing_case(table, ev, check) for check in table.checks},
+        governing={
+            **{check: governing_case(table, ev, check) for check in table.checks},
+            **_strength_governing(project, wall, b, d),
+        },
         table=table,
         evaluation=ev,
     )
+
+
+def strength_table(project: Project, wall: Wall) -> CaseTable | None:
+    """The case table of the footing's strength design (None without a concrete section)."""
+    if project.concrete is None:
+        return None
+    return case_table(wall, project.soil, project.criteria, project.site, project.concrete, Family.STRENGTH)
+
+
+def _strength_governing(project: Project, wall: Wall, width: float, thickness: float) -> dict[Check, Governing]:
+    table = strength_table(project, wall)
+    if table is None:
+        return {}
+    ev = evaluate(table, width, thickness)
+    return {check: governing_case(table, ev, check) for check in table.checks}
 
 
 def check_project(project: Project) -> tuple[WallResult, ...]:
@@ -252,7 +274,7 @@ def wall_json(result: WallResult) -> dict[str, Any]:
     """The documented results record of one wall (SI base units; null where there is no demand)."""
     governing: dict[str, Any] = {}
     for check, g in result.governing.items():
-        demand = not math.isinf(g.ratio) and g.case_index is not None
+        demand = not math.isinf(g.ratio) and bool(g.combination)
         entry: dict[str, Any] = {
             "ratio": _num(g.ratio),
             "required": g.required,
@@ -278,12 +300,43 @@ def wall_json(result: WallResult) -> dict[str, Any]:
             if r is not None:
                 entry[check.id] = _check_json(check, r)
         cases.append(entry)
-    return {
+    out: dict[str, Any] = {
         "id": result.wall_id,
         "passes": result.passes,
         "footing": {"width": result.width, "thickness": result.thickness, "length": result.length},
         "governing": governing,
         "cases": cases,
+    }
+    concrete = concrete_json(result)
+    if concrete is not None:
+        out["concrete"] = concrete
+    return out
+
+
+def concrete_json(result: WallResult) -> dict[str, Any] | None:
+    """The footing's concrete design across its width (SI, per metre of footing), or None when the
+    project has no concrete section. The design along the length is not yet reported ("longitudinal":
+    null)."""
+    flexure = next((g.record for c, g in result.governing.items() if c.id == "flexure"), None)
+    shear = next((g.record for c, g in result.governing.items() if c.id == "one_way_shear"), None)
+    if flexure is None or shear is None:
+        return None
+    return {
+        "plain": flexure.plain,
+        "transverse": {
+            "q_u": _num(flexure.q_u),
+            "combination": flexure.combination or None,
+            "moment": _num(flexure.moment),
+            "moment_capacity": _num(flexure.moment_capacity),
+            "shear": _num(shear.shear),
+            "shear_capacity": _num(shear.shear_capacity),
+            "steel_required": _num(flexure.steel_required),
+            "steel_provided": _num(flexure.steel_provided),
+            "bars": flexure.bars,
+            "development_length": _num(flexure.development_length),
+            "development_available": _num(flexure.development_available),
+        },
+        "longitudinal": None,
     }
 
 

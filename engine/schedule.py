@@ -26,7 +26,7 @@ from collections.abc import Sequence
 from .file_safety import atomic_write_text
 from .model import Project
 from .results import WallResult, check_project
-from .stability import table_checks
+from .stability import reported_checks, table_checks
 from .units import format_length
 
 CSV_ENCODING = "utf-8-sig"
@@ -47,10 +47,10 @@ def guard_cell(cell: str) -> str:
     return cell
 
 
-def schedule_headers(units: str) -> list[str]:
-    """Column titles of the schedule."""
+def schedule_headers(units: str, project: Project | None = None) -> list[str]:
+    """Column titles of the schedule (the strength checks too when ``project`` has a concrete section)."""
     heads = ["Wall", "Label", "Wall length", "Footing width", "Footing thickness", "Footing length"]
-    for check in table_checks():
+    for check in reported_checks(project) if project is not None else table_checks():
         name = check.title
         heads += [f"{name} ratio", f"{name} required", f"{name} governing case"]
     return heads + ["Result"]
@@ -70,12 +70,13 @@ def schedule_rows(project: Project, results: Sequence[WallResult]) -> list[list[
             format_length(r.thickness, project.units),
             format_length(r.length, project.units),
         ]
-        for check in table_checks():
+        for check in reported_checks(project):
             g = r.governing[check]
             if math.isinf(g.ratio):
                 row += ["no demand", f"{g.required:.2f}", ""]
-            elif g.case_index is None:  # a geometric check: no combination
-                row += [f"{g.ratio:.2f}", f"{g.required:.2f}", ""]
+            elif g.case_index is None:  # a geometric check (no combination) or a strength check (its most loaded case)
+                direction = "" if g.direction in ("none", "") else f" ({g.direction})"
+                row += [f"{g.ratio:.2f}", f"{g.required:.2f}", g.combination + direction]
             elif check.id == "bearing" and g.ratio == 0.0:
                 direction = "" if g.direction == "none" else f" ({g.direction})"
                 row += ["no equilibrium", f"{g.required:.2f}", g.combination + direction]
@@ -92,7 +93,7 @@ def schedule_csv(project: Project, results: Sequence[WallResult] | None = None) 
     results = check_project(project) if results is None else results
     buffer = io.StringIO(newline="")
     writer = csv.writer(buffer)  # the default dialect: "\r\n" line ends, quotes where a cell needs them
-    for row in [schedule_headers(project.units), *schedule_rows(project, results)]:
+    for row in [schedule_headers(project.units, project), *schedule_rows(project, results)]:
         writer.writerow([guard_cell(cell) for cell in row])
     return buffer.getvalue()
 

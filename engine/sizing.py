@@ -15,7 +15,7 @@ from dataclasses import dataclass, replace
 import numpy as np
 
 from .model import Project, Wall
-from .registry import Check
+from .registry import Check, Family
 from .stability import CaseTable, case_table, evaluate
 from .units import format_length
 
@@ -105,6 +105,24 @@ class SizingResult:
         }
 
 
+def feasibility_maps(
+    tables: list[CaseTable], widths: np.ndarray, thicknesses: np.ndarray
+) -> tuple[np.ndarray, np.ndarray, tuple[Check, ...]]:
+    """:func:`feasibility_map` over several case tables (the stability one, and the strength one when
+    the footing's concrete is designed): their rows stacked, and the checks in that order."""
+    maps = [feasibility_map(t, widths, thicknesses) for t in tables]
+    stacked = np.concatenate([m[0] for m in maps], axis=0)
+    checks = tuple(c for t in tables for c in t.checks)
+    return stacked, maps[0][1], checks
+
+
+def _tables(project: Project, wall: Wall) -> list[CaseTable]:
+    tables = [case_table(wall, project.soil, project.criteria, project.site)]
+    if project.concrete is not None:
+        tables.append(case_table(wall, project.soil, project.criteria, project.site, project.concrete, Family.STRENGTH))
+    return tables
+
+
 def feasibility_map(table: CaseTable, widths: np.ndarray, thicknesses: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
     """Lowest ratio / required of each check over all cases, for every candidate.
 
@@ -165,10 +183,10 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
     best: tuple[float, float, float, float, int, int, int] | None = None  # volume, e, t, b, k, row, col
     for k, e in enumerate(extensions.tolist()):
         trial = extended(wall, e)
-        table = case_table(trial, project.soil, project.criteria, project.site)
-        check_normalized, allowed = feasibility_map(table, widths, thicknesses)
+        tables = _tables(project, trial)
+        check_normalized, allowed, all_checks = feasibility_maps(tables, widths, thicknesses)
         passes = allowed & (np.min(check_normalized, axis=0) >= 1.0 - 1e-9)
-        maps.append((trial, table, check_normalized, allowed, passes))
+        maps.append((trial, tables[0], check_normalized, allowed, passes))
         if not passes.any():
             continue
         rows, cols = np.nonzero(passes)
@@ -189,13 +207,13 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
     extension: float | None
     if best is not None:
         _, extension, thickness, width, _, row, col = best
-        message = _why_smallest(table.checks, check_normalized, passes, allowed, row, col)
+        message = _why_smallest(all_checks, check_normalized, passes, allowed, row, col)
         if extensions.size > 1:
             message += _why_this_length(project, extensions, k, maps, widths, thicknesses)
         suggestions: tuple[str, ...] = ()
     else:
         width, thickness, extension = None, None, None
-        message, suggestions = _diagnose(project, trial, table, widths, thicknesses, check_normalized, allowed)
+        message, suggestions = _diagnose(project, trial, table, widths, thicknesses, check_normalized, allowed, all_checks)
     return SizingResult(
         wall_id=wall.id,
         widths=widths,
@@ -209,7 +227,7 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
         thickness=thickness,
         message=message,
         suggestions=suggestions,
-        checks=table.checks,
+        checks=all_checks,
         extension=extension,
         extensions=extensions,
         length=trial.footing_length if best is not None else None,
@@ -255,11 +273,13 @@ def _diagnose(
     thicknesses: np.ndarray,
     check_normalized: np.ndarray,
     allowed: np.ndarray,
+    all_checks: tuple[Check, ...] | None = None,
 ) -> tuple[str, tuple[str, ...]]:
     """Why nothing passes: the failing check at the largest size, by how much, and what would help."""
     last_r, last_c = thicknesses.size - 1, widths.size - 1
     at_max = check_normalized[:, last_r, last_c]
-    failing = [(table.checks[j], float(at_max[j])) for j in range(len(table.checks)) if at_max[j] < 1.0 - 1e-9]
+    all_checks = all_checks or table.checks
+    failing = [(all_checks[j], float(at_max[j])) for j in range(len(all_checks)) if at_max[j] < 1.0 - 1e-9]
     if not allowed[last_r, last_c]:
         return "even the widest candidate is narrower than the wall it carries", ("raise width_max above the wall thickness",)
     described = ", ".join(
@@ -273,7 +293,7 @@ def _diagnose(
     suggestions = []
     for check, value in failing:
         helps = []
-        j = table.checks.index(check)
+        j = all_checks.index(check)
         if widths.size > 1 and check_normalized[j, last_r, last_c - 1] < value - 1e-12:
             helps.append("a wider footing (raise width_max)")
         if thicknesses.size > 1 and check_normalized[j, last_r - 1, last_c] < value - 1e-12:

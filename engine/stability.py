@@ -10,7 +10,7 @@ check (:mod:`engine.checks`) with numpy, for one size (a single check) or a whol
 from __future__ import annotations
 
 from collections.abc import Callable
-from dataclasses import dataclass
+from dataclasses import dataclass, field
 from functools import lru_cache
 
 import numpy as np
@@ -18,13 +18,15 @@ import numpy as np
 from . import overturning, soil_pressure
 from .combinations import DesignCase, combinations_of, design_cases
 from .loads import lateral_resultants, self_weight, vertical_resultants
-from .model import DesignCriteria, LoadCase, Site, SlidingBasis, SoilProperties, Wall
+from .model import ConcreteSettings, DesignCriteria, LoadCase, Project, Site, SlidingBasis, SoilProperties, Wall
 from .registry import Check, CheckArrays, Family, checks
 
 
-def table_checks() -> tuple[Check, ...]:
-    """The checks a case table serves: the service-family (ASD) checks and the geometric ones."""
-    return tuple(c for c in checks() if c.family in (Family.SERVICE, Family.GEOMETRY))
+def table_checks(family: Family = Family.SERVICE) -> tuple[Check, ...]:
+    """The checks a case table serves: for the SERVICE family the service (ASD) checks and the
+    geometric ones; for the STRENGTH family the footing's own strength checks."""
+    wanted = (Family.SERVICE, Family.GEOMETRY) if family is Family.SERVICE else (family,)
+    return tuple(c for c in checks() if c.family in wanted)
 
 
 @dataclass(frozen=True, slots=True, eq=False)
@@ -55,6 +57,8 @@ class CaseTable:
     soil: SoilProperties
     criteria: DesignCriteria
     site: Site
+    concrete: ConcreteSettings | None
+    family: Family
     cases: tuple[DesignCase, ...]
     dead_factor: np.ndarray
     applied_vertical: np.ndarray
@@ -83,19 +87,19 @@ _CASE_ORDER = tuple(LoadCase)
 
 @lru_cache(maxsize=128)
 def _case_layout(
-    criteria: DesignCriteria, lateral_cases: frozenset[LoadCase]
+    criteria: DesignCriteria, lateral_cases: frozenset[LoadCase], family: Family = Family.SERVICE
 ) -> tuple[tuple[DesignCase, ...], np.ndarray, np.ndarray, np.ndarray, np.ndarray]:
     """The design cases of ``criteria`` and their factors (k x 7, LoadCase order), direction signs,
     W/E flags and check masks (checks x k). Cached: it depends on the criteria and on which lateral
     cases the wall has, not on the wall's loads."""
-    cases = design_cases(combinations_of(criteria), lateral_cases)
+    cases = design_cases(combinations_of(criteria), lateral_cases)  # the strength family's criteria name its own method
     k = len(cases)
     factors = np.array([[case.combination.factor(c) for c in _CASE_ORDER] for case in cases], dtype=float).reshape(
         k, len(_CASE_ORDER)
     )
     sign = np.array([case.direction.sign for case in cases], dtype=float)
     wind_or_seismic = np.array([case.combination.has_wind_or_seismic for case in cases], dtype=bool)
-    evaluated = table_checks()
+    evaluated = table_checks(family)
     applies = np.array(
         [[check.per_case and check in case.combination.checks for case in cases] for check in evaluated], dtype=bool
     ).reshape(len(evaluated), k)
@@ -104,7 +108,27 @@ def _case_layout(
     return cases, factors, sign, wind_or_seismic, applies
 
 
-def case_table(wall: Wall, soil: SoilProperties, criteria: DesignCriteria, site: Site | None = None) -> CaseTable:
+def reported_checks(project: Project) -> tuple[Check, ...]:
+    """The checks a project's results report, in display order: the stability and geometric checks,
+    and the footing's strength checks when the project has a concrete section."""
+    extra = table_checks(Family.STRENGTH) if project.concrete is not None else ()
+    return tuple(sorted((*table_checks(), *extra)))
+
+
+def strength_criteria(criteria: DesignCriteria, concrete: ConcreteSettings) -> DesignCriteria:
+    """The criteria of the footing's strength design: the concrete's strength combinations with the
+    project's S_DS (no custom list: a project's own combinations are for the stability checks)."""
+    return DesignCriteria(method=concrete.strength_method, sds=criteria.sds)
+
+
+def case_table(
+    wall: Wall,
+    soil: SoilProperties,
+    criteria: DesignCriteria,
+    site: Site | None = None,
+    concrete: ConcreteSettings | None = None,
+    family: Family = Family.SERVICE,
+) -> CaseTable:
     """Reduce the wall's loads to per-case sums for every combination and direction.
 
     In a combination with factors f: N = sum f*P over vertical loads, V = sum f*H over lateral loads
@@ -112,10 +136,14 @@ def case_table(wall: Wall, soil: SoilProperties, criteria: DesignCriteria, site:
     position in direction '-'. In a case with no lateral load the toe is the end toward which the
     loads lean.
     """
+    if family is Family.STRENGTH:
+        if concrete is None:
+            raise ValueError("the strength family needs the project's concrete settings")
+        criteria = strength_criteria(criteria, concrete)
     length = wall.footing_length
     verticals = vertical_resultants(wall)
     laterals = lateral_resultants(wall)
-    cases, factors, sign, wind_or_seismic, applies = _case_layout(criteria, frozenset(h.case for h in laterals))
+    cases, factors, sign, wind_or_seismic, applies = _case_layout(criteria, frozenset(h.case for h in laterals), family)
     k = len(cases)
 
     # vertical loads: factored forces (k x n) at their positions for each case's direction
@@ -138,12 +166,14 @@ def case_table(wall: Wall, soil: SoilProperties, criteria: DesignCriteria, site:
     h_height = np.array([h.height for h in laterals], dtype=float)
     shears = factors[:, h_case] * h_force * (sign != 0.0)[:, None]  # f * H
     seismic = np.array([h.case is LoadCase.E for h in laterals], dtype=bool)
-    evaluated = table_checks()
+    evaluated = table_checks(family)
     return CaseTable(
         wall=wall,
         soil=soil,
         criteria=criteria,
         site=site or Site(),
+        concrete=concrete,
+        family=family,
         cases=cases,
         dead_factor=factors[:, column[LoadCase.D]].copy(),
         applied_vertical=n_app,
@@ -199,6 +229,7 @@ class Statics:
     lateral_moment: np.ndarray
     overturning_lateral_moment: np.ndarray
     sliding_normal: np.ndarray
+    memo: dict[str, object] = field(default_factory=dict)
 
     def per_case(self, a: np.ndarray) -> np.ndarray:
         """A per-case array (k,) shaped to broadcast against the grid."""
@@ -340,10 +371,14 @@ def statics(table: CaseTable, width: float | np.ndarray, thickness: float | np.n
     wall, soil = table.wall, table.soil
     length = table.length
     weight = np.asarray(self_weight(wall, soil, b, d).total, dtype=float)
-    factored_weight = per_case(table.dead_factor) * weight  # acts at L_f/2
+    # the strength family designs the footing for the net pressure of the factored wall loads only: the
+    # footing's own weight and the soil on it go straight to the soil (common practice; see
+    # engine.concrete.transverse)
+    strength = table.family is Family.STRENGTH
+    factored_weight = per_case(table.dead_factor) * (0.0 * weight if strength else weight)  # acts at L_f/2
     vertical = per_case(table.applied_vertical) + factored_weight
     lateral = overturning.lateral_moment(per_case(table.shear_moment), per_case(table.shear), d)  # sum f H (h + t_f)
-    r = table.criteria.seismic_overturning_reduction
+    r = 0.0 if strength else table.criteria.seismic_overturning_reduction
     if r:
         seismic = overturning.lateral_moment(per_case(table.seismic_shear_moment), per_case(table.seismic_shear), d)
         reduced = lateral - r * seismic

@@ -26,7 +26,7 @@ def ratio_text(g: Governing) -> str:
 
 
 def case_text(g: Governing) -> str:
-    if math.isinf(g.ratio) or g.case_index is None:
+    if math.isinf(g.ratio) or not g.combination:
         return ""
     return g.combination if g.direction == "none" else f"{g.combination} ({g.direction})"
 
@@ -46,7 +46,7 @@ def _table(headers: Sequence[str], rows: Sequence[Sequence[str]]) -> str:
 def check_table(project: Project, results: Sequence[WallResult]) -> str:
     """One row per wall: footing, the governing ratio of every registered check with its case, and the
     verdict; then the values taken by default, and the caution."""
-    checks = results[0].table.checks if results else ()
+    checks = tuple(results[0].governing) if results else ()
     headers = ["Wall", "Footing B x t_f x L_f", *[c.title for c in checks], "Governing case (worst)", "Result"]
     rows = []
     for r in results:
@@ -68,7 +68,7 @@ def check_table(project: Project, results: Sequence[WallResult]) -> str:
 
 def size_table(project: Project, sized: Sequence[SizingResult], results: Sequence[WallResult]) -> str:
     """One row per wall: the size found (or why none) and the governing ratios at that size."""
-    checks = results[0].table.checks if results else ()
+    checks = tuple(results[0].governing) if results else ()
     headers = ["Wall", "Sized B x t_f x L_f", "Candidates", *[c.title for c in checks], "Why this size"]
     rows = []
     for s, r in zip(sized, results, strict=True):

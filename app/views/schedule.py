@@ -71,7 +71,7 @@ class ScheduleView(QWidget):
 
     def refresh(self) -> None:
         doc = self.document
-        self.headers = schedule_headers(doc.units)
+        self.headers = schedule_headers(doc.units, doc.project if doc.checkable else None)
         if not doc.checkable:  # nothing is checked until the site values are in
             self.rows = []
             self.note.setText("Not checked yet: enter " + doc.missing_text() + ".")

@@ -5,7 +5,7 @@ imported below; everything that reports on checks loops over :func:`engine.regis
 """
 
 from ..registry import Check, CheckArrays, Family, check_by_id, checks
-from . import bearing, embedment, overturning, sliding  # noqa: F401 - registers them; each sets its display order
+from . import bearing, embedment, flexure, one_way_shear, overturning, sliding  # noqa: F401 - registers them; each sets its display order
 from .bearing import BEARING, BearingResult
 from .embedment import EMBEDMENT, EmbedmentResult
 from .overturning import OVERTURNING, OverturningResult

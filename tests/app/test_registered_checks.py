@@ -14,7 +14,7 @@ import kernline.engine.registry as registry
 import numpy as np
 import pytest
 from kernline.engine.registry import Check, CheckArrays, Family, register_check
-from kernline.engine.stability import _case_layout, table_checks
+from kernline.engine.stability import _case_layout, reported_checks, table_checks
 from PySide6.QtWidgets import QAbstractButton, QLabel
 from window_helpers import field
 
@@ -74,7 +74,9 @@ def clearance():
 def test_a_registered_check_shows_in_the_verdict_walls_and_map(qtbot, clearance, make_window):
     window = make_window()
     texts = window.verdict.texts()
-    assert list(texts) == [c.id for c in registry.checks()]  # the registry's order: clearance after bearing
+    assert list(texts) == [
+        c.id for c in reported_checks(window.document.project)
+    ]  # the registry's order: clearance after bearing
     assert list(texts).index("test-clearance") == list(texts).index("bearing") + 1
     assert texts["test-clearance"] == ("0.50 < 1.00", "✗ NG", "")
     names = [row[0].text() for row in window.verdict.rows.values()]

@@ -86,9 +86,9 @@ def test_bad_concrete_inputs_name_their_field(mutate, field):
     assert err.value.field == field
 
 
-def test_a_concrete_section_is_flagged_while_the_design_is_not_wired():
-    """Until the concrete design runs, a project that asks for it is told so, never left to assume it."""
+def test_a_concrete_section_is_designed_not_flagged():
+    """The concrete design runs (flexure and one-way shear), so no warning says it does not."""
     raw = demo()
     raw["concrete"] = {}
     fields = [w.field for w in input_warnings(parse_project(raw))]
-    assert "concrete" in fields
+    assert "concrete" not in fields
