@@ -371,11 +371,11 @@ def statics(table: CaseTable, width: float | np.ndarray, thickness: float | np.n
     wall, soil = table.wall, table.soil
     length = table.length
     weight = np.asarray(self_weight(wall, soil, b, d).total, dtype=float)
-    # the strength family designs the footing for the net pressure of the factored wall loads only: the
-    # footing's own weight and the soil on it go straight to the soil (common practice; see
-    # engine.concrete.transverse)
+    # The strength family keeps the self weight in the soil pressure (so the pressure's shape is that
+    # of the footing as it stands); the member design then takes off the uniform pressure of the
+    # factored self weight, which goes straight to the soil (engine.checks._strength).
     strength = table.family is Family.STRENGTH
-    factored_weight = per_case(table.dead_factor) * (0.0 * weight if strength else weight)  # acts at L_f/2
+    factored_weight = per_case(table.dead_factor) * weight  # acts at L_f/2
     vertical = per_case(table.applied_vertical) + factored_weight
     lateral = overturning.lateral_moment(per_case(table.shear_moment), per_case(table.shear), d)  # sum f H (h + t_f)
     r = 0.0 if strength else table.criteria.seismic_overturning_reduction

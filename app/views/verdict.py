@@ -138,6 +138,7 @@ class VerdictView(QWidget):
         for row in self.rows.values():
             for widget in row:
                 self.grid.removeWidget(widget)
+                widget.hide()  # deleteLater waits for the event loop: never paint a removed row meanwhile
                 widget.deleteLater()
         self.rows = {}
         for r, check in enumerate(checks):
@@ -158,6 +159,11 @@ class VerdictView(QWidget):
                 self.grid.addWidget(widget, r, c)
                 widget.setVisible(self.checked)
             self.rows[check] = (name, bar, ratio, verdict, case)
+        # never squeezed below its rows (six with the concrete checks): the tabs under it give way
+        layout = self.layout()
+        if layout is not None:
+            layout.activate()
+            self.setMinimumHeight(layout.minimumSize().height())
 
     def render_unchecked(self, wall: Wall, missing: str) -> None:
         """The project cannot be checked (site values missing): say so, and what to enter, in place of ratios."""

@@ -1,9 +1,13 @@
 """The footing's transverse design over every strength case and candidate size, shared by the
 flexure and one-way shear checks (ACI 318-19; formulas in :mod:`engine.concrete`).
 
-Member design takes the net soil pressure of the factored wall loads only (the footing's own weight
-and the soil on it go straight to the soil), at the most heavily loaded point of the rigid-footing
-pressure along the length: q_u = the largest q_max over the strength cases. The design across the
+Member design takes the net soil pressure of the factored wall loads (the footing's own weight and the
+soil on it go straight to the soil), at the most heavily loaded point of the rigid-footing pressure
+along the length: q_u = the largest, over the strength cases, of q_max less the uniform pressure of
+the factored self weight f_D W_f / (B L_f). With uniform wall loads this is the factored wall load
+over B, as in the textbooks; with an eccentric resultant it keeps the pressure's shape that of the
+footing as it stands on the soil (a case with no equilibrium fails the stability checks and puts no
+member demand here). The design across the
 width is then that of a unit strip under q_u (McCormac & Brown, *Design of Reinforced Concrete*, 9th
 ed., section 12.4; ACI 318-19 13.2.7). A case with no equilibrium on the soil puts no member demand
 here: it fails the stability checks already.
@@ -56,8 +60,11 @@ def strength_grid(state: Statics) -> StrengthGrid:
     concrete = table.concrete
     assert concrete is not None, "a strength table carries the concrete settings"
     wall = table.wall
-    q = np.where(np.asarray(state.stable), np.asarray(state.q_max, dtype=float), 0.0)
-    q = np.where(np.isfinite(q), q, 0.0)
+    # net pressure: the rigid-footing peak less the uniform pressure of the factored self weight
+    # f_D W_f / (B L_f), which the footing and the soil on it carry straight to the soil
+    own = np.asarray(state.factored_weight, dtype=float) / (state.width * table.length)
+    q = np.where(np.asarray(state.stable), np.asarray(state.q_max, dtype=float) - own, 0.0)
+    q = np.where(np.isfinite(q), np.maximum(q, 0.0), 0.0)
     if q.shape[0]:
         index = np.argmax(q, axis=0)
         q_u = np.max(q, axis=0)
