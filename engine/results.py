@@ -145,6 +145,8 @@ class WallResult:
     governing: dict[Check, Governing]
     table: CaseTable
     evaluation: Evaluation
+    strength_table: CaseTable | None = None
+    strength_evaluation: Evaluation | None = None
 
     @property
     def passes(self) -> bool:
@@ -227,6 +229,13 @@ def check_wall(project: Project, wall: Wall, table: CaseTable | None = None) -> 
     table = table or case_table(wall, project.soil, project.criteria, project.site)
     b, d = wall.footing.width, wall.footing.thickness
     ev = evaluate(table, b, d)
+    strength = strength_table(project, wall)
+    strength_ev = evaluate(strength, b, d) if strength is not None else None
+    strength_governing = (
+        {check: governing_case(strength, strength_ev, check) for check in strength.checks}
+        if strength is not None and strength_ev is not None
+        else {}
+    )
     sw = self_weight(wall, project.soil, b, d)
     return WallResult(
         wall_id=wall.id,
@@ -235,12 +244,11 @@ def check_wall(project: Project, wall: Wall, table: CaseTable | None = None) -> 
         length=wall.footing_length,
         self_weight=SelfWeight(footing=float(sw.footing), stem=float(sw.stem), soil=float(sw.soil)),
         cases=CaseResults(table, ev),
-        governing={
-            **{check: governing_case(table, ev, check) for check in table.checks},
-            **_strength_governing(project, wall, b, d),
-        },
+        governing={**{check: governing_case(table, ev, check) for check in table.checks}, **strength_governing},
         table=table,
         evaluation=ev,
+        strength_table=strength,
+        strength_evaluation=strength_ev,
     )
 
 
@@ -249,14 +257,6 @@ def strength_table(project: Project, wall: Wall) -> CaseTable | None:
     if project.concrete is None:
         return None
     return case_table(wall, project.soil, project.criteria, project.site, project.concrete, Family.STRENGTH)
-
-
-def _strength_governing(project: Project, wall: Wall, width: float, thickness: float) -> dict[Check, Governing]:
-    table = strength_table(project, wall)
-    if table is None:
-        return {}
-    ev = evaluate(table, width, thickness)
-    return {check: governing_case(table, ev, check) for check in table.checks}
 
 
 def check_project(project: Project) -> tuple[WallResult, ...]:
@@ -323,6 +323,7 @@ def concrete_json(result: WallResult) -> dict[str, Any] | None:
         return None
     return {
         "plain": flexure.plain,
+        "longitudinal": longitudinal_json(result),
         "transverse": {
             "q_u": _num(flexure.q_u),
             "combination": flexure.combination or None,
@@ -336,7 +337,35 @@ def concrete_json(result: WallResult) -> dict[str, Any] | None:
             "development_length": _num(flexure.development_length),
             "development_available": _num(flexure.development_available),
         },
-        "longitudinal": None,
+    }
+
+
+def longitudinal_json(result: WallResult, stations: int = 101) -> dict[str, Any] | None:
+    """The design along the length (the footing as a beam, ACI 318-19), for the governing strength
+    case: extreme moments and shear, the bars of each face, and the diagram as [[x, V, M], ...]."""
+    from .concrete.along import design_along
+
+    table, ev = result.strength_table, result.strength_evaluation
+    if table is None or ev is None or not table.cases or table.concrete is None:
+        return None
+    design, index, diagram = design_along(table, ev, table.concrete)
+    case = table.cases[index]
+    step = max(1, len(diagram.x) // stations)
+    points = [
+        [float(x), float(v), float(m)]
+        for x, v, m in zip(diagram.x[::step], diagram.shear_right[::step], diagram.moment[::step], strict=True)
+    ]
+    return {
+        "combination": case.combination.name,
+        "direction": case.direction.value,
+        "moment_bottom": _num(diagram.max_moment),
+        "moment_top": _num(diagram.min_moment),
+        "shear": _num(diagram.max_shear),
+        "bars_bottom": design.bottom.bars or None,
+        "bars_top": design.top.bars or None,
+        "passes": design.passes,
+        "message": design.message,
+        "diagram": points,
     }
 
 

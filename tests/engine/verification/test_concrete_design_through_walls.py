@@ -120,3 +120,44 @@ def test_without_a_concrete_section_no_strength_check_runs():
     project = parse_project(raw)
     result = check_wall(project, project.walls[0])
     assert {c.id for c in result.governing} == {"overturning", "sliding", "bearing", "embedment"}
+
+
+@pytest.mark.parametrize("construction", ["concrete", "masonry", "light-frame"])
+def test_the_footing_beam_closes_in_every_strength_case(construction):
+    """Statics: wall loads, chord couple or rigid-wall pressure, self weight and the soil balance, so
+    V and M vanish beyond the far end in every strength case of every demo wall."""
+    from kernline.engine.concrete.along import case_diagram
+    from kernline.engine.resources import resource_path
+
+    raw = json.loads(resource_path("demo.kernline").read_text(encoding="utf-8"))
+    raw["concrete"] = {}
+    for wall in raw["walls"]:
+        wall["construction"] = construction
+    project = parse_project(raw)
+    for wall in project.walls:
+        result = check_wall(project, wall)
+        table, ev = result.strength_table, result.strength_evaluation
+        for i in range(len(table.cases)):
+            if not bool(ev.statics.stable[i]):
+                continue
+            diagram = case_diagram(table, ev, i)
+            scale = abs(float(ev.statics.vertical[i])) * table.length + 1.0
+            assert abs(diagram.closure_moment) <= 1e-9 * scale, (wall.id, i)
+            assert abs(diagram.closure_shear) <= 1e-9 * (abs(float(ev.statics.vertical[i])) + 1.0), (wall.id, i)
+
+
+def test_results_json_reports_the_design_along_the_length():
+    """The governing strength case along the length, its bars and its diagram [[x, V, M], ...]."""
+    from kernline.engine.resources import resource_path
+
+    raw = json.loads(resource_path("demo.kernline").read_text(encoding="utf-8"))
+    raw["concrete"] = {}
+    project = parse_project(raw)
+    doc = results_json(tuple(check_wall(project, w) for w in project.walls), project=project)
+    for wall in doc["walls"]:
+        along = wall["concrete"]["longitudinal"]
+        assert along["bars_bottom"] and along["diagram"] and len(along["diagram"][0]) == 3
+        first = along["diagram"][0]
+        assert first[0] == pytest.approx(0.0) and first[2] == pytest.approx(0.0, abs=1e-6)  # M = 0 at the free start
+        assert isinstance(along["passes"], bool)
+    json.dumps(doc, allow_nan=False)

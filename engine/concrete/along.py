@@ -1,0 +1,121 @@
+"""The wall's factored loads as loads on the footing-beam, for the design along the length.
+
+For one strength case (a combination in one direction) the footing carries, as a beam along L_f
+(statics; the soil pressure is the rigid-footing one of :mod:`engine.soil_pressure`):
+
+* its factored self weight f_D W_f as a uniform line load over the whole length;
+* the wall's factored vertical line and point loads where they act (mirrored about the wall's
+  mid-length in direction "-" when they reverse);
+* the overturning moment of the factored shears about the base, M = direction · sum f H (h + t_f),
+  delivered as the wall's construction delivers it: a concrete or masonry wall as the linear
+  pressure of a rigid wall (strips of uniform load whose moment is M and whose sum is zero); a
+  light-frame wall as a chord couple at its ends, each chord ``chord_offset`` inside the wall's end
+  (:func:`engine.concrete.longitudinal.chord_couple`).
+
+The pressure under the footing balances all of it, so the diagram closes (V = M = 0 beyond the far
+end), which the caller can check.
+"""
+
+from __future__ import annotations
+
+from typing import TYPE_CHECKING
+
+import numpy as np
+
+from ..loads import self_weight
+from ..model import LateralLoad, LineLoad, LoadCase, PointLoad, WallConstruction
+from .longitudinal import (
+    BeamDiagram,
+    BeamLineLoad,
+    BeamPointLoad,
+    LongitudinalDesign,
+    beam_diagram,
+    chord_couple,
+    design_longitudinal,
+    rigid_soil_stations,
+)
+
+if TYPE_CHECKING:  # pragma: no cover
+    from ..stability import CaseTable, Evaluation
+
+# Strips that carry a rigid wall's overturning as a linear pressure along the wall (even, so the
+# middle strip boundary sits at the wall's mid-length).
+WALL_STRIPS = 24
+
+
+def case_diagram(table: CaseTable, evaluation: Evaluation, index: int) -> BeamDiagram:
+    """The beam diagram of strength case ``index`` on the size ``evaluation`` was made for."""
+    wall = table.wall
+    case = table.cases[index]
+    combo, sign = case.combination, case.direction.sign
+    width = float(np.asarray(evaluation.statics.width))
+    thickness = float(np.asarray(evaluation.statics.thickness))
+    length = table.length
+    start = wall.footing.extension_start
+    lines: list[BeamLineLoad] = []
+    points: list[BeamPointLoad] = []
+    weight = float(self_weight(wall, table.soil, width, thickness).total) * combo.factor(LoadCase.D)
+    if weight:
+        lines.append(BeamLineLoad(value=weight / length, start=0.0, end=length, label="self weight"))
+    moment = 0.0
+    for load in wall.loads:
+        f = combo.factor(load.case)
+        if f == 0.0:
+            continue
+        mirror = sign < 0 and getattr(load, "reverses", False)
+        if isinstance(load, LineLoad):
+            a, b = (wall.length - load.end, wall.length - load.start) if mirror else (load.start, load.end)
+            lines.append(BeamLineLoad(value=f * load.value, start=start + a, end=start + b, label=load.label))
+        elif isinstance(load, PointLoad):
+            at = wall.length - load.at if mirror else load.at
+            points.append(BeamPointLoad(value=f * load.value, at=start + at, label=load.label))
+        elif isinstance(load, LateralLoad) and sign != 0:
+            moment += sign * f * load.value * (load.height + thickness)
+    if moment:
+        wall_start, wall_end = start, start + wall.length
+        if wall.construction is WallConstruction.LIGHT_FRAME:
+            points.extend(chord_couple(moment, wall_start=wall_start, wall_end=wall_end, offset=wall.chord_offset))
+        else:
+            edges = np.linspace(wall_start, wall_end, WALL_STRIPS + 1)
+            mids = 0.5 * (edges[:-1] + edges[1:]) - 0.5 * (wall_start + wall_end)
+            step = float(edges[1] - edges[0])
+            scale = moment / float(np.sum(step * mids * mids))  # sum w_i step (x_i - x_mid) = M
+            for k in range(WALL_STRIPS):
+                lines.append(BeamLineLoad(value=scale * float(mids[k]), start=float(edges[k]), end=float(edges[k + 1])))
+    vertical = float(evaluation.statics.vertical[index])
+    eccentricity = float(evaluation.statics.eccentricity[index])
+    x, q = rigid_soil_stations(vertical, eccentricity, width, length)
+    return beam_diagram(x, q, width, lines, points)
+
+
+def design_along(table: CaseTable, evaluation: Evaluation, concrete: object) -> tuple[LongitudinalDesign, int, BeamDiagram]:
+    """Design the longitudinal bars for every strength case at the evaluated size (ACI 318-19).
+
+    Bars given in the project are checked; otherwise the bottom bars are chosen for the case with the
+    largest sagging moment and the top bars for the case with the largest hogging one, and then every
+    case is checked with those bars. Returns the design of the case that governs (the first failing
+    one, else the one with the largest moment) with its index and diagram.
+    """
+    from .transverse import Materials
+
+    wall = table.wall
+    thickness = float(np.asarray(evaluation.statics.thickness))
+    materials = Materials(fc=concrete.fc, fy=concrete.fy, lam=concrete.lam, cover=concrete.cover)  # type: ignore[attr-defined]
+    given = wall.footing.reinforcement
+    diagrams = [case_diagram(table, evaluation, i) for i in range(len(table.cases))]
+    if not diagrams:
+        raise ValueError("no strength case")
+    sag = int(np.argmax([d.max_moment for d in diagrams]))
+    hog = int(np.argmin([d.min_moment for d in diagrams]))
+    bottom = given.bottom if given is not None and given.bottom is not None else None
+    top = given.top if given is not None and given.top is not None else None
+    if bottom is None:
+        chosen = design_longitudinal(diagrams[sag], thickness=thickness, materials=materials, top=top)
+        bottom = (chosen.bottom.count, chosen.bottom.bar) if chosen.bottom.bar is not None else None
+    if top is None:
+        chosen = design_longitudinal(diagrams[hog], thickness=thickness, materials=materials, bottom=bottom)
+        top = (chosen.top.count, chosen.top.bar) if chosen.top.bar is not None else None
+    designs = [design_longitudinal(d, thickness=thickness, materials=materials, bottom=bottom, top=top) for d in diagrams]
+    failing = [i for i, d in enumerate(designs) if not d.passes]
+    index = failing[0] if failing else (sag if diagrams[sag].max_moment >= -diagrams[hog].min_moment else hog)
+    return designs[index], index, diagrams[index]
