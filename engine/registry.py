@@ -100,8 +100,9 @@ class Check(metaclass=_CheckMeta):
 
     @property
     def per_case(self) -> bool:
-        """True when the check is evaluated for each design case (False for a geometric check)."""
-        return self.family is not Family.GEOMETRY
+        """True when the check has a ratio for each design case (the service checks). A geometric
+        check has one value per size; a strength check is judged at its most loaded case."""
+        return self.family is Family.SERVICE
 
     def evaluate(self, state: Any) -> CheckArrays:
         """The check's ratio and parts for every case and candidate (``state``: stability.Statics)."""

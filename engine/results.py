@@ -348,7 +348,7 @@ def longitudinal_json(result: WallResult, stations: int = 101) -> dict[str, Any]
     table, ev = result.strength_table, result.strength_evaluation
     if table is None or ev is None or not table.cases or table.concrete is None:
         return None
-    design, index, diagram = design_along(table, ev, table.concrete)
+    design, index, diagram = design_along(table, ev)
     case = table.cases[index]
     step = max(1, len(diagram.x) // stations)
     points = [

@@ -209,7 +209,7 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
         _, extension, thickness, width, _, row, col = best
         message = _why_smallest(all_checks, check_normalized, passes, allowed, row, col)
         if extensions.size > 1:
-            message += _why_this_length(project, extensions, k, maps, widths, thicknesses)
+            message += _why_this_length(project, extensions, k, [bool(m[4].any()) for m in maps])
         suggestions: tuple[str, ...] = ()
     else:
         width, thickness, extension = None, None, None
@@ -234,15 +234,12 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
     )
 
 
-def _why_this_length(
-    project: Project, extensions: np.ndarray, k: int, maps: list, widths: np.ndarray, thicknesses: np.ndarray
-) -> str:
-    """Say what the chosen extension saves against the shorter ones."""
+def _why_this_length(project: Project, extensions: np.ndarray, k: int, any_passes: list[bool]) -> str:
+    """Say what the chosen extension (index ``k``) saves against the shorter ones."""
     e = float(extensions[k])
-    shorter = [i for i in range(k) if maps[i][4].any()]
     if k == 0:
         return "; no extension needed (the shortest footing has the least concrete)"
-    if not shorter:
+    if not any(any_passes[:k]):
         return f"; {format_length(e, project.units)} more at each end is the least extension that lets any size pass"
     return f"; {format_length(e, project.units)} more at each end gives the least concrete"
 

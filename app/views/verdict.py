@@ -15,6 +15,7 @@ from kernline.engine.model import LateralLoad, Wall
 from kernline.engine.registry import Check
 from kernline.engine.results import Governing, WallResult
 from kernline.engine.stability import table_checks
+from kernline.engine.summary import case_text
 from kernline.engine.units import format_length
 from PySide6.QtCore import QRectF, QSize, Qt
 from PySide6.QtGui import QBrush, QColor, QPainter, QPalette, QPen
@@ -36,12 +37,6 @@ def _stable(result: WallResult, g: Governing) -> bool:
     """Whether the governing case has equilibrium on the soil (the engine's evaluation, per case)."""
     stable = result.evaluation.stable
     return g.case_index is None or not 0 <= g.case_index < len(stable) or bool(stable[g.case_index])
-
-
-def case_text(g: Governing) -> str:
-    if math.isinf(g.ratio) or g.case_index is None:
-        return ""
-    return g.combination if g.direction == "none" else f"{g.combination} ({g.direction})"
 
 
 def depth_texts(g: Governing, units: str) -> tuple[str, str] | None:

@@ -14,7 +14,7 @@ from typing import TYPE_CHECKING, Any
 
 import numpy as np
 
-from ..concrete.bars import spaced_text
+from ..concrete.bars import bar, spaced_text
 from ..registry import Check, CheckArrays, Family, register_check
 from ..registry import json_number as _num
 from ._strength import case_words, strength_grid
@@ -50,10 +50,6 @@ class FlexureResult:
 class FlexureCheck(Check):
     """The least of the flexure ratios of the transverse design, at the most loaded strength case."""
 
-    @property
-    def per_case(self) -> bool:
-        return False
-
     def evaluate(self, state: Statics) -> CheckArrays:
         grid = strength_grid(state)
         names = _PLAIN if grid.plain else _REINFORCED
@@ -73,7 +69,7 @@ class FlexureCheck(Check):
         else:
             steel_required, steel_provided = float(d.steel_required), float(d.steel_provided)
             development, available = float(d.development_length), float(d.development_available)
-            bars = _bars_text(d, state.table.wall)
+            bars = _bars_text(d)
         return FlexureResult(
             plain=grid.plain,
             q_u=float(grid.q_u),
@@ -106,10 +102,8 @@ class FlexureCheck(Check):
         }
 
 
-def _bars_text(design: Any, wall: Any) -> str:
+def _bars_text(design: Any) -> str:
     """The transverse bars checked or chosen, as "#5 @ 12 in"."""
-    from ..concrete.bars import bar
-
     size = int(design.size)
     if size <= 0 or not np.isfinite(float(design.spacing)):
         return "none pass"

@@ -41,10 +41,6 @@ class OneWayShearResult:
 class OneWayShearCheck(Check):
     """φVc / Vu at d from the moment section (at h_s for plain), at the most loaded strength case."""
 
-    @property
-    def per_case(self) -> bool:
-        return False
-
     def evaluate(self, state: Statics) -> CheckArrays:
         grid = strength_grid(state)
         ratio = np.broadcast_to(grid.design.ratios["shear"], state.grid_shape)

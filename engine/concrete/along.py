@@ -88,7 +88,7 @@ def case_diagram(table: CaseTable, evaluation: Evaluation, index: int) -> BeamDi
     return beam_diagram(x, q, width, lines, points)
 
 
-def design_along(table: CaseTable, evaluation: Evaluation, concrete: object) -> tuple[LongitudinalDesign, int, BeamDiagram]:
+def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[LongitudinalDesign, int, BeamDiagram]:
     """Design the longitudinal bars for every strength case at the evaluated size (ACI 318-19).
 
     Bars given in the project are checked; otherwise the bottom bars are chosen for the case with the
@@ -98,9 +98,11 @@ def design_along(table: CaseTable, evaluation: Evaluation, concrete: object) -> 
     """
     from .transverse import Materials
 
-    wall = table.wall
+    wall, concrete = table.wall, table.concrete
+    if concrete is None:
+        raise ValueError("the design along the length needs the project's concrete settings")
     thickness = float(np.asarray(evaluation.statics.thickness))
-    materials = Materials(fc=concrete.fc, fy=concrete.fy, lam=concrete.lam, cover=concrete.cover)  # type: ignore[attr-defined]
+    materials = Materials(fc=concrete.fc, fy=concrete.fy, lam=concrete.lam, cover=concrete.cover)
     given = wall.footing.reinforcement
     diagrams = [case_diagram(table, evaluation, i) for i in range(len(table.cases))]
     if not diagrams:
