@@ -90,7 +90,9 @@ def test_the_check_finds_a_pointer(tmp_path):
     clean.write_text("Das, *Principles of Foundation Engineering*.\n", encoding="utf-8")
     pointing = tmp_path / "pointing.py"
     pointing.write_text('"""Doc."""\n# see ' + "../" + _SIBLING + "/reference/notes.md\n", encoding="utf-8")
-    assert pointers_outside([clean, pointing], root=tmp_path) == ["pointing.py:2: # see " + "../" + _SIBLING + "/reference/notes.md"]
+    assert pointers_outside([clean, pointing], root=tmp_path) == [
+        "pointing.py:2: # see " + "../" + _SIBLING + "/reference/notes.md"
+    ]
 
 
 def test_the_fallback_walk_skips_caches(tmp_path):
