@@ -41,7 +41,7 @@ from PySide6.QtWidgets import (
     QWidget,
 )
 
-from . import commands, recovery
+from . import commands, qt_platform, recovery
 from .document import ProjectDocument, absolute, split_field
 from .recovery import Orphan, RecoverySlot
 from .runner import PackageOutcome, PackageWriter, SizingBatch, SizingRunner
@@ -1114,7 +1114,14 @@ def launch(path: str | None = None, demo: bool = False) -> int:
     When ``KERNLINE_EXIT_AFTER_MS`` holds a positive whole number, the run ends with exit code 0 that many
     milliseconds after the window is shown, without the recovery question (the frozen build's smoke check);
     any other value is ignored.
+
+    When no display plugin Qt would try can load (a system library missing), one line naming the Debian
+    packages to install goes to stderr and the exit code is 3, instead of Qt's own abort.
     """
+    problem = qt_platform.platform_problem()
+    if problem is not None:
+        print(problem, file=sys.stderr)
+        return qt_platform.EXIT_NO_PLATFORM
     app = QApplication.instance() or QApplication(sys.argv[:1])
     app.setOrganizationName("Kernline")
     app.setApplicationName("Kernline")
