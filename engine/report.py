@@ -964,8 +964,11 @@ class _Builder:
         parts.append(_spans(eq.result, bold=True))
         first = [Span(r.text, bold=True, sub=r.sub) for r in eq.symbol] + [Span(" = "), *parts[0]]
         lines = [first, *[[Span("= "), *p] for p in parts[1:]]]
-        if eq.note:
-            lines.append([replace(sp, small=True, color="grey") for sp in _spans(eq.note)])
+        note = _spans(eq.note) if eq.note else []
+        if eq.clause:
+            note = [Span(f"ACI 318-19 {eq.clause}" + ("; " if note else "")), *note]
+        if note:
+            lines.append([replace(sp, small=True, color="grey") for sp in note])
         return self.classes["RichText"](lines, _STYLES["eq"], self.fonts, self.text)
 
     def drawing_row(self, row: DrawingRow) -> Any:

@@ -20,12 +20,12 @@ from collections.abc import Sequence
 from dataclasses import dataclass, field, replace
 from typing import Any
 
-from . import CAUTION, __version__
-from .checks.embedment import MIN_DEPTH
-from .combinations import combinations_of
-from .errors import InputError
-from .loads import VerticalResultant, lateral_resultants, vertical_resultants
-from .model import (
+from .. import CAUTION, __version__
+from ..checks.embedment import MIN_DEPTH
+from ..combinations import combinations_of
+from ..errors import InputError
+from ..loads import VerticalResultant, lateral_resultants, vertical_resultants
+from ..model import (
     ALL_CHECKS,
     BearingBasis,
     Check,
@@ -38,12 +38,12 @@ from .model import (
     SlidingBasis,
     Wall,
 )
-from .results import CaseResult, Governing, WallResult, check_wall
-from .schedule import schedule_rows
-from .sizing import SizingResult, size_footing
-from .soil_pressure import PressureDiagram, pressure_diagram
-from .stability import reported_checks, table_checks
-from .units import Kind, format_length, format_quantity, to_display, unit_label
+from ..results import CaseResult, Governing, WallResult, check_wall
+from ..schedule import schedule_rows
+from ..sizing import SizingResult, size_footing
+from ..soil_pressure import PressureDiagram, pressure_diagram
+from ..stability import reported_checks, table_checks
+from ..units import Kind, format_length, format_quantity, to_display, unit_label
 
 PROGRAM = "Kernline"
 
@@ -141,13 +141,17 @@ class KeyValues:
 
 @dataclass(frozen=True, slots=True)
 class Equation:
-    """``symbol = formula = numbers = result`` (formula and numbers may be absent)."""
+    """``symbol = formula = numbers = result`` (formula and numbers may be absent).
+
+    ``clause`` is the standard's clause the step follows, printed in the margin column.
+    """
 
     symbol: Rich
     formula: Rich | None
     numbers: Cell | None
     result: Cell
     note: Cell = ""
+    clause: str = ""
 
 
 @dataclass(frozen=True, slots=True)
@@ -391,6 +395,8 @@ class _Fmt:
 
 _FOOT = 0.3048
 
+Formatter = _Fmt  # the public name of the display formatter
+
 
 def minus(text: str) -> str:
     """Text with a leading hyphen-minus turned into a true minus sign (−), so it cannot read as a dash."""
@@ -587,6 +593,9 @@ def build_package(
     entries += [ContentsEntry(s.title, (("sheet", s.key),)) for s in sections]
     for r in reports:
         sections.append(_wall_section(project, r, fmt))
+        member = _concrete_section(project, r, fmt)
+        if member is not None:
+            sections.append(member)
     for r in reports:
         sections.append(_appendix(project, r, fmt))
     for r in reports:
@@ -1092,6 +1101,17 @@ def _wall_section(project: Project, report: WallReport, fmt: _Fmt) -> Section:
     blocks += _results_table(result)
     blocks += _sizing(project, report, fmt)
     return Section(f"wall:{wall.id}", title, f"Wall {wall.id}", tuple(blocks))
+
+
+def _concrete_section(project: Project, report: WallReport, fmt: _Fmt) -> Section | None:
+    """The wall's concrete design sheet (None when the project has no concrete section)."""
+    from .concrete import concrete_blocks
+
+    blocks = concrete_blocks(project, report, fmt)
+    if blocks is None:
+        return None
+    wall = report.wall
+    return Section(f"concrete:{wall.id}", f"{wall_title(wall)}: concrete design", f"Wall {wall.id} concrete", tuple(blocks))
 
 
 def _wall_verdict(result: WallResult) -> Verdict:

@@ -1,0 +1,610 @@
+"""The concrete design sheet of a wall: the footing as an ACI 318-19 member, across its width and along its length.
+
+Every number is read from the engine: the transverse design of the flexure and one-way shear checks
+(:func:`engine.checks._strength.strength_grid`, the arrays their records come from), and the design
+along the length (:func:`engine.concrete.along.design_along`). Substituted lines only restate those
+values and the inputs so that a reviewer can redo them; nothing here decides a design.
+
+Equations are written in the inch-pound form of ACI 318-19 (√f'c in psi). In SI projects the
+capacity equations print their formula and result, without the inch-pound substitution.
+"""
+
+from __future__ import annotations
+
+import math
+from typing import TYPE_CHECKING, Any
+
+from ..checks._strength import strength_grid
+from ..concrete.along import design_along
+from ..concrete.bars import bar
+from ..concrete.longitudinal import BeamDiagram, LongitudinalDesign
+from ..concrete.plain import FLEXURE_COEFFICIENT, MIN_THICKNESS, PHI_PLAIN, SHEAR_COEFFICIENT, SOIL_ALLOWANCE
+from ..concrete.transverse import (
+    MASONRY_SECTION,
+    MAX_SPACING,
+    MAX_SPACING_THICKNESSES,
+    MIN_DEPTH_ABOVE_BARS,
+    MIN_STEEL_RATIO,
+    VC_COEFFICIENT,
+    VC_LIMIT,
+)
+from ..model import WallConstruction
+from ..units import Kind
+
+if TYPE_CHECKING:  # pragma: no cover
+    from ..model import Project
+    from . import Block, Cell, Formatter, WallReport
+
+INCH = 0.0254
+FOOT = 0.3048
+PSI = 4.4482216152605 / INCH**2
+
+
+# ---------------------------------------------------------------------------------------------
+# Display of the member quantities (units at the edge: SI in, the project's display units out)
+# ---------------------------------------------------------------------------------------------
+
+
+class MemberUnits:
+    """Formats per-length member quantities in the project's display units (display only)."""
+
+    def __init__(self, fmt: Formatter) -> None:
+        self.fmt = fmt
+        self.us = fmt.units == "US"
+
+    def small(self, value: float, places: int = 2) -> str:
+        """A member dimension: decimal inches (US) or millimetres (SI)."""
+        return f"{value / INCH:,.{places}f} in" if self.us else f"{value * 1000.0:,.0f} mm"
+
+    def feet(self, value: float) -> str:
+        """A cantilever or distance substituted in decimal feet (metres in SI)."""
+        return self.fmt.decimal(value)
+
+    def stress(self, value: float) -> str:
+        """f'c and fy: psi (US) or MPa (SI)."""
+        return f"{value / PSI:,.0f} psi" if self.us else f"{value / 1e6:,.1f} MPa"
+
+    def q(self, value: float) -> str:
+        """A factored soil pressure: ksf to three places (US) or kPa to one (SI)."""
+        return f"{value / (1000.0 * 4.4482216152605 / FOOT**2):,.3f} ksf" if self.us else f"{value / 1000.0:,.1f} kPa"
+
+    def moment(self, value: float) -> str:
+        """A moment per length of footing: kip·ft/ft (US) or kN·m/m (SI)."""
+        if self.us:
+            return f"{value * FOOT / (4448.2216152605 * FOOT):,.2f} kip·ft/ft"
+        return f"{value / 1000.0:,.2f} kN·m/m"
+
+    def shear(self, value: float) -> str:
+        """A shear per length of footing: kip/ft (US) or kN/m (SI)."""
+        return f"{value * FOOT / 4448.2216152605:,.2f} kip/ft" if self.us else f"{value / 1000.0:,.2f} kN/m"
+
+    def area(self, value: float) -> str:
+        """Steel per length of footing: in²/ft (US) or mm²/m (SI)."""
+        return f"{value * FOOT / INCH**2:,.3f} in²/ft" if self.us else f"{value * 1e6:,.0f} mm²/m"
+
+    def bar_area(self, value: float) -> str:
+        return f"{value / INCH**2:,.2f} in²" if self.us else f"{value * 1e6:,.0f} mm²"
+
+    def total_area(self, value: float) -> str:
+        """A total steel area (longitudinal bars): in² (US) or mm² (SI)."""
+        return f"{value / INCH**2:,.2f} in²" if self.us else f"{value * 1e6:,.0f} mm²"
+
+    def force(self, value: float) -> str:
+        return self.fmt.force(value)
+
+    def beam_moment(self, value: float) -> str:
+        return self.fmt.moment(value)
+
+    def strip(self) -> str:
+        """The width b of the design strip: 12 in (US) or 1 m (SI)."""
+        return "12 in" if self.us else "1 m"
+
+
+def _construction_words(construction: WallConstruction) -> str:
+    return {
+        WallConstruction.CONCRETE: "concrete wall: the moment section at the face of the wall",
+        WallConstruction.MASONRY: "masonry wall: the moment section halfway between the wall's centre and its face",
+        WallConstruction.LIGHT_FRAME: "light-frame wall on a sill, treated as masonry (assumed): the moment section "
+        "halfway between the wall's centre and its face",
+    }[construction]
+
+
+# ---------------------------------------------------------------------------------------------
+# The sheet
+# ---------------------------------------------------------------------------------------------
+
+
+def concrete_blocks(project: Project, report: WallReport, fmt: Formatter) -> list[Block] | None:
+    """The blocks of the wall's concrete design sheet, or None without a concrete section."""
+    from . import Heading, KeyValues, Verdict, formula, plain
+
+    result = report.result
+    concrete = project.concrete
+    table, evaluation = result.strength_table, result.strength_evaluation
+    if concrete is None or table is None or evaluation is None:
+        return None
+    flexure = next((g for c, g in result.governing.items() if c.id == "flexure"), None)
+    shear = next((g for c, g in result.governing.items() if c.id == "one_way_shear"), None)
+    if flexure is None or shear is None or flexure.record is None or shear.record is None:
+        return None
+    u = MemberUnits(fmt)
+    wall = report.wall
+    grid = strength_grid(evaluation.statics)
+    along: tuple[LongitudinalDesign, int, BeamDiagram] | None = design_along(table, evaluation) if table.cases else None
+    passes_across = flexure.passes and shear.passes
+    passes_along = along is None or along[0].passes
+    title = f"Wall {wall.id}: concrete design of the footing (ACI 318-19)"
+    words = "PASSES" if passes_across and passes_along else "FAILS"
+    parts = [f"across the width {'passes' if passes_across else 'FAILS'}"]
+    if along is not None:
+        parts.append(f"along the length {'passes' if passes_along else 'FAILS'}")
+    blocks: list[Block] = [
+        Heading(plain(title)),
+        Verdict(passes_across and passes_along, f"The footing {words} as a concrete member: " + ", ".join(parts) + "."),
+        KeyValues(
+            (
+                (formula("f'_{c} / f_{y}"), f"{u.stress(concrete.fc)} / {u.stress(concrete.fy)}"),
+                ("Cover to the bottom bars", u.small(concrete.cover, 1 if u.us else 0)),
+                ("λ (lightweight factor)", f"{concrete.lam:g}"),
+                ("Footing B × h", f"{fmt.length(result.width)} × {fmt.length(result.thickness)}"),
+                ("Wall", plain(_construction_words(wall.construction))),
+                ("Reinforcement", "plain concrete (ACI 318-19 chapter 14)" if grid.plain else _given_words(wall)),
+            ),
+            columns=2,
+        ),
+        *strength_combination_blocks(project),
+    ]
+    blocks += _across(project, report, fmt, u, grid, flexure, shear)
+    if along is not None:
+        blocks += _along(report, fmt, u, *along)
+    return blocks
+
+
+def _given_words(wall: Any) -> str:
+    given = wall.footing.reinforcement
+    if given is None:
+        return "designed by the program (none given)"
+    parts = []
+    if given.transverse is not None:
+        parts.append("transverse given")
+    if given.bottom is not None:
+        parts.append("bottom given")
+    if given.top is not None:
+        parts.append("top given")
+    return ", ".join(parts) + "; the rest designed by the program" if parts else "designed by the program"
+
+
+def strength_combination_blocks(project: Project) -> list[Block]:
+    """The strength combinations in force, with the nominal-load note (ASCE 7-16 2.3.1, 2.3.6)."""
+    from . import Para, formula, plain
+
+    concrete = project.concrete
+    if concrete is None:
+        return []
+    combos = concrete.strength_method.combinations(project.criteria)
+    names = "; ".join(c.name for c in combos)
+    return [
+        Para(
+            plain(f"Strength combinations ({concrete.strength_method.title}): ")
+            + plain(names)
+            + formula(
+                ". W and E are the ASCE 7 nominal loads (the ASD combinations apply 0.6W and 0.7E), so these "
+                "combinations use 1.0W and 1.0E; E includes E_{v} = 0.2 S_{DS} D (ASCE 7-16 12.4.2.2). Every "
+                "combination is checked in both directions of the lateral load."
+            ),
+            "small",
+        )
+    ]
+
+
+def _across(
+    project: Project, report: WallReport, fmt: Formatter, u: MemberUnits, grid: Any, flexure: Any, shear: Any
+) -> list[Block]:
+    """Transverse design: q_u, the moment section, then reinforced (chapters 13, 22, 25) or plain (14)."""
+    from . import Equation, Group, Heading, formula
+
+    result, wall = report.result, report.wall
+    design = grid.design
+    rec = flexure.record
+    index = int(grid.case_index)
+    statics = report.result.strength_evaluation.statics  # type: ignore[union-attr]
+    q_peak = float(statics.q_max[index])
+    own = float(statics.factored_weight[index])
+    case = result.strength_table.cases[index] if result.strength_table is not None else None  # type: ignore[union-attr]
+    case_text = (
+        f"{case.combination.name} ({'+' if case.direction.value == '+' else '−' if case.direction.value == '-' else 'no lateral load'})"
+        if case
+        else ""
+    )
+    B, L = fmt.decimal(result.width), fmt.decimal(result.length)
+    t_w = wall.supported_thickness
+    c = float(design.cantilever)
+    eqs: list[Block] = [
+        Heading("Across the width: a strip " + u.strip() + " wide, cantilevered from the moment section", 2),
+        Equation(
+            formula("q_{u}"),
+            formula("q_{max} − f_{D} W / (B L_{f})"),
+            f"{u.q(q_peak)} − {fmt.carried(own, Kind.FORCE)} / ({B} × {L})",
+            u.q(rec.q_u),
+            formula(
+                f"net pressure of the factored wall loads at the most loaded point, {case_text}; the footing's own weight "
+                "and the soil on it go straight to the soil"
+            ),
+            clause="ACI 13.2.6.1",
+        ),
+    ]
+    if wall.construction is WallConstruction.CONCRETE:
+        eqs.append(
+            Equation(
+                formula("c"),
+                formula("(B − t_{w}) / 2"),
+                f"({B} − {fmt.decimal(t_w)}) / 2",
+                fmt.decimal(c),
+                "edge of the footing to the face of the wall",
+                clause="Table 13.2.7.1",
+            )
+        )
+    else:
+        eqs.append(
+            Equation(
+                formula("c"),
+                formula(f"(B − t_{{w}}) / 2 + {MASONRY_SECTION:g} t_{{w}}"),
+                f"({B} − {fmt.decimal(t_w)}) / 2 + {MASONRY_SECTION:g} × {fmt.decimal(t_w)}",
+                fmt.decimal(c),
+                "edge of the footing to halfway between the wall's centre and its face",
+                clause="Table 13.2.7.1",
+            )
+        )
+    eqs.append(
+        Equation(
+            formula("M_{u}"),
+            formula("q_{u} c² / 2"),
+            f"{u.q(rec.q_u)} × ({fmt.decimal(c)})² / 2",
+            u.moment(float(design.moment)),
+            clause="13.2.7.1",
+        )
+    )
+    if grid.plain:
+        return [Group(tuple(eqs[:3])), *eqs[3:], *_plain(result, fmt, u, grid, rec, shear.record)]
+    return [Group(tuple(eqs[:3])), *eqs[3:], *_reinforced(result, fmt, u, grid, flexure, shear)]
+
+
+def _reinforced(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, flexure: Any, shear: Any) -> list[Block]:
+    from . import Equation, Group, Table, Verdict, formula, plain, ratio_text
+
+    design = grid.design
+    concrete_h = result.thickness
+    rec = flexure.record
+    size = int(design.size)
+    the_bar = bar(size) if size > 0 else None
+    d = float(design.effective_depth)
+    c = float(design.cantilever)
+    spacing = float(design.spacing)
+    db = the_bar.diameter if the_bar is not None else 0.0
+    h_in = u.small(concrete_h)
+    blocks: list[Block] = [
+        Equation(
+            formula("d"),
+            formula("h − cover − d_{b} / 2"),
+            f"{h_in} − {u.small(float(grid_cover(result)))} − {u.small(db, 3)} / 2",
+            u.small(d),
+            formula(f"at least {u.small(MIN_DEPTH_ABOVE_BARS, 0)} above the bottom bars ({rec.bars})"),
+            clause="13.3.1.2",
+        ),
+        Equation(
+            formula("A_{s,req}"),
+            formula("from M_{u} = φ A_{s} f_{y} (d − a/2), a = A_{s} f_{y} / (0.85 f'_{c} b), φ = 0.90"),
+            None,
+            u.area(float(design.steel_required)),
+            clause="22.2",
+        ),
+        Equation(
+            formula("A_{s,min}"),
+            formula(f"{MIN_STEEL_RATIO:g} b h"),
+            f"{MIN_STEEL_RATIO:g} × {u.strip()} × {h_in}" if u.us else None,
+            u.area(float(design.steel_minimum)),
+            clause="7.6.1.1",
+        ),
+        Equation(
+            formula("A_{s,prov}"),
+            formula("A_{b} b / s"),
+            (f"{u.bar_area(the_bar.area)} × 12 in / {u.small(spacing, 1)}" if u.us else None) if the_bar else None,
+            u.area(float(design.steel_provided)),
+            plain(f"{rec.bars}"),
+            clause="",
+        ),
+        Equation(
+            formula("s_{max}"),
+            formula(f"min({MAX_SPACING_THICKNESSES:g} h, {u.small(MAX_SPACING, 0)})"),
+            f"min({MAX_SPACING_THICKNESSES:g} × {h_in}, {u.small(MAX_SPACING, 0)})",
+            u.small(float(design.max_spacing), 1),
+            plain(f"s = {u.small(spacing, 1)}"),
+            clause="7.7.2.3",
+        ),
+        Equation(
+            formula("φM_{n}"),
+            formula("φ A_{s} f_{y} (d − a/2)"),
+            None,
+            u.moment(float(design.moment_capacity)),
+            formula(
+                f"φ = {float(design.phi_flexure):.2f} (Table 21.2.2), ε_{{t}} = {float(design.strain):.4f} ≥ 0.004 (7.3.3.1)"
+            ),
+            clause="22.2.2",
+        ),
+    ]
+    shear_blocks: list[Block] = [
+        Equation(
+            formula("V_{u}"),
+            formula("q_{u} (c − d)"),
+            f"{u.q(rec.q_u)} × ({fmt.decimal(c)} − {fmt.decimal(d)})",
+            u.shear(float(design.shear)),
+            "at d from the moment section" + ("; the section lies beyond the footing's edge: no demand" if c <= d else ""),
+            clause="13.2.7.2",
+        ),
+    ]
+    rho = float(design.steel_provided) / d if d > 0 else 0.0
+    coeff = min(VC_COEFFICIENT * rho ** (1.0 / 3.0), VC_LIMIT)
+    root = math.sqrt(min(result_fc(result) / PSI, 100.0**2))
+    phi = float(shear.record.phi)
+    lam = result.strength_table.concrete.lam
+    numbers = f"{phi:g} × {coeff:.3f} × {lam:g} × {root:.2f} psi × 12 in × {d / INCH:.2f} in" if u.us else None
+    shear_blocks.append(
+        Equation(
+            formula("φV_{c}"),
+            formula("φ min(8 ∛ρ_{w}, 5) λ √f'_{c} b d"),
+            numbers,
+            u.shear(float(design.shear_capacity)),
+            formula(
+                f"ρ_{{w}} = A_{{s,prov}} / (b d) = {rho * (1.0 if u.us else 1.0):.5f}; λ_{{s}} neglected for a footing (13.2.6.2); "
+                f"φ = {phi:g}" + (" (21.2.4.3, seismic design category D to F)" if phi < 0.75 else " (Table 21.2.1)")
+            ),
+            clause="22.5.5.1(c)",
+        )
+    )
+    dev: list[Block] = [
+        Equation(
+            formula("ℓ_{d}"),
+            formula("(3/40) (f_{y} / (λ √f'_{c})) ψ_{t} ψ_{e} ψ_{s} ψ_{g} / ((c_{b} + K_{tr}) / d_{b}) d_{b} ≥ 12 in"),
+            None,
+            u.small(float(design.development_length), 1),
+            formula("(c_{b} + K_{tr}) / d_{b} ≤ 2.5, K_{tr} = 0 (no stirrups)"),
+            clause="25.4.2.4",
+        ),
+        Equation(
+            formula("ℓ_{avail}"),
+            formula("c − cover"),
+            f"{u.small(c)} − {u.small(grid_cover(result))}",
+            u.small(float(design.development_available)),
+            "from the moment section to the bar's end, less the end cover",
+            clause="25.4.2.4",
+        ),
+    ]
+    ratios = design.ratios
+
+    def row(name: str, demand: str, capacity: str, key: str, clause: str) -> tuple[Cell, ...]:
+        r = float(ratios[key])
+        ok = r >= 1.0 - 1e-9
+        return (
+            name,
+            demand,
+            capacity,
+            "no demand" if math.isinf(r) else ratio_text(r, 1.0, ok),
+            clause,
+            "passes" if ok else "FAILS",
+        )
+
+    rows = (
+        row("Depth above the bars", u.small(MIN_DEPTH_ABOVE_BARS, 0), u.small(d), "depth", "13.3.1.2"),
+        row("Flexure", u.moment(float(design.moment)), u.moment(float(design.moment_capacity)), "flexure", "22.2"),
+        row("Minimum steel", u.area(float(design.steel_minimum)), u.area(float(design.steel_provided)), "minimum", "7.6.1.1"),
+        row("Bar spacing", u.small(spacing, 1), u.small(float(design.max_spacing), 1), "spacing", "7.7.2.3"),
+        row("Net tensile strain", "0.004", f"{float(design.strain):.4f}", "strain", "7.3.3.1"),
+        row("One-way shear", u.shear(float(design.shear)), u.shear(float(design.shear_capacity)), "shear", "22.5.5.1"),
+        row(
+            "Development",
+            u.small(float(design.development_length), 1),
+            u.small(max(float(design.development_available), 0.0), 1),
+            "development",
+            "25.4.2.4",
+        ),
+    )
+    fails = tuple(k for k, r in enumerate(rows) if r[-1] != "passes")
+    across_ok = flexure.passes and shear.passes
+    summary = Group(
+        (
+            Table(
+                ("Requirement", "Demand / limit", "Provided", "Ratio", "ACI 318-19", "Result"),
+                rows,
+                (0.22, 0.2, 0.2, 0.1, 0.14, 0.14),
+                align="LRRRLL",
+                font_size=7.0,
+                fail_rows=fails,
+            ),
+            Verdict(
+                across_ok,
+                f"Across the width: {rec.bars} " + ("passes every requirement." if across_ok else "FAILS (see the rows marked)."),
+            ),
+        )
+    )
+    return [*blocks, *shear_blocks, *dev, summary]
+
+
+def grid_cover(result: Any) -> float:
+    """The cover to the bottom bars (m) the design used."""
+    return float(result.strength_table.concrete.cover)
+
+
+def result_fc(result: Any) -> float:
+    return float(result.strength_table.concrete.fc)
+
+
+def _plain(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, rec: Any, shear_rec: Any) -> list[Block]:
+    from . import Equation, Group, Table, Verdict, formula, ratio_text
+
+    design = grid.design
+    h_s = float(design.strength_thickness)
+    c = float(design.cantilever)
+    lam = result.strength_table.concrete.lam
+    root = math.sqrt(result_fc(result) / PSI)
+    blocks: list[Block] = [
+        Equation(
+            formula("h_{s}"),
+            formula("h − 2 in"),
+            f"{u.small(result.thickness)} − {u.small(SOIL_ALLOWANCE, 0)}",
+            u.small(h_s),
+            f"strength thickness of concrete cast against soil; h ≥ {u.small(MIN_THICKNESS, 0)} (14.3.2.1)",
+            clause="14.5.1.7",
+        ),
+        Equation(
+            formula("S_{m}"),
+            formula("b h_{s}² / 6"),
+            f"12 in × ({u.small(h_s)})² / 6" if u.us else None,
+            f"{float(design.section_modulus) * FOOT / INCH**3:,.1f} in³/ft"
+            if u.us
+            else f"{float(design.section_modulus) * 1e9:,.0f} mm³/m",
+            clause="14.5.2.1",
+        ),
+        Equation(
+            formula("φM_{n}"),
+            formula(f"{PHI_PLAIN:g} × {FLEXURE_COEFFICIENT:g} λ √f'_{{c}} S_{{m}}"),
+            f"{PHI_PLAIN:g} × {FLEXURE_COEFFICIENT:g} × {lam:g} × {root:.2f} psi × {float(design.section_modulus) * FOOT / INCH**3:,.1f} in³"
+            if u.us
+            else None,
+            u.moment(float(design.moment_capacity)),
+            "φ = 0.60 (Table 21.2.1)",
+            clause="14.5.2.1",
+        ),
+        Equation(
+            formula("V_{u}"),
+            formula("q_{u} (c − h_{s})"),
+            f"{u.q(rec.q_u)} × ({fmt.decimal(c)} − {fmt.decimal(h_s)})",
+            u.shear(float(design.shear)),
+            formula("shear section at h_{s} from the moment section"),
+            clause="14.4.3.3",
+        ),
+        Equation(
+            formula("φV_{n}"),
+            formula(f"{PHI_PLAIN:g} × (4/3) λ √f'_{{c}} b h_{{s}}"),
+            f"{PHI_PLAIN:g} × {SHEAR_COEFFICIENT:.4f} × {lam:g} × {root:.2f} psi × 12 in × {h_s / INCH:.2f} in" if u.us else None,
+            u.shear(float(design.shear_capacity)),
+            clause="14.5.5.1",
+        ),
+    ]
+    ratios = design.ratios
+
+    def row(name: str, demand: str, capacity: str, key: str, clause: str) -> tuple[Cell, ...]:
+        r = float(ratios[key])
+        ok = r >= 1.0 - 1e-9
+        return (
+            name,
+            demand,
+            capacity,
+            "no demand" if math.isinf(r) else ratio_text(r, 1.0, ok),
+            clause,
+            "passes" if ok else "FAILS",
+        )
+
+    rows = (
+        row("Thickness", u.small(MIN_THICKNESS, 0), u.small(result.thickness), "thickness", "14.3.2.1"),
+        row("Flexure", u.moment(float(design.moment)), u.moment(float(design.moment_capacity)), "flexure", "14.5.2.1"),
+        row("One-way shear", u.shear(float(design.shear)), u.shear(float(design.shear_capacity)), "shear", "14.5.5.1"),
+    )
+    ok = rec.passes and shear_rec.passes
+    return [
+        *blocks,
+        Group(
+            (
+                Table(
+                    ("Requirement", "Demand / limit", "Provided", "Ratio", "ACI 318-19", "Result"),
+                    rows,
+                    (0.22, 0.2, 0.2, 0.1, 0.14, 0.14),
+                    align="LRRRLL",
+                    font_size=7.0,
+                    fail_rows=tuple(k for k, r in enumerate(rows) if r[-1] != "passes"),
+                ),
+                Verdict(ok, "Across the width: plain concrete " + ("passes." if ok else "FAILS (see the rows marked).")),
+            )
+        ),
+    ]
+
+
+def _along(
+    report: WallReport, fmt: Formatter, u: MemberUnits, design: LongitudinalDesign, index: int, diagram: BeamDiagram
+) -> list[Block]:
+    """The footing as a beam along L_f: its diagrams, the bars of each face, and the engine's words."""
+    from . import CONTENT_WIDTH, Group, Heading, Para, Table, Verdict, formula, plain
+    from .drawings import beam_drawing
+
+    result, wall = report.result, report.wall
+    case = result.strength_table.cases[index]  # type: ignore[union-attr]
+    direction = {"+": " (+)", "-": " (−)"}.get(case.direction.value, "")
+    how = (
+        f"the overturning as a chord couple at the wall's ends, each chord {fmt.length(wall.chord_offset)} inside the end"
+        if wall.construction is WallConstruction.LIGHT_FRAME
+        else "the overturning as the linear pressure of a rigid wall"
+    )
+    rows: list[tuple[Cell, ...]] = []
+    fails = []
+    for k, face in enumerate((design.bottom, design.top)):
+        if not face.needed and not face.bars:
+            rows.append((face.face, "not in tension", "", "", "", "", "", "", "—"))
+            continue
+        rows.append(
+            (
+                face.face,
+                f"{u.beam_moment(face.moment)} at x = {fmt.length(face.at)}",
+                u.small(face.effective_depth),
+                u.total_area(face.steel_required) if math.isfinite(face.steel_required) else "none suffices",
+                u.total_area(face.steel_minimum),
+                f"{face.bars or '—'} ({u.total_area(face.steel_provided)})",
+                u.beam_moment(face.moment_capacity),
+                f"{u.force(face.shear)} / {u.force(face.shear_capacity)}",
+                "passes" if face.passes else "FAILS",
+            )
+        )
+        if not face.passes:
+            fails.append(k)
+    blocks: list[Block] = [
+        Heading("Along the length: the footing as a beam", 2),
+        Para(
+            formula(
+                f"Governing strength case {case.combination.name}{direction}. Loads on the beam: the factored self weight "
+                f"over L_{{f}}, the wall's factored loads where they act, {how}; the rigid-footing soil pressure balances "
+                "them. Bars: at least A_{s,min} = 0.0018 B h (7.6.1.1) and two bars, fitting in the width (25.2.1); one-way "
+                "shear |V| ≤ φV_{c} (22.5.5.1) at every point, with ρ_{w} of the face in tension there."
+            ),
+            "small",
+        ),
+        beam_drawing(diagram, fmt, CONTENT_WIDTH, 150.0, f"{case.combination.name}{direction}"),
+        Group(
+            (
+                Table(
+                    (
+                        "Face",
+                        "|M| at",
+                        "d",
+                        formula("A_{s,req}"),
+                        formula("A_{s,min}"),
+                        "Bars",
+                        formula("φM_{n}"),
+                        formula("|V| / φV_{c}"),
+                        "Result",
+                    ),
+                    tuple(rows),
+                    (0.07, 0.19, 0.07, 0.1, 0.09, 0.15, 0.1, 0.14, 0.09),
+                    align="LLRRRLRRL",
+                    font_size=7.0,
+                    fail_rows=tuple(fails),
+                ),
+                Verdict(
+                    design.passes,
+                    plain(
+                        "Along the length: the footing passes as a beam."
+                        if design.passes
+                        else f"Along the length: the footing FAILS as a beam: {design.message}."
+                    ),
+                ),
+            )
+        ),
+    ]
+    return blocks
