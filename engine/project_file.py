@@ -486,7 +486,9 @@ def _concrete(raw: Any) -> ConcreteSettings:
 
 def _reinforcement(raw: Any) -> Reinforcement | None:
     """ "plain", or {"transverse": "#5 @ 12 in", "bottom": "3 #5", "top": "2 #4"} (any part may be left
-    out: Kernline designs it), or absent (None: Kernline designs all of it)."""
+    out: Kernline designs it), or absent (None: Kernline designs all of it). ``"transverse": "plain"``
+    makes a plain footing with continuous longitudinal bars (IBC 2021 1905.6.2 asks for them in
+    seismic design categories C to F)."""
     if raw is None:
         return None
     if raw == "plain":
@@ -496,7 +498,9 @@ def _reinforcement(raw: Any) -> Reinforcement | None:
     obj = _object(raw, "")
     _keys(obj, REINFORCEMENT_KEYS)
     parts: dict[str, Any] = {}
-    if "transverse" in obj:
+    if obj.get("transverse") == "plain":  # plain across the width, with continuous bars along it
+        parts["plain"] = True
+    elif "transverse" in obj:
         with _scope("transverse"):
             parts["transverse"] = (
                 parse_spaced(_text(obj, "transverse"))

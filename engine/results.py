@@ -365,6 +365,8 @@ def longitudinal_json(result: WallResult, stations: int = 101) -> dict[str, Any]
         "bars_top": design.top.bars or None,
         "passes": design.passes,
         "message": design.message,
+        "plain_moment_capacity": _num(design.plain_moment_capacity),
+        "plain_shear_capacity": _num(design.plain_shear_capacity),
         "diagram": points,
     }
 

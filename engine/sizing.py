@@ -258,7 +258,7 @@ def _why_smallest(
         elif not passes[r, c]:
             j = int(np.argmin(check_normalized[:, r, c]))
             value = float(check_normalized[j, r, c])
-            parts.append(f"the next {axis_name} one fails {checks[j].id} (ratio/required {value:.3f})")
+            parts.append(f"the next {axis_name} one fails {checks[j].title.lower()} (ratio/required {value:.3f})")
     return "smallest passing size: " + "; ".join(parts)
 
 
@@ -280,9 +280,9 @@ def _diagnose(
     if not allowed[last_r, last_c]:
         return "even the widest candidate is narrower than the wall it carries", ("raise width_max above the wall thickness",)
     described = ", ".join(
-        f"{c.id} has no equilibrium (the resultant falls beyond the footing's end)"
+        f"{c.title.lower()} has no equilibrium (the resultant falls beyond the footing's end)"
         if c.id == "bearing" and v == 0.0
-        else f"{c.id} reaches {v:.0%} of its required ratio"
+        else f"{c.title.lower()} reaches {v:.0%} of its required ratio"
         for c, v in failing
     )
     size = f"{format_length(float(widths[-1]), project.units)} x {format_length(float(thicknesses[-1]), project.units)}"
@@ -303,9 +303,9 @@ def _diagnose(
         if check.id == "bearing" and value == 0.0 and not helps:
             helps.append("a longer footing or more resisting dead load, to bring the resultant back onto the footing")
         if helps:
-            suggestions.append(f"{check.id}: " + "; ".join(helps) + " would help")
+            suggestions.append(f"{check.title.lower()}: " + "; ".join(helps) + " would help")
         else:
-            suggestions.append(f"{check.id}: no change of footing size helps; revisit the loads or the soil values")
+            suggestions.append(f"{check.title.lower()}: no change of footing size helps; revisit the loads or the soil values")
     return message, tuple(suggestions)
 
 

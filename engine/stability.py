@@ -118,7 +118,9 @@ def reported_checks(project: Project) -> tuple[Check, ...]:
 def strength_criteria(criteria: DesignCriteria, concrete: ConcreteSettings) -> DesignCriteria:
     """The criteria of the footing's strength design: the concrete's strength combinations with the
     project's S_DS (no custom list: a project's own combinations are for the stability checks)."""
-    return DesignCriteria(method=concrete.strength_method, sds=criteria.sds)
+    return DesignCriteria(
+        method=concrete.strength_method, sds=criteria.sds, seismic_design_category=criteria.seismic_design_category
+    )
 
 
 def case_table(

@@ -20,7 +20,7 @@ from typing import TYPE_CHECKING, Any
 
 import numpy as np
 
-from ..concrete.plain import evaluate_plain
+from ..concrete.plain import PlainSeismicGrid, evaluate_plain, plain_seismic_grid
 from ..concrete.transverse import Construction, Materials, evaluate_transverse
 
 if TYPE_CHECKING:  # pragma: no cover
@@ -43,6 +43,7 @@ class StrengthGrid:
     design: Any  # TransverseGrid or PlainGrid
     plain: bool
     phi_shear: float
+    seismic: PlainSeismicGrid | None = None
 
 
 def phi_shear(state: Statics) -> float:
@@ -97,7 +98,17 @@ def strength_grid(state: Statics) -> StrengthGrid:
             phi_shear=phi,
             bars=reinforcement.transverse if reinforcement is not None else None,
         )
-    grid = StrengthGrid(q_u=q_u, case_index=index, design=design, plain=plain, phi_shear=phi)
+    seismic = None
+    if plain:
+        assert reinforcement is not None
+        seismic = plain_seismic_grid(
+            sdc=table.criteria.seismic_design_category,
+            bottom=reinforcement.bottom,
+            top=reinforcement.top,
+            width=state.width,
+            thickness=state.thickness,
+        )
+    grid = StrengthGrid(q_u=q_u, case_index=index, design=design, plain=plain, phi_shear=phi, seismic=seismic)
     state.memo["strength_grid"] = grid
     return grid
 

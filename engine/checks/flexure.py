@@ -3,7 +3,9 @@
 Reinforced: φMn / Mu at the moment section of Table 13.2.7.1, with As,min (7.6.1.1, 24.4.3.2), the
 bar spacing (3h and 18 in), d at least 6 in (13.3.1.2), a tension-controlled section and the
 development length of the bars (25.4.2.4) taken into the ratio: the least of those ratios. Plain:
-φMn = 0.60 · 5λ√f'c Sm on h − 2 in (14.5.1.7, 14.5.2.1) and h at least 8 in (14.3.2.1). Bars given in
+φMn = 0.60 · 5λ√f'c Sm on h − 2 in (14.5.1.7, 14.5.2.1) and h at least 8 in (14.3.2.1); in seismic
+design categories C to F the continuous longitudinal bars that IBC 2021 1905.6.2 asks of a plain
+footing (As >= 0.002 Ag, taken into the ratio as As / 0.002 Ag). Bars given in
 the project are checked; without them the lightest passing bars (#4–#8 at whole inches) are chosen.
 """
 
@@ -15,6 +17,7 @@ from typing import TYPE_CHECKING, Any
 import numpy as np
 
 from ..concrete.bars import bar, spaced_text
+from ..concrete.plain import plain_seismic_words
 from ..registry import Check, CheckArrays, Family, register_check
 from ..registry import json_number as _num
 from ._strength import case_words, strength_grid
@@ -44,6 +47,7 @@ class FlexureResult:
     ratio: float
     required: float
     passes: bool
+    message: str = ""
 
 
 @dataclass(frozen=True, eq=False, repr=False)
@@ -53,7 +57,10 @@ class FlexureCheck(Check):
     def evaluate(self, state: Statics) -> CheckArrays:
         grid = strength_grid(state)
         names = _PLAIN if grid.plain else _REINFORCED
-        ratio = np.minimum.reduce([np.broadcast_to(grid.design.ratios[n], state.grid_shape) for n in names])
+        parts = [np.broadcast_to(grid.design.ratios[n], state.grid_shape) for n in names]
+        if grid.seismic is not None and grid.seismic.applies:  # IBC 2021 1905.6.2: plain needs bars along
+            parts.append(np.broadcast_to(grid.seismic.ratio, state.grid_shape))
+        ratio = np.minimum.reduce(parts)
         return CheckArrays(ratio=ratio, parts={"q_u": grid.q_u})
 
     def record(self, state: Statics, arrays: CheckArrays, index: int, required: float) -> FlexureResult:
@@ -63,9 +70,12 @@ class FlexureCheck(Check):
         d = grid.design
         ratio = float(arrays.ratio)
         combination, direction = case_words(state, int(grid.case_index))
+        message = ""
         if grid.plain:
             steel_required = steel_provided = development = available = None
             bars = "plain"
+            if grid.seismic is not None:
+                message = plain_seismic_words(grid.seismic)
         else:
             steel_required, steel_provided = float(d.steel_required), float(d.steel_provided)
             development, available = float(d.development_length), float(d.development_available)
@@ -85,6 +95,7 @@ class FlexureCheck(Check):
             ratio=ratio,
             required=required,
             passes=meets(ratio, required),
+            message=message,
         )
 
     def record_json(self, record: Any) -> dict[str, Any]:
@@ -99,6 +110,7 @@ class FlexureCheck(Check):
             "bars": record.bars,
             "development_length": _num(record.development_length),
             "development_available": _num(record.development_available),
+            "message": record.message or None,
         }
 
 

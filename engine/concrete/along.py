@@ -34,6 +34,7 @@ from .longitudinal import (
     design_longitudinal,
     rigid_soil_stations,
 )
+from .transverse import TOLERANCE
 
 if TYPE_CHECKING:  # pragma: no cover
     from ..stability import CaseTable, Evaluation
@@ -91,7 +92,11 @@ def case_diagram(table: CaseTable, evaluation: Evaluation, index: int) -> BeamDi
 def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[LongitudinalDesign, int, BeamDiagram]:
     """Design the longitudinal bars for every strength case at the evaluated size (ACI 318-19).
 
-    Bars given in the project are checked; otherwise the bottom bars are chosen for the case with the
+    A plain footing (ACI 318-19 chapter 14) is first checked as plain concrete along its length: when
+    its whole section carries every case's moment and shear (φMn = 0.60 · 5λ√f'c Sm and φVn = 0.60 ·
+    (4/3)λ√f'c B h_s on h_s = h - 2 in; 14.5.1.7, 14.5.2.1, 14.5.5.1), the bars along it are the
+    continuous bars the building code asks of it and carry no computed moment. Otherwise its bars are
+    checked as below. Bars given in the project are checked; otherwise the bottom bars are chosen for the case with the
     largest sagging moment and the top bars for the case with the largest hogging one, and then every
     case is checked with those bars. Returns the design of the case that governs (the first failing
     one, else the one with the largest moment) with its index and diagram.
@@ -118,6 +123,35 @@ def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[Longitudinal
         chosen = design_longitudinal(diagrams[hog], thickness=thickness, materials=materials, bottom=bottom)
         top = (chosen.top.count, chosen.top.bar) if chosen.top.bar is not None else None
     designs = [design_longitudinal(d, thickness=thickness, materials=materials, bottom=bottom, top=top) for d in diagrams]
+    if given is not None and given.plain:
+        designs = _plain_along(designs, float(np.asarray(evaluation.statics.width)), thickness, concrete.fc, concrete.lam)
     failing = [i for i, d in enumerate(designs) if not d.passes]
     index = failing[0] if failing else (sag if diagrams[sag].max_moment >= -diagrams[hog].min_moment else hog)
     return designs[index], index, diagrams[index]
+
+
+def _plain_along(
+    designs: list[LongitudinalDesign], width: float, thickness: float, fc: float, lam: float
+) -> list[LongitudinalDesign]:
+    """The designs of a plain footing: each passes when the plain section carries its diagram
+    (ACI 318-19 14.5.2.1 and 14.5.5.1 on h_s of 14.5.1.7, the whole width B as the section's b);
+    when it does not, the bars' design stands, with the reason first."""
+    from dataclasses import replace
+
+    from .plain import plain_moment_strength, plain_shear_strength, strength_thickness
+
+    h_s = strength_thickness(thickness)
+    phi_mn = float(plain_moment_strength(width, h_s, fc, lam))
+    phi_vn = float(plain_shear_strength(width, h_s, fc, lam))
+    out = []
+    for design in designs:
+        d = design.diagram
+        moment = max(abs(d.max_moment), abs(d.min_moment))
+        carries = moment <= phi_mn * (1.0 + TOLERANCE) and d.max_shear <= phi_vn * (1.0 + TOLERANCE)
+        if carries:
+            out.append(replace(design, passes=True, message="", plain_moment_capacity=phi_mn, plain_shear_capacity=phi_vn))
+        else:
+            why = "the plain section does not carry the moment and shear along the length (ACI 318-19 14.5.2.1, 14.5.5.1)"
+            message = why + ("; " + design.message if design.message else "; the bars carry them")
+            out.append(replace(design, message=message, plain_moment_capacity=phi_mn, plain_shear_capacity=phi_vn))
+    return out

@@ -367,7 +367,10 @@ class LongitudinalDesign:
         diagram: the shear and moment diagram designed for.
         bottom, top: the bars of each face.
         phi_shear: φ used for one-way shear.
-        passes: both faces pass. message: "" or what fails, in words.
+        passes: both faces pass (or, for a plain footing, the plain section carries the diagram).
+        message: "" or what fails, in words.
+        plain_moment_capacity, plain_shear_capacity: for a plain footing, φMn and φVn of its whole
+            section along the length (N·m, N; ACI 318-19 14.5.2.1, 14.5.5.1), else None.
     """
 
     diagram: BeamDiagram
@@ -376,6 +379,8 @@ class LongitudinalDesign:
     phi_shear: float
     passes: bool
     message: str
+    plain_moment_capacity: float | None = None
+    plain_shear_capacity: float | None = None
 
 
 def bars_that_fit(width: float, bar_diameter: float, side_cover: float, aggregate: float = AGGREGATE) -> int:
@@ -490,6 +495,10 @@ def _face(
             chosen=given is None,
         )
 
+    if given is not None:  # bars given that pass need no search (the search only words a failure)
+        checked = evaluate(*given)
+        if checked.passes:
+            return checked, [], False
     # the lightest passing bars of #4 to #8 (least area, ties to fewer bars); the heaviest if none passes
     best: FaceDesign | None = None
     heaviest: FaceDesign | None = None

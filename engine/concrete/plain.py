@@ -357,13 +357,115 @@ def plain_permitted(
     return PlainPermission(True, "")
 
 
+# IBC 2021 1905.6.2 replaces ACI 318-19 14.1.4 (section number from memory; the model text as adopted
+# locally, e.g. San Mateo (CA) Municipal Code 23.08.130 and Pasadena (CA) 14.04.210, R): in seismic
+# design categories C to F plain concrete wall footings are permitted with at least two continuous
+# longitudinal bars, no smaller than No. 4, totalling at least 0.002 Ag, and, in a footing thicker
+# than 8 in, at least one bar at the top and one at the bottom.
+IBC_PLAIN_CATEGORIES = frozenset({"C", "D", "E", "F"})
+IBC_TOP_AND_BOTTOM_ABOVE = 8.0 * INCH
+IBC_PLAIN_CLAUSE = "IBC 2021 1905.6.2, replacing ACI 318-19 14.1.4"
+
+
+@dataclass(frozen=True, slots=True, eq=False)
+class PlainSeismicGrid:
+    """The seismic condition on a plain wall footing over candidate sizes.
+
+    Attributes:
+        applies: the seismic design category calls for longitudinal bars.
+        ratio: As of the continuous bars / (0.002 Ag) where the bar count, size and faces meet the
+            rule, else 0 (array of the broadcast shape of B and h; inf where the rule does not apply).
+        reason: the first unmet condition that holds for every size, in words ("" when none).
+        steel: the continuous bars' total area (m^2).
+    """
+
+    applies: bool
+    ratio: np.ndarray
+    reason: str
+    steel: float
+
+
+def plain_seismic_grid(
+    *,
+    sdc: str | None,
+    bottom: tuple[int, Bar] | None,
+    top: tuple[int, Bar] | None,
+    width: ArrayLike,
+    thickness: ArrayLike,
+) -> PlainSeismicGrid:
+    """Whether plain concrete is permitted for a wall footing under the IBC, over candidate sizes.
+
+    IBC 2021 1905.6.2 (its replacement of ACI 318-19 14.1.4; see :data:`IBC_PLAIN_CLAUSE`): in
+    seismic design categories C to F a plain wall footing needs at least two continuous longitudinal
+    bars, each No. 4 or larger, with a total area of at least 0.002 times the footing's gross section
+    (Ag = B h), and, in a footing more than 8 in thick, at least one bar at the top and one at the
+    bottom. The exception for detached one- and two-family dwellings is not modelled. Without a
+    seismic design category (``sdc`` None) or in A and B, nothing is required.
+
+    Args:
+        sdc: "A" to "F", or None. bottom, top: the continuous bars (count, bar) at each face, or
+            None. width: B (m). thickness: h (m).
+    """
+    b = np.asarray(width, dtype=float)
+    h = np.asarray(thickness, dtype=float)
+    shape = np.broadcast_shapes(b.shape, h.shape)
+    if sdc is None or sdc not in IBC_PLAIN_CATEGORIES:
+        return PlainSeismicGrid(False, np.full(shape, np.inf), "", 0.0)
+    where = f"in seismic design category {sdc} a plain footing needs"
+    faces = [bars for bars in (bottom, top) if bars is not None]
+    count = sum(n for n, _ in faces)
+    steel = float(sum(n * bar_.area for n, bar_ in faces))
+    reason = ""
+    if count < SEISMIC_MIN_BARS:
+        reason = f"{where} at least two continuous longitudinal bars, No. 4 or larger ({IBC_PLAIN_CLAUSE}); give them as bottom and top bars"
+    elif any(bar_.size < SEISMIC_MIN_BAR_SIZE for _, bar_ in faces):
+        small = next(bar_.name for _, bar_ in faces if bar_.size < SEISMIC_MIN_BAR_SIZE)
+        reason = f"{where} continuous bars of No. 4 or larger, not {small} ({IBC_PLAIN_CLAUSE})"
+    if reason:
+        return PlainSeismicGrid(True, np.zeros(shape), reason, steel)
+    gross = b * h
+    ratio = np.broadcast_to(steel / (SEISMIC_MIN_STEEL_RATIO * gross), shape).copy()
+    both_faces = bottom is not None and top is not None
+    if not both_faces:
+        thick = np.broadcast_to(h > IBC_TOP_AND_BOTTOM_ABOVE * (1.0 + TOLERANCE), shape)
+        ratio = np.where(thick, 0.0, ratio)
+        if bool(np.all(thick)):
+            reason = (
+                f"{where} a continuous bar at the top and one at the bottom when it is more than 8 in thick ({IBC_PLAIN_CLAUSE})"
+            )
+    return PlainSeismicGrid(True, ratio, reason, steel)
+
+
+def plain_seismic_words(grid: PlainSeismicGrid, index: tuple[int, ...] | int = ()) -> str:
+    """Why a plain footing is not permitted at one size, or "" (see :func:`plain_seismic_grid`)."""
+    if not grid.applies:
+        return ""
+    value = float(np.asarray(grid.ratio)[index]) if np.ndim(grid.ratio) else float(grid.ratio)
+    if value >= 1.0 - TOLERANCE:
+        return ""
+    if grid.reason:
+        return grid.reason
+    if value == 0.0:
+        return (
+            f"a plain footing more than 8 in thick needs a continuous bar at the top and one at the bottom ({IBC_PLAIN_CLAUSE})"
+        )
+    return (
+        f"the continuous longitudinal bars of a plain footing must total at least 0.002 of its gross section "
+        f"({IBC_PLAIN_CLAUSE}); they give {value * SEISMIC_MIN_STEEL_RATIO:.5f} of it"
+    )
+
+
 __all__ = [
+    "IBC_PLAIN_CLAUSE",
     "PlainDesign",
     "PlainGrid",
     "PlainPermission",
+    "PlainSeismicGrid",
     "design_plain",
     "evaluate_plain",
     "plain_moment_strength",
+    "plain_seismic_grid",
+    "plain_seismic_words",
     "plain_permitted",
     "plain_shear_strength",
     "section_modulus",
