@@ -47,8 +47,10 @@ SHORT = ("in", "mm")  # section dimensions: widths, thicknesses, cover
 FORCE = ("kip", "kN")
 LINE = ("plf", "kN/m")
 PRESSURE = ("psf", "kPa")
-DENSITY = ("pcf", "kN/m^3")
+DENSITY = ("pcf", "kN/m³")
 GRADIENT = ("psf/ft", "kPa/m")
+CONCRETE_STRENGTH = ("psi", "MPa")  # f'c
+STEEL_STRENGTH = ("ksi", "MPa")  # fy
 
 
 @dataclass(frozen=True, slots=True)
@@ -129,7 +131,7 @@ SI_EXAMPLES = {
     Kind.FORCE: "10 kN",
     Kind.LINE_LOAD: "4.4 kN/m",
     Kind.PRESSURE: "95 kPa",
-    Kind.UNIT_WEIGHT: "23.6 kN/m^3",
+    Kind.UNIT_WEIGHT: "23.6 kN/m³",
     Kind.PRESSURE_GRADIENT: "25 kPa/m",
     Kind.MOMENT: "15 kN*m",
 }
@@ -147,10 +149,10 @@ def field_problem(problem: str, kind: Kind | None, system: str) -> str:
 def to_raw(spec: FieldSpec, text: str, system: str) -> Any:
     """What the raw document stores for ``text`` typed into the field; raises InputError if unusable."""
     text = " ".join(text.split())
-    if spec.text:
-        return text
     if spec.optional and not text:
         return OMIT
+    if spec.text:
+        return text
     if spec.kind is None:
         return parse_number(text)
     return quantity_text(text, spec.kind, spec.unit(system))
@@ -373,16 +375,20 @@ class QuantityField(QWidget):
         """
         pending = self._timer.isActive() or self.edit.isModified()
         self._timer.stop()
-        if pending and self.edit.text() != self._shown:
+        if pending and (self.edit.text() != self._shown or self._adopting()):
             self.commit_requested.emit(self.edit.text(), False)
 
     def _on_pause(self) -> None:
         if self.edit.text().strip() and self.edit.text() != self._shown:
             self.commit_requested.emit(self.edit.text(), True)
 
+    def _adopting(self) -> bool:
+        """Whether the engineer typed the assumed value itself: entered, it becomes their own."""
+        return self.assumption is not None and self.edit.isModified() and bool(self.edit.text().strip())
+
     def _on_editing_finished(self) -> None:
         self._timer.stop()
-        if self.edit.text() != self._shown or self.invalid:
+        if self.edit.text() != self._shown or self.invalid or self._adopting():
             self.commit_requested.emit(self.edit.text(), False)
         self.session += 1
 
@@ -809,4 +815,144 @@ PROJECT_FIELDS = tuple(
         ("revision_date", "Revision date", "Date of this revision as it should print (e.g. 2026-03-14), in the title block."),
         ("notes", "Notes", "General notes printed with the design basis."),
     )
+)
+
+
+# ---- the footing's concrete design (ACI 318-19) ---------------------------------------------------------
+
+
+def _concrete_value(key: str) -> Callable[[Project], Any]:
+    """A value of the project's concrete section, or None where the project has no concrete design."""
+    return lambda p: getattr(p.concrete, key) if p.concrete is not None else None
+
+
+_CONCRETE_DEFAULT = "empty: Kernline's default (marked assumed)"
+
+CONCRETE_FIELDS = (
+    _project_field(
+        ("concrete", "fc"),
+        "Concrete strength f'c",
+        Kind.PRESSURE,
+        CONCRETE_STRENGTH,
+        _concrete_value("fc"),
+        "Specified compressive strength f'c of the footing concrete (ACI 318-19 19.2.1; Table 19.2.1.1 asks at "
+        "least 2500 psi, 17 MPa). It sets the one-way shear strength Vc (22.5.5.1), the plain-concrete strengths "
+        "(14.5) and the development length (25.4.2.4). Empty: 3000 psi, a common strength for footings (common "
+        "practice).",
+        optional=True,
+        placeholder=_CONCRETE_DEFAULT,
+    ),
+    _project_field(
+        ("concrete", "fy"),
+        "Bar yield strength fy",
+        Kind.PRESSURE,
+        STEEL_STRENGTH,
+        _concrete_value("fy"),
+        "Specified yield strength fy of the deformed bars (ACI 318-19 20.2.2; ASTM A615 Grade 60 is 60 ksi, "
+        "420 MPa). It sets the flexural strength and the development length (25.4.2.4). Empty: 60 ksi.",
+        optional=True,
+        placeholder=_CONCRETE_DEFAULT,
+    ),
+    _project_field(
+        ("concrete", "cover"),
+        "Cover to the bottom bars",
+        Kind.LENGTH,
+        SHORT,
+        _concrete_value("cover"),
+        "Clear concrete cover below the bottom bars. Concrete cast against and permanently in contact with earth "
+        "needs 3 in, 75 mm (ACI 318-19 Table 20.5.1.3.1). The effective depth is d = t_f - cover - d_b/2. Empty: 3 in.",
+        optional=True,
+        placeholder=_CONCRETE_DEFAULT,
+    ),
+    _project_field(
+        ("concrete", "lambda"),
+        "Lightweight factor λ",
+        None,
+        None,
+        _concrete_value("lam"),
+        "Modification factor λ for lightweight concrete (ACI 318-19 19.2.4, Table 19.2.4.2): 1.0 for normal-weight "
+        "concrete, 0.75 for all-lightweight; at most 1.0. It multiplies √f'c in the shear and plain-concrete "
+        "strengths. Empty: 1.0.",
+        optional=True,
+        placeholder=_CONCRETE_DEFAULT,
+    ),
+)
+
+CHORD_OFFSET_FIELD = _wall_field(
+    ("chord_offset",),
+    "Chord offset",
+    Kind.LENGTH,
+    SHORT,
+    lambda w: w.chord_offset,
+    "Light-frame walls only: how far in from each end of the wall its hold-down chord stands. The wall delivers "
+    "its overturning to the footing as a couple of the two chord forces, this far in from the wall's ends, plus "
+    "the shear at the top of the footing (Kernline mechanics, plain statics). Empty: 3 in, Kernline's "
+    "assumption; enter the chord's position from the wall's framing and hold-downs.",
+    optional=True,
+    placeholder="empty: 3 in (assumed)",
+)
+
+
+def _transverse_text(w: Wall, system: str) -> str | None:
+    r = w.footing.reinforcement
+    if r is None or r.transverse is None:
+        return None
+    bar, spacing = r.transverse
+    name = bar.metric_name if system == "SI" else bar.name
+    return f"{name} @ {show(spacing, Kind.LENGTH, SHORT[1] if system == 'SI' else SHORT[0])}"
+
+
+def _counted_text(w: Wall, face: str, system: str) -> str | None:
+    r = w.footing.reinforcement
+    found = getattr(r, face) if r is not None else None
+    if found is None:
+        return None
+    count, bar = found
+    return f"{count} {bar.metric_name if system == 'SI' else bar.name}"
+
+
+_BARS_RULE = (
+    " Bars #3 to #11 of ASTM A615 (inch-pound), or the soft-metric names No. 10 to No. 36 of the same bars; "
+    "a spacing in any length unit. Leave it empty and Kernline designs this part."
+)
+
+BAR_FIELDS = (
+    FieldSpec(
+        ("footing", "reinforcement", "transverse"),
+        "Transverse bars",
+        None,
+        None,
+        lambda p, w: _transverse_text(w, p.units),
+        'Bottom bars across the width B, as size and centre-to-centre spacing ("#5 @ 12 in"). Flexure at the '
+        "section of ACI 318-19 Table 13.2.7.1 with As,min = 0.0018 Ag (7.6.1.1, 24.4.3.2); spacing at most 3h and "
+        "18 in (7.7.2.3); ρw of these bars enters Vc (22.5.5.1)." + _BARS_RULE,
+        text=True,
+        optional=True,
+        placeholder="designed by Kernline",
+    ),
+    FieldSpec(
+        ("footing", "reinforcement", "bottom"),
+        "Bottom bars along L_f",
+        None,
+        None,
+        lambda p, w: _counted_text(w, "bottom", p.units),
+        'Continuous bars along the footing\'s length near its bottom face, as a count and size ("3 #5"): the '
+        "footing as a beam along L_f under the wall's loads and the soil pressure (sagging moment; As,min of "
+        "ACI 318-19 7.6.1.1)." + _BARS_RULE,
+        text=True,
+        optional=True,
+        placeholder="designed by Kernline",
+    ),
+    FieldSpec(
+        ("footing", "reinforcement", "top"),
+        "Top bars along L_f",
+        None,
+        None,
+        lambda p, w: _counted_text(w, "top", p.units),
+        'Continuous bars along the footing\'s length near its top face, as a count and size ("2 #4"): hogging '
+        "moment of the footing as a beam along L_f, as where the overturning lifts one end." + _BARS_RULE,
+        text=True,
+        optional=True,
+        placeholder="designed by Kernline",
+    ),
 )

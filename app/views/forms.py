@@ -10,7 +10,7 @@ from typing import Any
 
 from kernline.engine.combinations import combinations_of
 from kernline.engine.errors import InputError
-from kernline.engine.model import LateralLoad, LineLoad, LoadCase, PointLoad
+from kernline.engine.model import LateralLoad, LineLoad, LoadCase, PointLoad, WallConstruction
 from kernline.engine.presumptive import TABLE_1806_2
 from kernline.engine.project_file import OPTION_KEYS
 from kernline.engine.registry import Check, CodeBasis, Family, checks, code_by_id, codes
@@ -19,6 +19,7 @@ from PySide6.QtCore import QCoreApplication, QEvent, Qt
 from PySide6.QtGui import QBrush, QColor, QIcon
 from PySide6.QtWidgets import (
     QAbstractItemView,
+    QAbstractScrollArea,
     QCheckBox,
     QComboBox,
     QFormLayout,
@@ -38,6 +39,9 @@ from .. import commands
 from ..document import MISSING, ProjectDocument, get_at, path_text
 from ..style import WARM_LIGHT, assumed_icon
 from .fields import (
+    BAR_FIELDS,
+    CHORD_OFFSET_FIELD,
+    CONCRETE_FIELDS,
     EXTENSION_FIELDS,
     FOOTING_FIELDS,
     FORCE,
@@ -844,6 +848,24 @@ class WallForm(QWidget):
                 self.group.add(spec, form)
             self.sections[name] = Section(name, box, expanded)
             layout.addWidget(self.sections[name])
+
+        # the footing's concrete design: how the wall is built, and the bars (shown with a concrete design)
+        box, form = _form()
+        self.concrete_form = form
+        self.concrete_note = Note()
+        self.concrete_note.setText(NO_CONCRETE_WALL)
+        form.addRow(self.concrete_note)
+        self.choices: dict[tuple[str, ...], Choice] = {}
+        self._choice(form, ("construction",), "Wall construction", CONSTRUCTIONS, CONSTRUCTION_TIP)
+        self.chord_offset = self.group.add(CHORD_OFFSET_FIELD, form)
+        self._choice(form, ("footing", "reinforcement"), "Footing bars", REINFORCEMENT_FORMS, REINFORCEMENT_TIP)
+        self.bar_fields = [self.group.add(spec, form) for spec in BAR_FIELDS]
+        self.sections["Concrete"] = Section("Concrete design", box, True)
+        layout.addWidget(self.sections["Concrete"])
+        for path, choice in self.choices.items():
+            self.document.field_labels[path_text(path)] = choice.label.text()
+            choice.box.activated.connect(lambda _i, p=path: self._on_choice(p))
+
         self.loads = LoadsEditor(document)
         self.sections["Loads"] = Section("Loads", self.loads, True)
         layout.addWidget(self.sections["Loads"])
@@ -853,25 +875,104 @@ class WallForm(QWidget):
         self.sections["Sizing range"] = Section("Sizing range", box, False)
         layout.addWidget(self.sections["Sizing range"])
         # the section of each field path's first key ("footing.width" -> Footing)
-        self._section_keys = {"footing": "Footing", "stem": "Stem", "loads": "Loads", "sizing": "Sizing range"}
+        self._section_keys = {
+            "footing": "Footing",
+            "stem": "Stem",
+            "loads": "Loads",
+            "sizing": "Sizing range",
+            "construction": "Concrete",
+            "chord_offset": "Concrete",
+        }
 
     shown_wall_id = ""
 
+    def _choice(
+        self, form: QFormLayout, path: tuple[str, ...], label: str, entries: Sequence[tuple[str, Any]], tip: str
+    ) -> Choice:
+        choice = Choice(path, label, entries, tip)
+        form.addRow(choice.label, choice.box)
+        self.choices[path] = choice
+        return choice
+
     def refresh(self, force: bool = False) -> list[str]:
         """Show the current wall; returns what a forced refresh dropped (see :meth:`FieldGroup.refresh`)."""
-        wall = self.document.current_wall
+        doc = self.document
+        wall = doc.current_wall
         previous = self.shown_wall_id
         self.shown_wall_id = wall.id
         self.title.setText(f"Wall {wall.id}" + (f" — {wall.label}" if wall.label else ""))
         dropped = self.group.refresh(force)
         self.loads.refresh(clear_message=force)
+        self._show_concrete()
         return [f"{d} of wall {previous}" for d in dropped] if previous else dropped
+
+    def _show_concrete(self) -> None:
+        """The wall's concrete inputs: shown with a concrete design; the chord offset for a light-frame wall
+        only; the bar fields when the bars are entered."""
+        doc = self.document
+        wall = doc.current_wall
+        assumed = doc.assumptions_by_field()
+        designed = doc.project.concrete is not None
+        form = self.concrete_form
+        form.setRowVisible(self.concrete_note, not designed)
+        form_of = reinforcement_form(wall.footing.reinforcement)
+        values = {("construction",): wall.construction.value, ("footing", "reinforcement"): form_of}
+        for path, choice in self.choices.items():
+            choice.show_value(values[path], assumed.get(path_text(doc.wall_path(*path))))
+            form.setRowVisible(choice.box, designed)
+        light = wall.construction is WallConstruction.LIGHT_FRAME
+        form.setRowVisible(self.chord_offset, designed and light)
+        for f in self.bar_fields:
+            form.setRowVisible(f, designed and form_of == "entered")
+
+    def _on_choice(self, path: tuple[str, ...]) -> None:
+        """A wall's construction or its form of reinforcement chosen: one undoable edit."""
+        choice = self.choices[path]
+        doc = self.document
+        value = choice.box.currentData()
+        full = doc.wall_path(*path)
+        if path == ("footing", "reinforcement"):
+            if value == reinforcement_form(doc.current_wall.footing.reinforcement):
+                return
+            raw_value: Any = REINFORCEMENT_RAW[value]
+        else:
+            raw_value = value
+            if get_at(doc.raw, full) == raw_value:
+                return
+        before = choice.box.itemText(choice.shown_index)
+        label = choice.label.text()
+        doc.push(
+            commands.SetField(doc, full, raw_value, text=f"Set {_words(label)}"),
+            announce=f"{doc.current_wall.id} · {label}: {before} → {choice.box.currentText()}",
+        )
+        self._show_concrete()
+
+    def set_choice(self, path: tuple[str, ...], value: Any) -> None:
+        """Choose ``value`` in the wall's choice box of ``path`` as a user would (for tests and keyboard use)."""
+        choice = self.choices[path]
+        index = choice.index_of(value)
+        if index < 0:
+            raise ValueError(f"{value!r} is not a choice of {path_text(path)}")
+        choice.box.setCurrentIndex(index)
+        choice.box.activated.emit(index)
+
+    def field_widget(self, rest: str) -> QWidget | None:
+        """The current wall's input at ``rest`` ("footing.width", "construction"), or None."""
+        path = tuple(rest.split("."))
+        if path in self.choices:
+            return self.choices[path].box
+        for f in self.group.fields:
+            if f.spec.path == path:
+                return f.edit
+        return None
 
     def show_field(self, rest: str, scroll: QScrollArea) -> bool:
         """Show and focus the current wall's input at ``rest`` (the path below the wall, as the engine names it)."""
         if not rest:
             return True
         head = rest.split(".")[0].split("[")[0]
+        if rest.startswith("footing.reinforcement"):
+            head = "construction"  # the bars sit with the concrete design
         section = self.sections.get(self._section_keys.get(head, "Wall"))
         if rest.startswith("loads["):
             row = rest[6 : rest.find("]")]
@@ -883,12 +984,91 @@ class WallForm(QWidget):
             scroll.ensureWidgetVisible(self.loads)
             self.loads.table.setFocus()
             return True
+        path = tuple(rest.split("."))
+        if path in self.choices:
+            assert section is not None
+            section.toggle.setChecked(True)
+            _settle(scroll)
+            box = self.choices[path].box
+            scroll.ensureWidgetVisible(box)
+            box.setFocus()
+            return True
         return _focus(self.group, rest, section, scroll)
 
     def focus_order(self) -> list[QWidget]:
-        before_loads = len(WALL_FIELDS) + len(STEM_FIELDS) + len(FOOTING_FIELDS)
-        fields = self.group.fields
-        return [f.edit for f in fields[:before_loads]] + [self.loads.table] + [f.edit for f in fields[before_loads:]]
+        """Every input in the order the form shows it (fields, choice boxes, the loads table)."""
+        return [w for section in self.sections.values() for w in _section_order(section, self.group)]
+
+
+def _section_order(section: Section, group: FieldGroup) -> list[QWidget]:
+    """The inputs of one section, top to bottom: the line edits of its fields, its choice boxes and check
+    boxes, or the table of a loads or combinations editor."""
+    content = section.content
+    form = content.layout()
+    if not isinstance(form, QFormLayout):
+        return [w for w in content.findChildren(QAbstractScrollArea) if isinstance(w, QTableWidget)]
+    by_widget = {id(f): f for f in group.fields}
+    order: list[QWidget] = []
+    for row in range(form.rowCount()):
+        for role in (QFormLayout.ItemRole.FieldRole, QFormLayout.ItemRole.SpanningRole):
+            item = form.itemAt(row, role)
+            widget = item.widget() if item is not None else None
+            if isinstance(widget, (QComboBox, QCheckBox)):
+                order.append(widget)
+            elif widget is not None and id(widget) in by_widget:
+                order.append(by_widget[id(widget)].edit)
+    return order
+
+
+# ---- concrete design choices ----------------------------------------------------------------------------
+
+NO_CONCRETE_WALL = (
+    "This project has no concrete design of its footings. Add one under Concrete design (all walls), "
+    "further down, to give this wall's construction and its footing's bars."
+)
+NO_CONCRETE_PROJECT = (
+    "No concrete design: the footings are checked for overturning, sliding, bearing and embedment only. "
+    "Tick the box to design them to ACI 318-19 (reinforced, chapter 13, or plain, chapter 14)."
+)
+CONSTRUCTIONS = tuple((c.value, c.value) for c in WallConstruction)
+CONSTRUCTION_TIP = (
+    "What the wall is built of. It sets the footing's moment section (ACI 318-19 Table 13.2.7.1): at the face "
+    "of a concrete wall, halfway between the centre and the face of a masonry wall; a light-frame wall on a sill "
+    "is taken like masonry (Kernline's assumption). Along the length, a concrete or masonry wall delivers its "
+    "overturning as the linear pressure of a rigid wall, a light-frame wall as a couple of its end chords."
+)
+REINFORCEMENT_FORMS = (
+    ("designed by Kernline", "designed"),
+    ("plain concrete, no bars (ACI 318-19 ch. 14)", "plain"),
+    ("bars as entered below", "entered"),
+)
+REINFORCEMENT_RAW: dict[str, Any] = {"designed": commands.DELETE, "plain": "plain", "entered": {}}
+REINFORCEMENT_TIP = (
+    "The footing's bars. Designed by Kernline: the lightest passing bar size and spacing (#4 to #8 at whole "
+    "inches, common practice). Plain concrete: no bars, ACI 318-19 chapter 14 (h at least 8 in, strength on "
+    "h - 2 in cast against soil, 14.5.1.7; in seismic design categories C to F with the bars of IBC 2021 "
+    "1905.6.2). As "
+    "entered: the bars you give are checked; a part left empty is designed by Kernline."
+)
+
+
+def reinforcement_form(reinforcement: Any) -> str:
+    """ "designed" (none given), "plain", or "entered" (bars given, some parts possibly left to Kernline)."""
+    if reinforcement is None:
+        return "designed"
+    return "plain" if reinforcement.plain else "entered"
+
+
+SEISMIC_CATEGORIES: tuple[tuple[str, str | None], ...] = (("not given", None),) + tuple(
+    (category, category) for category in "ABCDEF"
+)
+SEISMIC_CATEGORY_TIP = (
+    "Seismic design category of the building (ASCE 7-16 11.6), from the structural drawings. Used by the "
+    "concrete design: in categories D to F the footing's shear φ is 0.60, not above the wall's (ACI 318-19 "
+    "21.2.4.3); in categories C to F a plain wall footing needs at least two continuous #4 or larger bars "
+    "with As at least 0.002 Ag (IBC 2021 1905.6.2, in place of ACI 318-19 14.1.4). Not given: neither rule "
+    "is applied."
+)
 
 
 BASES = (("gross", "gross"), ("net of overburden", "net"))
@@ -1078,6 +1258,9 @@ class ProjectForm(QWidget):
             "IBC 2021 1605.2: omega = 1.3 on 0.6W for wind loads of ASCE 7 chapters 26 to 31; 1.0 for other wind loads.",
         )
         self.group.add(option_fields["seismic_snow_factor"], form)
+        self._choice(
+            form, ("criteria", "seismic_design_category"), "Seismic design category", SEISMIC_CATEGORIES, SEISMIC_CATEGORY_TIP
+        )
         for key in OPTION_KEYS + ("sds", "bearing_increase"):
             widget = self.choices[("criteria", key)].box if ("criteria", key) in self.choices else None
             if widget is None:
@@ -1087,6 +1270,35 @@ class ProjectForm(QWidget):
         form.addRow(self.method_note)
         self.sections["Criteria"] = Section("Design criteria (all walls)", box, True)
         layout.addWidget(self.sections["Criteria"])
+
+        # the footings' concrete design (ACI 318-19): present or not, then its values
+        box, form = _form()
+        self.concrete_form = form
+        self.concrete_on = QCheckBox("Design the footings' concrete (ACI 318-19)")
+        self.concrete_on.setObjectName("concreteOn")
+        self.concrete_on.setToolTip(
+            "Adds the concrete section to the project: every footing is then designed or checked as reinforced "
+            "(ACI 318-19 chapter 13) or plain (chapter 14) concrete on the strength combinations, with flexure and "
+            "one-way shear among its checks. Untick to remove the section (Edit > Undo brings it back)."
+        )
+        self.concrete_on.clicked.connect(self._on_concrete_toggled)
+        form.addRow(self.concrete_on)
+        self.concrete_note = Note()
+        form.addRow(self.concrete_note)
+        self.concrete_fields = [self.group.add(spec, form) for spec in CONCRETE_FIELDS]
+        self.strength = self._choice(
+            form,
+            ("concrete", "strength_method"),
+            "Strength combinations",
+            [(method_name(code), code.id) for code in codes(Family.STRENGTH)],
+            "The factored load combinations of the concrete design, from the code-basis registry. W and E are the "
+            "ASCE 7 nominal loads (as the ASD methods take them, with 0.6W and 0.7E), so these combinations use "
+            "1.0W and 1.0E. Both lateral directions are checked.",
+        ).box
+        for i, code in enumerate(codes(Family.STRENGTH)):
+            self.strength.setItemData(i, f"{code.title}\n\n{code.wording}", Qt.ItemDataRole.ToolTipRole)
+        self.sections["Concrete"] = Section("Concrete design (all walls)", box, True)
+        layout.addWidget(self.sections["Concrete"])
 
         self.combinations = CombinationsEditor(document)
         self.sections["Combinations"] = Section("Load combinations", self.combinations, False)
@@ -1134,9 +1346,24 @@ class ProjectForm(QWidget):
                 return
             doc.push(commands.set_presumptive_class(doc, value), announce=f"{label}: {before} → {after}")
         else:
-            if get_at(doc.raw, path) == value:
+            raw_value = commands.DELETE if value is None else value  # "not given": the key is removed
+            if get_at(doc.raw, path) == raw_value:
                 return
-            doc.push(commands.SetField(doc, path, value, text=f"Set {_words(label)}"), announce=f"{label}: {before} → {after}")
+            doc.push(
+                commands.SetField(doc, path, raw_value, text=f"Set {_words(label)}"), announce=f"{label}: {before} → {after}"
+            )
+        self.refresh()
+
+    def _on_concrete_toggled(self, on: bool) -> None:
+        """Add the concrete section (every value then taken by default, marked assumed) or remove it; one undo step."""
+        doc = self.document
+        if on == ("concrete" in doc.raw):
+            return
+        words = "Add concrete design" if on else "Remove concrete design"
+        doc.push(
+            commands.SetField(doc, ("concrete",), {} if on else commands.DELETE, text=words),
+            announce=f"Concrete design: {'none → ACI 318-19' if on else 'ACI 318-19 → none'}",
+        )
         self.refresh()
 
     def set_choice(self, path: tuple[str, ...], value: Any) -> None:
@@ -1164,13 +1391,28 @@ class ProjectForm(QWidget):
             ("criteria", "ev_at_soil"): criteria.ev_at_soil,
             ("criteria", "seismic_overturning_reduction"): criteria.seismic_overturning_reduction,
             ("criteria", "wind_omega"): criteria.wind_omega,
+            ("criteria", "seismic_design_category"): criteria.seismic_design_category,
+            ("concrete", "strength_method"): project.concrete.strength_method.id if project.concrete else None,
         }
         for path, choice in self.choices.items():
             choice.show_value(values[path], assumed.get(path_text(path)))
         self._show_options(criteria.method)
         self._show_presumptive(soil.presumptive_class)
+        self._show_concrete()
         self.combinations.refresh()
         return dropped
+
+    def _show_concrete(self) -> None:
+        """The concrete values are shown only when the project has a concrete design."""
+        designed = self.document.project.concrete is not None
+        if self.concrete_on.isChecked() != designed:
+            self.concrete_on.setChecked(designed)
+        form = self.concrete_form
+        form.setRowVisible(self.concrete_note, not designed)
+        self.concrete_note.setText("" if designed else NO_CONCRETE_PROJECT)
+        for f in self.concrete_fields:
+            form.setRowVisible(f, designed)
+        form.setRowVisible(self.strength, designed)
 
     def option_label(self, key: str) -> str:
         """The words beside the field or choice of criteria option ``key``."""
@@ -1218,8 +1460,14 @@ class ProjectForm(QWidget):
     def show_field(self, field: str, scroll: QScrollArea) -> bool:
         """Show and focus the project's input at ``field`` ("soil.cohesion", "criteria.required.sliding")."""
         head = field.split(".")[0]
-        names = {"soil": "Soil", "site": "Site", "criteria": "Criteria", "project": "Project"}
+        names = {"soil": "Soil", "site": "Site", "criteria": "Criteria", "project": "Project", "concrete": "Concrete"}
         path = tuple(field.split("."))
+        if field == "concrete":
+            self.sections["Concrete"].toggle.setChecked(True)
+            _settle(scroll)
+            scroll.ensureWidgetVisible(self.concrete_on)
+            self.concrete_on.setFocus()
+            return True
         if path in self.choices:
             self.sections[names[head]].toggle.setChecked(True)
             _settle(scroll)
@@ -1237,19 +1485,11 @@ class ProjectForm(QWidget):
         return _focus(self.group, field, section, scroll)
 
     def focus_order(self) -> list[QWidget]:
-        """Every input in the order the form shows it (fields and choice boxes)."""
-        order: list[QWidget] = []
+        """Every input in the order the form shows it (fields, choice and check boxes, the combinations)."""
+        order = []
         for section in self.sections.values():
-            form = section.content.layout()
-            if not isinstance(form, QFormLayout):
-                continue
-            for row in range(form.rowCount()):
-                item = form.itemAt(row, QFormLayout.ItemRole.FieldRole)
-                widget = item.widget() if item is not None else None
-                if isinstance(widget, QComboBox):
-                    order.append(widget)
-                elif widget is not None:
-                    f = next((f for f in self.group.fields if f is widget), None)
-                    if f is not None:
-                        order.append(f.edit)
+            if section.content is self.combinations:
+                order += [self.combinations.custom, self.combinations.table]
+            else:
+                order += _section_order(section, self.group)
         return order
