@@ -728,7 +728,8 @@ SOIL_FIELDS = (
         None,
         None,
         lambda p: p.soil.report,
-        "The report the soil values come from (title, number, date); printed with the design basis.",
+        "The geotechnical report the soil values come from (title, number, date); printed in the package's design "
+        "basis as the source of the soil values (IBC 2021 1803.6 lists what the report gives).",
         text=True,
     ),
 )
@@ -805,15 +806,20 @@ OPTION_FIELDS = (
 PROJECT_FIELDS = tuple(
     _project_field(("project", key), label, None, None, (lambda k: lambda p: getattr(p.info, k))(key), tip, text=True)
     for key, label, tip in (
-        ("name", "Project", "Project name, shown in the window's title and on every sheet of the calculation package."),
-        ("number", "Project number", "The office's job number, in the title block."),
-        ("client", "Client", "The client, in the title block."),
-        ("address", "Site address", "Where the building stands, in the title block."),
-        ("engineer", "Engineer", "Engineer of record or preparer, in the title block."),
-        ("checker", "Checked by", "Who checked the calculations, in the title block."),
-        ("revision", "Revision", 'Revision mark of this issue ("0", "A", "for permit"), in the title block.'),
-        ("revision_date", "Revision date", "Date of this revision as it should print (e.g. 2026-03-14), in the title block."),
-        ("notes", "Notes", "General notes printed with the design basis."),
+        ("name", "Project", "Project name: in the window's title and the title block of every sheet of the package."),
+        ("number", "Project number", "The office's job number, in the title block of every sheet."),
+        ("client", "Client", "The client, in the title block of the cover sheet."),
+        ("address", "Site address", "Where the building stands, in the title block of the cover sheet."),
+        ("engineer", "Engineer", "Engineer of record or preparer: 'prepared by' in the title block."),
+        ("checker", "Checked by", "Who checked the calculations: 'checked by' in the title block."),
+        ("revision", "Revision", 'Revision mark of this issue ("0", "A", "for permit"), in the title block; "0" when empty.'),
+        (
+            "revision_date",
+            "Revision date",
+            "Date of this revision as it should print (e.g. 2026-03-14), in the title block; the date of printing "
+            "goes in each sheet's footer.",
+        ),
+        ("notes", "Notes", "General notes: printed as 'Project notes' on the cover sheet, under the title block."),
     )
 )
 
