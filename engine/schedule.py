@@ -1,4 +1,11 @@
-"""The footing schedule: one row per wall (size, governing ratios, verdict), as rows or a CSV file.
+"""The footing schedule: one row per wall (size, bars, governing ratios, verdict), as rows or a CSV file.
+
+With a concrete section in the project the schedule lists the footing's bars after its size: the
+transverse bars (across the width, "#5 @ 12 in" or "plain"), the bottom and top bars along the length
+("3 #5"), and for each whether it was entered in the project or designed by Kernline. They are read from
+the engine's results (the flexure record and :func:`engine.concrete.along.design_along`), never
+worked out here. A ratio that is no number is said in words (:mod:`engine.summary`): "no demand",
+"no equilibrium".
 
 The CSV file is meant to be opened in a spreadsheet program:
 
@@ -18,15 +25,17 @@ from __future__ import annotations
 
 import csv
 import io
-import math
 import os
 import re
-from collections.abc import Sequence
+from collections.abc import Mapping, Sequence
+from dataclasses import dataclass
 
+from .errors import EngineError
 from .file_safety import atomic_write_text
-from .model import Project
+from .model import Project, Wall
 from .results import WallResult, check_project
 from .stability import reported_checks, table_checks
+from .summary import NO_DEMAND, case_text, state_words
 from .units import format_length
 
 CSV_ENCODING = "utf-8-sig"
@@ -47,17 +56,106 @@ def guard_cell(cell: str) -> str:
     return cell
 
 
+ENTERED = "entered"
+DESIGNED = "designed by Kernline"
+NOT_NEEDED = "none needed"
+BAR_HEADERS = (
+    "Transverse bars",
+    "Transverse bars from",
+    "Bottom bars",
+    "Bottom bars from",
+    "Top bars",
+    "Top bars from",
+)
+"""The bar columns, after the footing's size, when the project has a concrete section."""
+
+
+@dataclass(frozen=True, slots=True, kw_only=True)
+class FootingBars:
+    """The footing's bars as the schedule shows them, each with where it came from.
+
+    ``transverse``: across the width ("#5 @ 12 in", "No. 16 @ 305 mm", "plain", or the engine's
+    words when no bars pass); ``bottom``, ``top``: along the length ("3 #5", "none needed"; ", fails"
+    added where the engine's design along the length does not pass with them); each ``*_from`` is
+    :data:`ENTERED` (given in the project) or :data:`DESIGNED`.
+    """
+
+    transverse: str
+    transverse_from: str
+    bottom: str
+    bottom_from: str
+    top: str
+    top_from: str
+
+    def cells(self) -> list[str]:
+        return [self.transverse, self.transverse_from, self.bottom, self.bottom_from, self.top, self.top_from]
+
+
+def _spaced(text: str, units: str) -> str:
+    """The flexure record's "#5 @ 12 in" in the project's units ("No. 16 @ 305 mm" in SI)."""
+    from .concrete.bars import parse_spaced, spaced_text
+
+    try:
+        the_bar, spacing = parse_spaced(text)
+    except EngineError:  # "plain", "none pass": the engine's words, as they are
+        return text
+    return spaced_text(the_bar, spacing, units)
+
+
+def footing_bars(project: Project, wall: Wall, result: WallResult) -> FootingBars | None:
+    """The bars of ``wall``'s footing from the engine's results (None without a concrete section).
+
+    The transverse bars are the flexure record's (checked when entered, else chosen); the bottom and
+    top bars are those of :func:`engine.concrete.along.design_along` at the footing's size. This runs
+    the design along the length (tens of ms a wall): a view redrawing often keeps the answer per result.
+    """
+    from .concrete.along import design_along
+    from .concrete.bars import counted_text
+
+    if project.concrete is None:
+        return None
+    units = project.units
+    given = wall.footing.reinforcement
+    flexure = next((g.record for c, g in result.governing.items() if c.id == "flexure"), None)
+    transverse = _spaced(flexure.bars, units) if flexure is not None else NO_DEMAND
+    entered_across = given is not None and (given.plain or given.transverse is not None)
+    table, evaluation = result.strength_table, result.strength_evaluation
+    faces = [NO_DEMAND, NO_DEMAND]
+    if table is not None and evaluation is not None and table.cases:
+        design, _index, _diagram = design_along(table, evaluation)
+        for k, face in enumerate((design.bottom, design.top)):
+            shown = counted_text(face.count, face.bar, units) if face.bar is not None and face.count else NOT_NEEDED
+            faces[k] = shown if face.passes else f"{shown}, fails"
+    return FootingBars(
+        transverse=transverse,
+        transverse_from=ENTERED if entered_across else DESIGNED,
+        bottom=faces[0],
+        bottom_from=ENTERED if given is not None and given.bottom is not None else DESIGNED,
+        top=faces[1],
+        top_from=ENTERED if given is not None and given.top is not None else DESIGNED,
+    )
+
+
 def schedule_headers(units: str, project: Project | None = None) -> list[str]:
-    """Column titles of the schedule (the strength checks too when ``project`` has a concrete section)."""
+    """Column titles of the schedule (the bars and the strength checks too when ``project`` has a
+    concrete section)."""
     heads = ["Wall", "Label", "Wall length", "Footing width", "Footing thickness", "Footing length"]
+    if project is not None and project.concrete is not None:
+        heads += BAR_HEADERS
     for check in reported_checks(project) if project is not None else table_checks():
         name = check.title
         heads += [f"{name} ratio", f"{name} required", f"{name} governing case"]
     return heads + ["Result"]
 
 
-def schedule_rows(project: Project, results: Sequence[WallResult]) -> list[list[str]]:
-    """The schedule's rows, formatted in the project's display units."""
+def schedule_rows(
+    project: Project, results: Sequence[WallResult], bars: Mapping[str, FootingBars | None] | None = None
+) -> list[list[str]]:
+    """The schedule's rows, formatted in the project's display units.
+
+    ``bars``: each wall's :func:`footing_bars` by wall id, where the caller has them already (a window
+    keeps them per result); missing ones are worked out by the engine here.
+    """
     walls = {w.id: w for w in project.walls}
     rows = []
     for r in results:
@@ -70,19 +168,15 @@ def schedule_rows(project: Project, results: Sequence[WallResult]) -> list[list[
             format_length(r.thickness, project.units),
             format_length(r.length, project.units),
         ]
+        if project.concrete is not None:
+            known = bars.get(r.wall_id) if bars is not None else None
+            shown = known if known is not None else footing_bars(project, wall, r)
+            row += shown.cells() if shown is not None else [""] * len(BAR_HEADERS)
         for check in reported_checks(project):
             g = r.governing[check]
-            if math.isinf(g.ratio):
-                row += ["no demand", f"{g.required:.2f}", ""]
-            elif g.case_index is None:  # a geometric check (no combination) or a strength check (its most loaded case)
-                direction = "" if g.direction in ("none", "") else f" ({g.direction})"
-                row += [f"{g.ratio:.2f}", f"{g.required:.2f}", g.combination + direction]
-            elif check.id == "bearing" and g.ratio == 0.0:
-                direction = "" if g.direction == "none" else f" ({g.direction})"
-                row += ["no equilibrium", f"{g.required:.2f}", g.combination + direction]
-            else:
-                direction = "" if g.direction == "none" else f" ({g.direction})"
-                row += [f"{g.ratio:.2f}", f"{g.required:.2f}", g.combination + direction]
+            words = state_words(g, r)
+            ratio = words or f"{g.ratio:.2f}"
+            row += [ratio, f"{g.required:.2f}", "" if words == NO_DEMAND else case_text(g)]
         row.append("PASS" if r.passes else "FAIL")
         rows.append(row)
     return rows

@@ -51,7 +51,7 @@ def test_hostile_labels_and_ids_are_written_as_text(tmp_path: Path, capsys: pyte
     raw["walls"][3]["id"] = "=E4"
     rows = rows_of(schedule_of(tmp_path, raw, capsys))
     labels = [row[1] for row in rows[1:]]
-    assert labels == ["'" + label for label in HOSTILE[:4]]
+    assert labels == ["'" + label for label in HOSTILE[: len(raw["walls"])]]
     assert rows[4][0] == "'=E4"
     for row in rows:
         for cell in row:
@@ -66,9 +66,10 @@ def test_csv_is_utf8_with_bom_and_crlf_rows(tmp_path: Path, capsys: pytest.Captu
     data = schedule_of(tmp_path, raw, capsys)
     assert data.startswith(b"\xef\xbb\xbf")
     assert data.endswith(b"\r\n")
-    assert data.count(b"\r\n") == 5  # the header and four rows
+    walls = len(raw["walls"])
+    assert data.count(b"\r\n") == walls + 1  # the header and a row per wall
     assert b',"two\nlines",' in data  # the label's own line break, inside quotes
     rows = rows_of(data)
-    assert len(rows) == 5
+    assert len(rows) == walls + 1
     assert rows[1][1] == "Façade wall, grid 1 ✓ µ"
     assert rows[2][1] == "two\nlines"
