@@ -1,16 +1,25 @@
-"""The drawings panel: the elevation above the soil pressure, on one x scale, with the case picker."""
+"""The drawings panel: the elevation above the soil pressure or the footing's concrete design, all on
+one x scale, with the case picker."""
 
 from __future__ import annotations
 
 from kernline.engine.model import LateralLoad, Wall
+from kernline.engine.results import WallResult
 from kernline.engine.units import Kind, format_length
-from PySide6.QtCore import QRect, Qt
-from PySide6.QtWidgets import QHBoxLayout, QLabel, QSizePolicy, QSplitter, QVBoxLayout, QWidget
+from PySide6.QtCore import Qt
+from PySide6.QtWidgets import QHBoxLayout, QLabel, QSplitter, QStackedWidget, QTabBar, QVBoxLayout, QWidget
 
 from ..document import ProjectDocument
-from .elevation import ElevationView
+from .concrete import ConcreteView
+from .elevation import CAPTION_LINES, Caption, ElevationView
 from .fields import FORCE, trim, unit_factor
 from .pressure import CasePicker, PressurePlot
+
+__all__ = ["CAPTION_LINES", "Caption", "DrawingsPanel", "governing_direction", "lateral_note"]
+
+PRESSURE_PAGE, CONCRETE_PAGE = 0, 1
+# share of the panel's height the elevation keeps above each page (the concrete page has more to show)
+ELEVATION_SHARE = {PRESSURE_PAGE: 0.58, CONCRETE_PAGE: 0.36}
 
 
 def lateral_note(wall: Wall, direction: str) -> str:
@@ -24,45 +33,15 @@ def lateral_note(wall: Wall, direction: str) -> str:
     return note
 
 
-CAPTION_LINES = 2  # a caption wraps to at most this many lines at the narrowest panel
-
-
-class Caption(QLabel):
-    """A hint that wraps to the panel's width; it never sets the window's minimum width.
-
-    Its height is the lines its text takes at the panel's width (one or :data:`CAPTION_LINES`), so a
-    caption that fits on one line leaves the second line's height to the drawing. The height changes
-    only when the number of lines does, not on every edit.
-    """
-
-    def __init__(self) -> None:
-        super().__init__()
-        self.setObjectName("hint")
-        self.setWordWrap(True)
-        self.setSizePolicy(QSizePolicy.Policy.Ignored, QSizePolicy.Policy.Fixed)
-        self.setAlignment(Qt.AlignmentFlag.AlignLeft | Qt.AlignmentFlag.AlignTop)
-        self.setContentsMargins(6, 0, 6, 0)
-        self.lines = 0
-        self._fit()
-
-    def setText(self, text: str) -> None:  # noqa: N802 - Qt's name
-        if text != self.text():
-            super().setText(text)
-            self._fit()
-
-    def resizeEvent(self, event) -> None:  # noqa: N802 - Qt's name
-        super().resizeEvent(event)
-        self._fit()
-
-    def _fit(self) -> None:
-        metrics = self.fontMetrics()
-        margins = self.contentsMargins()
-        width = max(1, self.width() - margins.left() - margins.right())
-        needed = metrics.boundingRect(QRect(0, 0, width, 10_000), int(Qt.TextFlag.TextWordWrap), self.text()).height()
-        lines = max(1, min(CAPTION_LINES, -(-needed // metrics.lineSpacing())))
-        if lines != self.lines:
-            self.lines = lines
-            self.setFixedHeight(metrics.lineSpacing() * lines + 2)
+def governing_direction(result: WallResult | None) -> str:
+    """The lateral direction ("+" or "-") of the case that governs the wall: of the checks whose governing
+    case has a direction, the one with the lowest ratio / required ("" when no case has a direction)."""
+    if result is None:
+        return ""
+    directed = [g for g in result.governing.values() if g.case_index is not None and g.direction in ("+", "-")]
+    if not directed:
+        return ""
+    return min(directed, key=lambda g: g.normalized).direction
 
 
 def _caption() -> Caption:
@@ -70,7 +49,8 @@ def _caption() -> Caption:
 
 
 class DrawingsPanel(QWidget):
-    """Elevation, picker and pressure plot; renders the document's current wall and chosen case."""
+    """Elevation above a choice of soil pressure (with the case picker) or the footing's concrete design;
+    renders the document's current wall and chosen case."""
 
     def __init__(self, document: ProjectDocument, parent: QWidget | None = None) -> None:
         super().__init__(parent)
@@ -79,49 +59,97 @@ class DrawingsPanel(QWidget):
         self.elevation = ElevationView()
         self.pressure = PressurePlot()
         self.pressure.setXLink(self.elevation)
+        self.concrete = ConcreteView()
+        self.concrete.link_x(self.elevation)
         self.picker = CasePicker()
         self.caption = _caption()
-        title = QLabel("Soil pressure for")
-        title.setObjectName("sectionTitle")
+        self.page_bar = QTabBar()
+        self.page_bar.setObjectName("drawingsPages")
+        self.page_bar.setDrawBase(False)
+        self.page_bar.setExpanding(False)
+        self.page_bar.addTab("Soil pressure")
+        self.page_bar.addTab("Concrete")
+        self.page_bar.setTabToolTip(PRESSURE_PAGE, "The soil pressure under the footing for the case picked beside")
+        self.page_bar.setTabToolTip(
+            CONCRETE_PAGE, "The footing's concrete design (ACI 318-19): its section and bars, shear and moment along it"
+        )
+        self.picker_title = QLabel("for")
         head = QHBoxLayout()
         head.setContentsMargins(6, 0, 6, 0)
-        head.addWidget(title)
+        head.addWidget(self.page_bar)
+        head.addWidget(self.picker_title)
         head.addWidget(self.picker, 1)
+        pressure_page = QWidget()
+        pressure_layout = QVBoxLayout(pressure_page)
+        pressure_layout.setContentsMargins(0, 0, 0, 0)
+        pressure_layout.setSpacing(2)
+        pressure_layout.addWidget(self.caption)
+        pressure_layout.addWidget(self.pressure, 1)
+        self.pages = QStackedWidget()
+        self.pages.addWidget(pressure_page)
+        self.pages.addWidget(self.concrete)
         lower = QWidget()
         lower_layout = QVBoxLayout(lower)
         lower_layout.setContentsMargins(0, 0, 0, 0)
         lower_layout.setSpacing(2)
         lower_layout.addLayout(head)
-        lower_layout.addWidget(self.caption)
-        lower_layout.addWidget(self.pressure, 1)
+        lower_layout.addWidget(self.pages, 1)
         upper = QWidget()
         upper_layout = QVBoxLayout(upper)
         upper_layout.setContentsMargins(0, 0, 0, 0)
         upper_layout.setSpacing(2)
-        elevation_title = QLabel("Elevation, to scale")
-        elevation_title.setObjectName("sectionTitle")
+        self.elevation_title = QLabel("Elevation, to scale")
+        self.elevation_title.setObjectName("sectionTitle")
         head_up = QHBoxLayout()
         head_up.setContentsMargins(6, 4, 6, 0)
-        head_up.addWidget(elevation_title)
+        head_up.addWidget(self.elevation_title)
         head_up.addStretch(1)
         upper_layout.addLayout(head_up)
         upper_layout.addWidget(self.elevation_caption)
         upper_layout.addWidget(self.elevation, 1)
-        splitter = QSplitter(Qt.Orientation.Vertical, self)
-        splitter.addWidget(upper)
-        splitter.addWidget(lower)
-        splitter.setStretchFactor(0, 3)
-        splitter.setStretchFactor(1, 2)
-        splitter.setChildrenCollapsible(False)
+        self.splitter = QSplitter(Qt.Orientation.Vertical, self)
+        self.splitter.addWidget(upper)
+        self.splitter.addWidget(lower)
+        self.splitter.setStretchFactor(0, 3)
+        self.splitter.setStretchFactor(1, 2)
+        self.splitter.setChildrenCollapsible(False)
         layout = QVBoxLayout(self)
         layout.setContentsMargins(0, 0, 0, 0)
-        layout.addWidget(splitter)
+        layout.addWidget(self.splitter)
         self.picker.activated.connect(self._on_picked)
+        self.page_bar.currentChanged.connect(self._on_page_changed)
+        self.elevation.scale_changed.connect(self._on_scale_changed)
 
     def _on_picked(self, _index: int) -> None:
         choice = self.picker.choice()
         if choice is not None:
             self.document.set_case_choice(choice)
+
+    def _on_scale_changed(self, words: str) -> None:
+        self.elevation_title.setText(f"Elevation, {words}")
+
+    def show_page(self, page: int) -> None:
+        """Show the soil pressure (0) or the concrete design (1) under the elevation."""
+        self.page_bar.setCurrentIndex(page)
+
+    def _on_page_changed(self, page: int) -> None:
+        self.pages.setCurrentIndex(page)
+        on_pressure = page == PRESSURE_PAGE
+        self.picker.setVisible(on_pressure)
+        self.picker_title.setVisible(on_pressure)
+        self._share()
+
+    def resizeEvent(self, event) -> None:  # noqa: N802 - Qt's name
+        super().resizeEvent(event)
+        self._share()
+
+    def _share(self) -> None:
+        """Split the height between the elevation and the page below as the page needs."""
+        page = self.page_bar.currentIndex()
+        total = sum(self.splitter.sizes()) or self.splitter.height()
+        if total > 0:
+            upper = int(round(ELEVATION_SHARE[page] * total))
+            self.splitter.setSizes([upper, total - upper])
 
     def render(self) -> None:  # type: ignore[override]
         doc = self.document
@@ -134,7 +162,8 @@ class DrawingsPanel(QWidget):
         else:
             self.picker.clear()
         self.picker.setEnabled(result is not None)
-        self.elevation.render(wall, doc.units, direction)
+        self.elevation.render(wall, doc.units, direction, governing_direction(result))
+        self.concrete.set_data(wall, result, doc.units)
         units = doc.units
         ft = wall.footing
         grade = f"; soil cover {format_length(ft.cover, units)} to grade" if ft.cover > 0 else ""

@@ -76,7 +76,7 @@ def test_long_wall_lateral_labels_are_inside_the_plot(qtbot, window):
     qtbot.wait(30)
     elevation = window.drawings.elevation
     shown = _shown_rects(elevation.labels)
-    assert any(" at " in text for text, _rect in shown)
+    assert any("at " in text for text, _rect in shown)
     _assert_clear(elevation.getPlotItem().getViewBox(), shown)
     pressure = window.drawings.pressure
     _assert_clear(pressure.getPlotItem().getViewBox(), _shown_rects(_pressure_labels(pressure)))
