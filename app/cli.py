@@ -186,7 +186,15 @@ def _save_demo(path: str) -> int:
 
 
 def _check(path: str, as_json: bool) -> int:
-    from kernline.engine import check_project, check_table, load_project, results_json, warnings_for, warnings_text
+    from kernline.engine import (
+        along_lines,
+        check_project,
+        check_table,
+        load_project,
+        results_json,
+        warnings_for,
+        warnings_text,
+    )
 
     check_input_file(path)
     doc = load_project(path)
@@ -196,7 +204,10 @@ def _check(path: str, as_json: bool) -> int:
         print(json.dumps(results_json(results, project=doc.project), indent=2, allow_nan=False))
     else:
         print(check_table(doc.project, results))
-    return EXIT_OK if all(r.passes for r in results) else EXIT_FAIL
+        along = along_lines(results)
+        if along:
+            print("\nAlong the length (the footing as a beam, ACI 318-19):\n" + "\n".join("  " + line for line in along))
+    return EXIT_OK if all(r.passes_all for r in results) else EXIT_FAIL
 
 
 def _warn(text: str) -> None:

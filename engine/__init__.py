@@ -47,6 +47,7 @@ _FACADE: dict[str, str | tuple[str, str]] = {
     "Wall": "model",
     "Assumption": "model",
     "check_project": "results",
+    "along_lines": "results",
     "check_wall": "results",
     "results_json": "results",
     "WallResult": "results",

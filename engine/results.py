@@ -10,7 +10,7 @@ from __future__ import annotations
 
 import math
 from collections.abc import Sequence
-from dataclasses import dataclass
+from dataclasses import dataclass, field
 from typing import Any, overload
 
 import numpy as np
@@ -147,10 +147,40 @@ class WallResult:
     evaluation: Evaluation
     strength_table: CaseTable | None = None
     strength_evaluation: Evaluation | None = None
+    memo: dict[str, Any] = field(default_factory=dict, compare=False, repr=False)
 
     @property
     def passes(self) -> bool:
+        """Every governing check passes (stability, embedment and the design across the width). The
+        design along the length is costlier and apart: :attr:`passes_along`."""
         return all(g.passes for g in self.governing.values())
+
+    @property
+    def along(self) -> Any:
+        """The design along the length, ``(LongitudinalDesign, case index, BeamDiagram)`` of
+        :func:`engine.concrete.along.design_along`, or None without a concrete design; computed on
+        first use (tens of milliseconds) and kept."""
+        if "along" not in self.memo:
+            table, ev = self.strength_table, self.strength_evaluation
+            if table is None or ev is None or not table.cases or table.concrete is None:
+                self.memo["along"] = None
+            else:
+                from .concrete.along import design_along
+
+                self.memo["along"] = design_along(table, ev)
+        return self.memo["along"]
+
+    @property
+    def passes_along(self) -> bool:
+        """The footing carries its strength cases as a beam along its length (True without a
+        concrete design)."""
+        along = self.along
+        return along is None or bool(along[0].passes)
+
+    @property
+    def passes_all(self) -> bool:
+        """:attr:`passes` and :attr:`passes_along`: the wall's whole verdict."""
+        return self.passes and self.passes_along
 
     @property
     def worst(self) -> Governing:
@@ -259,6 +289,28 @@ def strength_table(project: Project, wall: Wall) -> CaseTable | None:
     return case_table(wall, project.soil, project.criteria, project.site, project.concrete, Family.STRENGTH)
 
 
+def along_lines(results: Sequence[WallResult]) -> list[str]:
+    """One line per wall with a concrete design: its bars along the length and whether the footing
+    carries its strength cases as a beam (ACI 318-19; :func:`engine.concrete.along.design_along`),
+    with the engine's words when it does not."""
+    lines = []
+    for r in results:
+        if r.along is None:
+            continue
+        design = r.along[0]
+        given = r.table.wall.footing.reinforcement
+        bars = []
+        for face, faced in (("bottom", design.bottom), ("top", design.top)):
+            entered = given is not None and getattr(given, face) is not None
+            if faced.bars:
+                bars.append(f"{face} {faced.bars} ({'entered' if entered else 'designed'})")
+        text = ", ".join(bars) or "no bars"
+        verdict = "carries its strength cases" if design.passes else "FAILS: " + design.message
+        plain = design.plain_moment_capacity is not None and design.passes and not design.message
+        lines.append(f"{r.wall_id}: {text}; " + ("the plain section " if plain else "") + verdict)
+    return lines
+
+
 def check_project(project: Project) -> tuple[WallResult, ...]:
     """Check every wall of the project."""
     return tuple(check_wall(project, wall) for wall in project.walls)
@@ -302,7 +354,7 @@ def wall_json(result: WallResult) -> dict[str, Any]:
         cases.append(entry)
     out: dict[str, Any] = {
         "id": result.wall_id,
-        "passes": result.passes,
+        "passes": result.passes_all,  # the design along the length included
         "footing": {"width": result.width, "thickness": result.thickness, "length": result.length},
         "governing": governing,
         "cases": cases,
@@ -343,12 +395,10 @@ def concrete_json(result: WallResult) -> dict[str, Any] | None:
 def longitudinal_json(result: WallResult, stations: int = 101) -> dict[str, Any] | None:
     """The design along the length (the footing as a beam, ACI 318-19), for the governing strength
     case: extreme moments and shear, the bars of each face, and the diagram as [[x, V, M], ...]."""
-    from .concrete.along import design_along
-
-    table, ev = result.strength_table, result.strength_evaluation
-    if table is None or ev is None or not table.cases or table.concrete is None:
+    table = result.strength_table
+    if result.along is None or table is None:
         return None
-    design, index, diagram = design_along(table, ev)
+    design, index, diagram = result.along
     case = table.cases[index]
     step = max(1, len(diagram.x) // stations)
     points = [

@@ -208,6 +208,15 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
     if best is not None:
         _, extension, thickness, width, _, row, col = best
         message = _why_smallest(all_checks, check_normalized, passes, allowed, row, col)
+        if project.concrete is not None:
+            row, col, skipped = _along_the_length(project, trial, widths, thicknesses, passes, row, col)
+            width, thickness = float(widths[col]), float(thicknesses[row])
+            if skipped:
+                plural = "s pass" if skipped > 1 else " passes"
+                message = (
+                    f"smallest size that also carries its loads along the length: {skipped} smaller size{plural} "
+                    "the other checks but not the design along the length (the footing as a beam, ACI 318-19)"
+                )
         if extensions.size > 1:
             message += _why_this_length(project, extensions, k, [bool(m[4].any()) for m in maps])
         suggestions: tuple[str, ...] = ()
@@ -232,6 +241,30 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
         extensions=extensions,
         length=trial.footing_length if best is not None else None,
     )
+
+
+# How many passing sizes, in order of concrete, are tried against the design along the length (each
+# costs tens of milliseconds); beyond them the first is kept and the verdict says it fails.
+ALONG_TRIES = 40
+
+
+def _along_the_length(
+    project: Project, wall: Wall, widths: np.ndarray, thicknesses: np.ndarray, passes: np.ndarray, row: int, col: int
+) -> tuple[int, int, int]:
+    """The first size, in order of least B·t_f (ties thinner, then narrower), that passes the grid's
+    checks and also the design along the length (:func:`engine.concrete.along.design_along`, which
+    the grid does not evaluate: it costs tens of milliseconds a size). Returns (row, col, how many
+    smaller passing sizes fail it); the grid's choice when none of the first ``ALONG_TRIES`` pass."""
+    from .results import check_wall
+
+    rows, cols = np.nonzero(passes)
+    order = np.lexsort((widths[cols], thicknesses[rows], np.round(thicknesses[rows] * widths[cols], 12)))
+    for tried, i in enumerate(order[:ALONG_TRIES].tolist()):
+        r, c = int(rows[i]), int(cols[i])
+        trial = replace(wall, footing=replace(wall.footing, width=float(widths[c]), thickness=float(thicknesses[r])))
+        if check_wall(project, trial).passes_along:
+            return r, c, tried
+    return row, col, 0
 
 
 def _why_this_length(project: Project, extensions: np.ndarray, k: int, any_passes: list[bool]) -> str:

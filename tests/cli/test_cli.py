@@ -30,7 +30,9 @@ def test_check_json_follows_the_results_format(capsys):
     doc = json.loads(capsys.readouterr().out)
     assert doc["format"] == "kernline-results" and doc["version"] == 1
     wall = doc["walls"][0]
-    assert set(wall["governing"]) == {"overturning", "sliding", "bearing", "embedment"}
+    # the demo has a concrete section: the strength checks join the stability ones
+    assert set(wall["governing"]) == {"overturning", "sliding", "bearing", "embedment", "flexure", "one_way_shear"}
+    assert {"plain", "transverse", "longitudinal"} <= set(wall["concrete"])
     assert "q_max" in wall["governing"]["bearing"]
     assert {"combination", "direction", "vertical", "lateral"} <= set(wall["cases"][0])
     assert set(wall["footing"]) == {"width", "thickness", "length"}

@@ -17,7 +17,13 @@ INCH = 0.0254
 
 
 def demo() -> dict:
-    return json.loads(resource_path("demo.kernline").read_text(encoding="utf-8"))
+    """The demo without its concrete section, walls' construction and reinforcement (each test adds what it tests)."""
+    raw = json.loads(resource_path("demo.kernline").read_text(encoding="utf-8"))
+    raw.pop("concrete", None)
+    for wall in raw["walls"]:
+        wall.pop("construction", None)
+        wall["footing"].pop("reinforcement", None)
+    return raw
 
 
 def test_concrete_section_values_and_defaults():
