@@ -52,6 +52,15 @@ def input_warnings(project: Project, results: Sequence[WallResult] | None = None
                 "effect Ev = 0.2 S_DS D (ASCE 7-16 12.4.2.2) is zero; enter S_DS from the site's seismic data",
             )
         )
+    if seismic_walls and project.concrete is not None and project.criteria.seismic_design_category is None:
+        out.append(
+            InputWarning(
+                field="criteria.seismic_design_category",
+                message=f"is not given while {_walls_text(project, seismic_walls)} carry E loads; the concrete design "
+                "then takes φ = 0.75 for one-way shear (0.60 in D to F, ACI 318-19 21.2.4.3) and asks no continuous "
+                "bars of a plain footing (C to F, IBC 2021 1905.6.2); enter the category (ASCE 7-16 11.6)",
+            )
+        )
     for i, wall in enumerate(project.walls):
         for case in (LoadCase.W, LoadCase.E):
             lateral = any(isinstance(ld, LateralLoad) and ld.case is case for ld in wall.loads)

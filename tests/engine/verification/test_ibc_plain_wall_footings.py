@@ -133,3 +133,19 @@ def test_a_plain_footing_along_its_length_uses_the_plain_section():
     root = math.sqrt(3000.0)
     assert along["plain_moment_capacity"] == pytest.approx(0.60 * 5 * root * 18 * 100 / 6 * LB_IN, rel=1e-6)
     assert along["plain_shear_capacity"] == pytest.approx(0.60 * 4 / 3 * root * 18 * 10 * 4.4482216152605, rel=1e-6)
+
+
+def test_a_missing_seismic_design_category_is_warned_with_e_loads_and_a_concrete_design():
+    from kernline.engine.input_warnings import input_warnings
+
+    project = _project("plain", sdc="D")
+    raw_without = {"criteria.seismic_design_category"}
+    assert not [w for w in input_warnings(project) if w.field in raw_without]  # no E loads here
+    import json
+
+    from kernline.engine.resources import resource_path
+
+    raw = json.loads(resource_path("demo.kernline").read_text(encoding="utf-8"))
+    del raw["criteria"]["seismic_design_category"]
+    warned = [w for w in input_warnings(parse_project(raw)) if w.field == "criteria.seismic_design_category"]
+    assert len(warned) == 1 and "21.2.4.3" in warned[0].message
