@@ -122,12 +122,34 @@ def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[Longitudinal
     if top is None:
         chosen = design_longitudinal(diagrams[hog], thickness=thickness, materials=materials, bottom=bottom)
         top = (chosen.top.count, chosen.top.bar) if chosen.top.bar is not None else None
+    largest = sag if diagrams[sag].max_moment >= -diagrams[hog].min_moment else hog
+    plain = given is not None and given.plain
+    if plain:  # the plain section first: when it carries every case, the bars are only checked at one
+        width = float(np.asarray(evaluation.statics.width))
+        phi_mn, phi_vn = _plain_capacities(width, thickness, concrete.fc, concrete.lam)
+        if all(_plain_carries(d, phi_mn, phi_vn) for d in diagrams):
+            one = design_longitudinal(diagrams[largest], thickness=thickness, materials=materials, bottom=bottom, top=top)
+            return _plain_along([one], width, thickness, concrete.fc, concrete.lam)[0], largest, diagrams[largest]
     designs = [design_longitudinal(d, thickness=thickness, materials=materials, bottom=bottom, top=top) for d in diagrams]
-    if given is not None and given.plain:
+    if plain:
         designs = _plain_along(designs, float(np.asarray(evaluation.statics.width)), thickness, concrete.fc, concrete.lam)
     failing = [i for i, d in enumerate(designs) if not d.passes]
-    index = failing[0] if failing else (sag if diagrams[sag].max_moment >= -diagrams[hog].min_moment else hog)
+    index = failing[0] if failing else largest
     return designs[index], index, diagrams[index]
+
+
+def _plain_capacities(width: float, thickness: float, fc: float, lam: float) -> tuple[float, float]:
+    """φMn and φVn of the whole plain section along the length (ACI 318-19 14.5.2.1, 14.5.5.1 on h_s
+    of 14.5.1.7; b = B)."""
+    from .plain import plain_moment_strength, plain_shear_strength, strength_thickness
+
+    h_s = strength_thickness(thickness)
+    return float(plain_moment_strength(width, h_s, fc, lam)), float(plain_shear_strength(width, h_s, fc, lam))
+
+
+def _plain_carries(diagram: BeamDiagram, phi_mn: float, phi_vn: float) -> bool:
+    moment = max(abs(diagram.max_moment), abs(diagram.min_moment))
+    return moment <= phi_mn * (1.0 + TOLERANCE) and diagram.max_shear <= phi_vn * (1.0 + TOLERANCE)
 
 
 def _plain_along(
@@ -138,17 +160,10 @@ def _plain_along(
     when it does not, the bars' design stands, with the reason first."""
     from dataclasses import replace
 
-    from .plain import plain_moment_strength, plain_shear_strength, strength_thickness
-
-    h_s = strength_thickness(thickness)
-    phi_mn = float(plain_moment_strength(width, h_s, fc, lam))
-    phi_vn = float(plain_shear_strength(width, h_s, fc, lam))
+    phi_mn, phi_vn = _plain_capacities(width, thickness, fc, lam)
     out = []
     for design in designs:
-        d = design.diagram
-        moment = max(abs(d.max_moment), abs(d.min_moment))
-        carries = moment <= phi_mn * (1.0 + TOLERANCE) and d.max_shear <= phi_vn * (1.0 + TOLERANCE)
-        if carries:
+        if _plain_carries(design.diagram, phi_mn, phi_vn):
             out.append(replace(design, passes=True, message="", plain_moment_capacity=phi_mn, plain_shear_capacity=phi_vn))
         else:
             why = "the plain section does not carry the moment and shear along the length (ACI 318-19 14.5.2.1, 14.5.5.1)"

@@ -49,6 +49,10 @@ def main() -> None:
     med, p95 = median_time(lambda: check_wall(project, wall).cases[0], 2000)
     print(f"check one wall with every case record built:    median {med * 1e3:.3f} ms, p95 {p95 * 1e3:.3f} ms")
 
+    for each in project.walls:  # the design along the length: computed once per result, on first use
+        med, p95 = median_time(lambda each=each: check_wall(project, each).along, 20)
+        print(f"check wall {each.id} with the design along the length: median {med * 1e3:.1f} ms, p95 {p95 * 1e3:.1f} ms")
+
     bounds = SizingBounds(
         width_min=12 * INCH,
         width_max=107 * INCH,
@@ -63,7 +67,7 @@ def main() -> None:
     checks = len(check_wall(project, wall).governing)
     med, p95 = median_time(lambda: size_footing(project, big), 60)
     print(
-        f"size one wall on a {widths.size} x {thicknesses.size} grid ({n_cases} cases, {checks} checks): median {med * 1e3:.2f} ms, p95 {p95 * 1e3:.2f} ms (target < 20 ms)"
+        f"size one wall on a {widths.size} x {thicknesses.size} grid ({n_cases} cases, {checks} checks): median {med * 1e3:.2f} ms, p95 {p95 * 1e3:.2f} ms (target < 30 ms with the strength checks)"
     )
     longer = replace(big, sizing=replace(bounds, extension_max=72 * INCH, extension_step=6 * INCH))
     steps = size_footing(project, longer).extensions.size
