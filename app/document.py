@@ -657,6 +657,7 @@ class ProjectDocument(QObject):
             and previous.soil == project.soil
             and previous.criteria == project.criteria
             and previous.site == project.site
+            and previous.concrete == project.concrete
         )
         old_walls = {w.id: w for w in previous.walls} if previous is not None else {}
         results: dict[str, WallResult] = {}

@@ -37,7 +37,7 @@ ENABLE_TEXT = (
 SECTION_WIDTH = 150  # px of the cross-section beside the numbers
 STEEL = "#3b3f44"  # bars: darker than the concrete's edge
 FOOTING_FILL = "#dcdad4"  # the section's concrete, lighter than the elevation's so the bars read
-DIAGRAM_MIN_HEIGHT = 36  # px of each diagram
+DIAGRAM_MIN_HEIGHT = 44  # px of each diagram
 
 # Display units of the per-length results across the width and of the bars (engine unit names).
 PER_LENGTH = {
@@ -265,9 +265,17 @@ class DiagramPlot(pg.PlotWidget):
             spots += [Spot(ex, ey, (0.5, 1.0 - vertical)), Spot(ex, 0.0, (0.5, 1.0 - vertical))]
             self._placements.append(Placement(label, spots, -1 if ey >= 0.0 else 1))
         box = self.getPlotItem().getViewBox()
-        (x_low, x_high), (_y_low, y_high) = box.viewRange()
-        corner = Placement(self.unit_label, [Spot(max(x_low, x[0] if x.size else x_low), y_high, (0.0, 0.0))], 1)
-        self._placements.insert(0, corner)
+        (x_low, x_high), (y_low, y_high) = box.viewRange()
+        x_start = max(x_low, float(x[0])) if x.size else x_low
+        x_end = min(x_high, float(x[-1])) if x.size else x_high
+        # the diagram's name in a corner that is free: top left, bottom left, top right, bottom right
+        corners = [
+            Spot(x_start, y_high, (0.0, 0.0)),
+            Spot(x_start, y_low, (0.0, 1.0)),
+            Spot(x_end, y_high, (1.0, 0.0)),
+            Spot(x_end, y_low, (1.0, 1.0)),
+        ]
+        self._placements.append(Placement(self.unit_label, corners, 0))
         self.layout_labels()
 
     def clear_diagram(self) -> None:
@@ -312,6 +320,8 @@ class ConcreteView(QWidget):
         self.shear_plot = DiagramPlot("shearDiagram", ACCENT)
         self.moment_plot = DiagramPlot("momentDiagram", WARM)
         self.shear_plot.getPlotItem().hideAxis("bottom")
+        # the moment plot also carries the x axis: as much room for its curve as the shear plot has
+        self.moment_plot.setMinimumHeight(DIAGRAM_MIN_HEIGHT + 34)
         top_row = QHBoxLayout()
         top_row.setContentsMargins(0, 0, 0, 0)
         top_row.setSpacing(6)
@@ -319,16 +329,16 @@ class ConcreteView(QWidget):
         top_row.addWidget(self.numbers, 1)
         self.top = QWidget()
         self.top.setLayout(top_row)
-        self.top.setMinimumHeight(64)
-        self.top.setMaximumHeight(104)
+        self.top.setMinimumHeight(58)
+        self.top.setMaximumHeight(92)
         layout = QVBoxLayout(self)
         layout.setContentsMargins(0, 0, 0, 0)
         layout.setSpacing(2)
         layout.addWidget(self.notice)
-        layout.addWidget(self.top, 2)
+        layout.addWidget(self.top, 1)
         layout.addWidget(self.along_caption)
         layout.addWidget(self.shear_plot, 3)
-        layout.addWidget(self.moment_plot, 4)
+        layout.addWidget(self.moment_plot, 5)
         self.enabled = False
         self.stale = False
         self._args: tuple[Wall, WallResult | None, str] | None = None
@@ -393,7 +403,7 @@ class ConcreteView(QWidget):
         along, index, diagram = self._design(result)
         self.along, self.diagram = along, diagram
         plain = bool(flexure.plain)
-        data = section_data(result, None if plain else along)
+        data = section_data(result, along)
         assert data is not None
         self.data = data
         self.section.render(data, units)
@@ -421,7 +431,7 @@ class ConcreteView(QWidget):
         ]
         cover = per_length(data.cover, "bar", units, 1 if units == "US" else 0)
         if flexure.plain:
-            rows.append("<b>plain concrete</b>: no bars (ACI 318-19 chapter 14)")
+            rows.append("<b>plain concrete</b> across the width: no bars (ACI 318-19 chapter 14)")
         else:
             area_decimals = 3 if units == "US" else 0
             bars = (
@@ -440,8 +450,8 @@ class ConcreteView(QWidget):
                 f"ℓ<sub>d</sub> {per_length(ld, 'bar', units, decimals)} needed, "
                 f"{per_length(available, 'bar', units, decimals)} available {_mark(ld_ok)}"
             )
-            along = ", ".join(f"{counted_text(len(r.across), r.bar, units)} {r.face}" for r in data.rows)
-            rows.append(f"along: {along or 'no bars'};&nbsp; cover {cover}")
+        along = ", ".join(f"{counted_text(len(r.across), r.bar, units)} {r.face}" for r in data.rows)
+        rows.append(f"along: {along or 'no bars'};&nbsp; cover {cover}")
         return "<br>".join(rows)
 
     def _render_along(
@@ -465,8 +475,8 @@ class ConcreteView(QWidget):
         self.shear_plot.render(xs, v / ff, length, shear_extremes, f"V ({force})")
         moment_extremes = []
         noise = 1e-6 * max(abs(diagram.max_moment), abs(diagram.min_moment), 1e-30)
-        bottom_bars = "" if plain else _face_words(along.bottom, units)
-        top_bars = "" if plain else _face_words(along.top, units)
+        bottom_bars = _face_words(along.bottom, units)
+        top_bars = _face_words(along.top, units)
         if diagram.max_moment > noise:
             moment_extremes.append(
                 (
@@ -485,16 +495,13 @@ class ConcreteView(QWidget):
             )
         self.moment_plot.render(xs, m / fm, length, moment_extremes, f"M ({moment})")
         head = f"Along the length, as a beam on the soil, at {self.case_words} (+M: bottom in tension)"
-        if plain:
-            bars = "plain footing: no bars drawn; the engine's design along the length assumes bars"
-        else:
-            bars = f"bottom {bottom_bars or 'none'}, top {top_bars or 'none'}"
-            bars += f" {OK_MARK}" if along.passes else f" {NG_MARK}"
+        bars = f"bottom {bottom_bars or 'none'}, top {top_bars or 'none'}"
+        bars += f" {OK_MARK}" if along.passes else f" {NG_MARK}"
         text = f"{head}; {bars}"
         if not along.passes and along.message:
             text += f". {_sentence(along.message)}"
         self.along_caption.setText(text)
-        self.along_caption.setStyleSheet(f"color: {WARM};" if not along.passes and not plain else "")
+        self.along_caption.setStyleSheet(f"color: {WARM};" if not along.passes else "")
 
     # ---- for tests ---------------------------------------------------------------------------
 

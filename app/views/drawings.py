@@ -137,6 +137,8 @@ class DrawingsPanel(QWidget):
         on_pressure = page == PRESSURE_PAGE
         self.picker.setVisible(on_pressure)
         self.picker_title.setVisible(on_pressure)
+        # the concrete page needs the height; its own captions say what the diagrams show
+        self.elevation_caption.setVisible(on_pressure)
         self._share()
 
     def resizeEvent(self, event) -> None:  # noqa: N802 - Qt's name

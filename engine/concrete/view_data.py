@@ -11,7 +11,7 @@ Bar placement (common practice for wall footings, derived here):
 * the transverse bars are the lowest layer, their centre ``cover + db/2`` above the bottom, as the
   transverse design takes them (d = h - cover - db/2, :func:`engine.concrete.transverse.effective_depth`);
 * the bottom longitudinal bars rest on the transverse bars, their centre
-  ``cover + db_t + db/2`` above the bottom;
+  ``cover + db_t + db/2`` above the bottom (``cover + db/2`` when there are no transverse bars);
 * the top longitudinal bars hang ``TOP_COVER`` below the top, their centre ``h - TOP_COVER - db/2``
   above the bottom (:data:`engine.concrete.longitudinal.TOP_COVER`);
 * the bars of a face are spaced evenly across the width between the side covers: centres from
@@ -55,7 +55,7 @@ class SectionData:
     """The footing across its width as the strength checks designed it (SI).
 
     Attributes:
-        plain: no bars (ACI 318-19 chapter 14).
+        plain: no bars across the width (ACI 318-19 chapter 14); bars along the length may be given.
         width: B (m). thickness: h (m). wall_thickness: what sits on the footing (m).
         construction: the wall's kind, which places the moment section (ACI 318-19 Table 13.2.7.1).
         cover: clear cover to the bottom bars (m).
@@ -65,7 +65,7 @@ class SectionData:
         transverse_bar, transverse_spacing: the bars across the width and their spacing (m); None when
             plain or when no bars pass.
         transverse_height: the transverse bars' centre above the bottom (m); 0 when plain.
-        rows: the longitudinal bars of each face that has bars (empty when plain or not designed).
+        rows: the longitudinal bars of each face that has bars (empty without ``along``).
     """
 
     plain: bool
@@ -122,24 +122,14 @@ def section_data(result: WallResult, along: LongitudinalDesign | None = None) ->
     width, thickness = result.width, result.thickness
     construction = Construction(wall.construction.value)
     moment_section = float(np.asarray(design.cantilever))
-    if grid.plain:
-        return SectionData(
-            plain=True,
-            width=width,
-            thickness=thickness,
-            wall_thickness=wall.supported_thickness,
-            construction=construction,
-            cover=cover,
-            moment_section=moment_section,
-            shear_distance=float(np.asarray(design.shear_distance)),
-            transverse_bar=None,
-            transverse_spacing=None,
-            transverse_height=0.0,
-            rows=(),
-        )
-    size = int(np.asarray(design.size))
-    spacing = float(np.asarray(design.spacing))
-    transverse = bar(size) if size > 0 and math.isfinite(spacing) else None
+    plain = bool(grid.plain)
+    if plain:
+        transverse, spacing, distance = None, None, float(np.asarray(design.shear_distance))
+    else:
+        size = int(np.asarray(design.size))
+        spacing = float(np.asarray(design.spacing))
+        transverse = bar(size) if size > 0 and math.isfinite(spacing) else None
+        distance = float(np.asarray(design.effective_depth))
     below = transverse.diameter if transverse is not None else 0.0
     rows: list[BarRow] = []
     if along is not None:
@@ -159,17 +149,17 @@ def section_data(result: WallResult, along: LongitudinalDesign | None = None) ->
                 )
             )
     return SectionData(
-        plain=False,
+        plain=plain,
         width=width,
         thickness=thickness,
         wall_thickness=wall.supported_thickness,
         construction=construction,
         cover=cover,
         moment_section=moment_section,
-        shear_distance=float(np.asarray(design.effective_depth)),
+        shear_distance=distance,
         transverse_bar=transverse,
         transverse_spacing=spacing if transverse is not None else None,
-        transverse_height=cover + 0.5 * below,
+        transverse_height=cover + 0.5 * below if transverse is not None else 0.0,
         rows=tuple(rows),
     )
 
