@@ -91,8 +91,9 @@ class FootingBars:
         return [self.transverse, self.transverse_from, self.bottom, self.bottom_from, self.top, self.top_from]
 
 
-def _spaced(text: str, units: str) -> str:
-    """The flexure record's "#5 @ 12 in" in the project's units ("No. 16 @ 305 mm" in SI)."""
+def bars_in_units(text: str, units: str) -> str:
+    """The flexure record's "#5 @ 12 in" in the project's units ("No. 16 @ 305 mm" in SI); other
+    words ("plain", "none pass") as they are."""
     from .concrete.bars import parse_spaced, spaced_text
 
     try:
@@ -102,14 +103,19 @@ def _spaced(text: str, units: str) -> str:
     return spaced_text(the_bar, spacing, units)
 
 
+def transverse_entered(wall: Wall) -> bool:
+    """Whether the footing's transverse bars (or "plain") were given in the project, not designed."""
+    given = wall.footing.reinforcement
+    return given is not None and (given.plain or given.transverse is not None)
+
+
 def footing_bars(project: Project, wall: Wall, result: WallResult) -> FootingBars | None:
     """The bars of ``wall``'s footing from the engine's results (None without a concrete section).
 
     The transverse bars are the flexure record's (checked when entered, else chosen); the bottom and
-    top bars are those of :func:`engine.concrete.along.design_along` at the footing's size. This runs
-    the design along the length (tens of ms a wall): a view redrawing often keeps the answer per result.
+    top bars are those of the design along the length (``result.along``, :func:`engine.concrete.along.
+    design_along`), which the result works out on first use (tens of ms a wall) and keeps.
     """
-    from .concrete.along import design_along
     from .concrete.bars import counted_text
 
     if project.concrete is None:
@@ -117,18 +123,16 @@ def footing_bars(project: Project, wall: Wall, result: WallResult) -> FootingBar
     units = project.units
     given = wall.footing.reinforcement
     flexure = next((g.record for c, g in result.governing.items() if c.id == "flexure"), None)
-    transverse = _spaced(flexure.bars, units) if flexure is not None else NO_DEMAND
-    entered_across = given is not None and (given.plain or given.transverse is not None)
-    table, evaluation = result.strength_table, result.strength_evaluation
+    transverse = bars_in_units(flexure.bars, units) if flexure is not None else NO_DEMAND
     faces = [NO_DEMAND, NO_DEMAND]
-    if table is not None and evaluation is not None and table.cases:
-        design, _index, _diagram = design_along(table, evaluation)
+    if result.along is not None:  # the engine's design along the length, kept with the result
+        design = result.along[0]
         for k, face in enumerate((design.bottom, design.top)):
             shown = counted_text(face.count, face.bar, units) if face.bar is not None and face.count else NOT_NEEDED
             faces[k] = shown if face.passes else f"{shown}, fails"
     return FootingBars(
         transverse=transverse,
-        transverse_from=ENTERED if entered_across else DESIGNED,
+        transverse_from=ENTERED if transverse_entered(wall) else DESIGNED,
         bottom=faces[0],
         bottom_from=ENTERED if given is not None and given.bottom is not None else DESIGNED,
         top=faces[1],
@@ -153,8 +157,9 @@ def schedule_rows(
 ) -> list[list[str]]:
     """The schedule's rows, formatted in the project's display units.
 
-    ``bars``: each wall's :func:`footing_bars` by wall id, where the caller has them already (a window
-    keeps them per result); missing ones are worked out by the engine here.
+    ``bars``: each wall's :func:`footing_bars` by wall id, where the caller has them already; missing
+    ones are read from the results here. "Result" is the wall's whole verdict, the design along the
+    length included (``WallResult.passes_all``).
     """
     walls = {w.id: w for w in project.walls}
     rows = []
@@ -177,7 +182,7 @@ def schedule_rows(
             words = state_words(g, r)
             ratio = words or f"{g.ratio:.2f}"
             row += [ratio, f"{g.required:.2f}", "" if words == NO_DEMAND else case_text(g)]
-        row.append("PASS" if r.passes else "FAIL")
+        row.append("PASS" if r.passes_all else "FAIL")  # the design along the length included
         rows.append(row)
     return rows
 

@@ -89,12 +89,12 @@ def shortfall(ratio: float, required: float) -> float:
 def margin_text(ratio: float, required: float, passes: bool) -> str:
     """ "14% margin" for a passing ratio, "11% short" for a failing one.
 
-    A margin is rounded down and a shortfall up, so neither reads better than it is: a ratio that
-    fails by a hair reads "1% short", never "0% short".
+    A margin is rounded down, so it never reads larger than it is; a shortfall is rounded to the
+    nearest percent but reads at least "1% short": a ratio that fails by a hair never reads "0% short".
     """
     if passes:
         return f"{max(0, math.floor(100.0 * margin(ratio, required) + 1e-9)):,d}% margin"
-    return f"{max(1, math.ceil(100.0 * shortfall(ratio, required) - 1e-9)):,d}% short"
+    return f"{max(1, round(100.0 * shortfall(ratio, required))):,d}% short"
 
 
 def governing_record(result: WallResult, g: Governing) -> Any:
@@ -115,13 +115,13 @@ def _per_length(value: float, kind: Kind, units: str) -> str:
     return f"{value / (force / length):,.2f} {unit_label(Kind.FORCE, units)}/{unit_label(Kind.LENGTH, units)}"
 
 
-def _of(demand: str, capacity: str) -> str:
-    """ "1,720 of 2,000 psf" when both share the unit; else "1.20 kip of 3.40 kN"."""
+def _of(demand: str, capacity: str, word: str = "of") -> str:
+    """ "1,720 of 2,000 psf" when both share the unit (the unit said once); else "Mu 1.20 of φMn 3.40 kip·ft/ft"."""
     d_num, _, d_unit = demand.rpartition(" ")
     c_num, _, c_unit = capacity.rpartition(" ")
     if d_unit == c_unit and d_num and c_num:
-        return f"{d_num} of {c_num} {c_unit}"
-    return f"{demand} of {capacity}"
+        return f"{d_num} {word} {c_num} {c_unit}"
+    return f"{demand} {word} {capacity}"
 
 
 def _close(a: float | None, b: float) -> bool:
@@ -131,11 +131,12 @@ def _close(a: float | None, b: float) -> bool:
 def comparison_text(g: Governing, result: WallResult, units: str) -> str:
     """The demand against the capacity of ``g``, from its record, in the project's units.
 
-    "1,720 of 2,000 psf allowable" (bearing), "43.20 of 118.00 kip·ft resisting" (overturning: the
-    overturning moment against the resisting one about the toe), "3.10 of 4.12 kip resisting"
-    (sliding), "depth 2'-0\" of 1'-6\" required" (embedment), "Mu 0.70 of φMn 38.40 kip·ft/ft"
-    (flexure), "Vu 2.10 of φVc 9.32 kip/ft" (one-way shear). A flexure ratio set by the bars' development
-    rather than by φMn says so ("ℓd 1'-4 1/2\" of 4 1/2\" available"). A check whose record is not
+    "1,720 of 2,000 psf allowable" (bearing), "43.20 against 118.00 kip·ft resisting" (overturning:
+    the overturning moment against the resisting one about the toe), "3.10 against 4.12 kip resisting"
+    (sliding: the shear against the resistance), "depth 2'-0\", 1'-6\" required" (embedment),
+    "Mu 0.70 of φMn 38.40 kip·ft/ft" (flexure), "Vu 2.10 of φVc 9.32 kip/ft" (one-way shear). A
+    flexure ratio set by the bars' development rather than by φMn says so ("ℓd 1'-4 1/2\" with
+    4 1/2\" available"). A check whose record is not
     known here: "ratio 0.50 of 1.00 required". No demand and no equilibrium: those words.
     """
     words = state_words(g, result)
@@ -146,15 +147,15 @@ def comparison_text(g: Governing, result: WallResult, units: str) -> str:
     if r is None:
         return f"ratio {g.ratio:.2f} of {g.required:.2f} required"
     if hasattr(r, "resisting") and hasattr(r, "moment"):  # overturning, about the toe
-        return _of(q(r.moment, Kind.MOMENT, units), q(r.resisting, Kind.MOMENT, units)) + " resisting"
+        return _of(q(r.moment, Kind.MOMENT, units), q(r.resisting, Kind.MOMENT, units), "against") + " resisting"
     if hasattr(r, "resistance") and hasattr(r, "force"):  # sliding
-        return _of(q(abs(r.force), Kind.FORCE, units), q(r.resistance, Kind.FORCE, units)) + " resisting"
+        return _of(q(abs(r.force), Kind.FORCE, units), q(r.resistance, Kind.FORCE, units), "against") + " resisting"
     if hasattr(r, "pressure_compared") and hasattr(r, "allowable"):  # bearing
         shown = _of(q(r.pressure_compared, Kind.PRESSURE, units), q(r.allowable, Kind.PRESSURE, units))
         net = r.pressure_compared != r.q_max  # the net pressure is compared (soil.bearing_basis "net")
         return ("net " if net else "") + shown + " allowable"
     if hasattr(r, "depth") and hasattr(r, "required_depth"):  # embedment
-        return f"depth {format_length(r.depth, units)} of {format_length(r.required_depth, units)} required"
+        return f"depth {format_length(r.depth, units)}, {format_length(r.required_depth, units)} required"
     if hasattr(r, "moment_capacity") and hasattr(r, "moment"):  # flexure across the width
         moment = f"Mu {_per_length(r.moment, Kind.MOMENT, units)}"
         capacity = f"φMn {_per_length(r.moment_capacity, Kind.MOMENT, units)}"
@@ -163,7 +164,7 @@ def comparison_text(g: Governing, result: WallResult, units: str) -> str:
             return shown
         if r.development_length and _close(g.ratio, max(r.development_available or 0.0, 0.0) / r.development_length):
             return (
-                f"ℓd {format_length(r.development_length, units)} of "
+                f"ℓd {format_length(r.development_length, units)} with "
                 f"{format_length(max(r.development_available, 0.0), units)} available"
             )
         limit = getattr(r, "message", "") or (
@@ -215,10 +216,10 @@ def check_table(project: Project, results: Sequence[WallResult]) -> str:
                 footing_text(r.width, r.thickness, r.length, project.units),
                 *[ratio_text(r.governing[c], r) for c in checks],
                 f"{worst.check.id}: {case_text(worst)}".rstrip(": "),
-                "PASS" if r.passes else "FAIL",
+                "PASS" if r.passes_all else "FAIL",  # the design along the length included
             ]
         )
-    failing = sum(not r.passes for r in results)
+    failing = sum(not r.passes_all for r in results)
     title = f"{project.info.name or 'Project'}: {len(results)} wall(s), {failing} failing"
     listed = assumptions_text(project)
     return f"{title}\n\n{_table(headers, rows)}\n\n" + (f"{listed}\n\n" if listed else "") + CAUTION

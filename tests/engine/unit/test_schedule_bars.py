@@ -49,7 +49,8 @@ def bar_cells(project, results) -> dict[str, dict[str, str]]:
 
 
 def engine_faces(result) -> tuple[str, str]:
-    """The bottom and top bars of the engine's design along the length, as the schedule writes them."""
+    """The bottom and top bars of the engine's design along the length, as the schedule writes them
+    (designed afresh here, not read from the result's memo)."""
     design, _index, _diagram = design_along(result.strength_table, result.strength_evaluation)
     shown = []
     for face in (design.bottom, design.top):
