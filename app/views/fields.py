@@ -18,8 +18,8 @@ from kernline.engine.errors import InputError
 from kernline.engine.model import Project, Wall
 from kernline.engine.registry import Check, Family, checks
 from kernline.engine.units import Kind, parse_quantity
-from PySide6.QtCore import QEvent, QObject, Qt, QTimer, Signal
-from PySide6.QtGui import QContextMenuEvent, QKeyEvent, QKeySequence
+from PySide6.QtCore import QEvent, QObject, QPoint, Qt, QTimer, Signal
+from PySide6.QtGui import QContextMenuEvent, QKeyEvent, QKeySequence, QPainter
 from PySide6.QtWidgets import (
     QAbstractSpinBox,
     QComboBox,
@@ -27,6 +27,7 @@ from PySide6.QtWidgets import (
     QLineEdit,
     QSizePolicy,
     QToolButton,
+    QToolTip,
     QVBoxLayout,
     QWidget,
 )
@@ -263,19 +264,18 @@ class QuantityField(QWidget):
         self.edit.setObjectName("field_" + "_".join(spec.path))
         if spec.placeholder:
             self.edit.setPlaceholderText(spec.placeholder)
-        self.error = QLabel(self)
+        # the reason for a refusal sits inside the field, at its right (shortened; whole in the tooltip and
+        # the status bar), so that a message never pushes the rows below it down
+        self.error = ElidedLabel(self.edit, Qt.AlignmentFlag.AlignRight)
         self.error.setObjectName("fieldError")
-        self.error.setWordWrap(True)
+        self.error.setAttribute(Qt.WidgetAttribute.WA_TransparentForMouseEvents, True)
         self.error.hide()
+        self.edit.installEventFilter(self)
         layout = QVBoxLayout(self)
         layout.setContentsMargins(0, 0, 0, 0)
-        layout.setSpacing(1)
+        layout.setSpacing(0)
         layout.addWidget(self.edit)
-        layout.addWidget(self.error)
-        # the height follows the width: a message that wraps to three lines gets three lines
-        policy = QSizePolicy(QSizePolicy.Policy.Expanding, QSizePolicy.Policy.Minimum)
-        policy.setHeightForWidth(True)
-        self.setSizePolicy(policy)
+        self.setSizePolicy(QSizePolicy.Policy.Expanding, QSizePolicy.Policy.Fixed)
         self._shown = ""
         self.assumption: Any = None  # the engine's Assumption for this field, when the engineer did not enter it
         self._assumed_action: Any = None
@@ -337,6 +337,7 @@ class QuantityField(QWidget):
         if self._assumed_action is not None:
             self._assumed_action.setVisible(on)
             self._assumed_action.setToolTip(assumed_tip(assumption) if on else "")
+        self._place_error()
         self._update_tip()
 
     def _update_tip(self) -> None:
@@ -356,7 +357,27 @@ class QuantityField(QWidget):
             self.edit.style().polish(self.edit)
         self.error.setText(message or "")
         self.error.setVisible(invalid)
+        self._place_error()
         self._update_tip()
+
+    def eventFilter(self, watched: QObject, event: QEvent) -> bool:  # noqa: N802 - Qt's name
+        if watched is self.edit and event.type() == QEvent.Type.Resize:
+            self._place_error()
+        return False
+
+    def _place_error(self) -> None:
+        """Put the message in the right part of the field (at most 3/5 of it) and keep the typing clear of it."""
+        edit = self.edit
+        if self.error.isHidden() or not self.error.text():
+            if edit.textMargins().right():
+                edit.setTextMargins(0, 0, 0, 0)
+            return
+        room = edit.width() - ERROR_INSET
+        if self._assumed_action is not None and self._assumed_action.isVisible():
+            room -= ASSUMED_ACTION_WIDTH
+        width = max(0, min(self.error.fontMetrics().horizontalAdvance(self.error.text()) + 4, room * 3 // 5))
+        self.error.setGeometry(room - width, 0, width, edit.height())
+        edit.setTextMargins(0, 0, width + 2, 0)
 
     def reset(self) -> None:
         """Drop any typing and error (another wall or project is shown)."""
@@ -386,11 +407,50 @@ class QuantityField(QWidget):
         """Whether the engineer typed the assumed value itself: entered, it becomes their own."""
         return self.assumption is not None and self.edit.isModified() and bool(self.edit.text().strip())
 
+    def announce_error(self) -> None:
+        """Show the whole message under the field for a moment (the field itself shows it shortened)."""
+        if self.error.isVisible() and self.error.text() and self.edit.isVisible():
+            QToolTip.showText(self.edit.mapToGlobal(QPoint(0, self.edit.height())), self.error.text(), self.edit)
+
     def _on_editing_finished(self) -> None:
         self._timer.stop()
         if self.edit.text() != self._shown or self.invalid or self._adopting():
             self.commit_requested.emit(self.edit.text(), False)
         self.session += 1
+
+
+# Where the message inside a field sits: clear of the frame, and of the assumed mark when it is shown (px).
+ERROR_INSET = 6
+ASSUMED_ACTION_WIDTH = 20
+
+
+class ElidedLabel(QLabel):
+    """A one-line message that never grows: text too long for its width ends in "…", whole in its tooltip.
+
+    ``text()`` keeps the whole message; only the painting is shortened.
+    """
+
+    def __init__(self, parent: QWidget | None = None, align: Qt.AlignmentFlag = Qt.AlignmentFlag.AlignLeft) -> None:
+        super().__init__(parent)
+        self._align = align | Qt.AlignmentFlag.AlignVCenter
+        self.setSizePolicy(QSizePolicy.Policy.Ignored, QSizePolicy.Policy.Fixed)
+
+    def reserve_line(self) -> None:
+        """Keep one line of height whether or not there is a message (under a table: nothing moves)."""
+        self.setFixedHeight(self.fontMetrics().height() + 4)
+
+    def setText(self, text: str) -> None:  # noqa: N802 - Qt's name
+        super().setText(text)
+        self.setToolTip(text)
+        self.update()
+
+    def paintEvent(self, event: Any) -> None:  # noqa: N802 - Qt's name
+        painter = QPainter(self)
+        painter.setPen(self.palette().color(self.foregroundRole()))
+        rect = self.contentsRect()
+        shown = self.fontMetrics().elidedText(self.text(), Qt.TextElideMode.ElideRight, rect.width())
+        painter.drawText(rect, int(self._align), shown)
+        painter.end()
 
 
 class WheelGuard(QObject):
@@ -467,7 +527,9 @@ class Section(QWidget):
         self.toggle.setChecked(expanded)
         self.toggle.setToolButtonStyle(Qt.ToolButtonStyle.ToolButtonTextBesideIcon)
         self.toggle.setArrowType(Qt.ArrowType.DownArrow if expanded else Qt.ArrowType.RightArrow)
-        self.toggle.setFocusPolicy(Qt.FocusPolicy.NoFocus)
+        # reached with Tab (Space opens or folds it) so the keyboard reaches a folded section's fields too;
+        # a click does not take the focus from the field being edited
+        self.toggle.setFocusPolicy(Qt.FocusPolicy.TabFocus)
         self.content = content
         layout = QVBoxLayout(self)
         layout.setContentsMargins(0, 4, 0, 4)

@@ -28,6 +28,7 @@ from PySide6.QtWidgets import (
     QLabel,
     QPushButton,
     QScrollArea,
+    QSizePolicy,
     QStyledItemDelegate,
     QTableWidget,
     QTableWidgetItem,
@@ -55,6 +56,7 @@ from .fields import (
     SOIL_FIELDS,
     STEM_FIELDS,
     WALL_FIELDS,
+    ElidedLabel,
     FieldSpec,
     Note,
     QuantityField,
@@ -187,6 +189,7 @@ class FieldGroup:
         except InputError as err:
             if not live:
                 field.set_error(field_problem(err.problem, spec.kind, doc.units))
+                field.announce_error()
             return False
         if value == get_at(doc.raw, path):
             field.set_error(None)
@@ -208,6 +211,7 @@ class FieldGroup:
                 # at the field its label names it: the engine's sentence without its path
                 refusal = doc.last_refusal
                 field.set_error(field_problem(refusal.problem, spec.kind, doc.units) if refusal is not None else message)
+                field.announce_error()
             return False
         field.set_error(None)
         if not live:
@@ -297,18 +301,43 @@ def _form() -> tuple[QWidget, QFormLayout]:
     return box, form
 
 
+def reserved_message(parent: QWidget) -> tuple[QWidget, ElidedLabel]:
+    """A message line under a table whose place is kept when it is empty: (its holder, the message).
+
+    The message is one line, shortened with "…" when long (whole in its tooltip), so nothing below moves.
+    """
+    holder = QWidget(parent)
+    message = ElidedLabel(holder)
+    message.setObjectName("fieldError")
+    message.reserve_line()
+    holder.setFixedHeight(message.height())
+    holder.setSizePolicy(QSizePolicy.Policy.Ignored, QSizePolicy.Policy.Fixed)
+    row = QHBoxLayout(holder)
+    row.setContentsMargins(0, 0, 0, 0)
+    row.addWidget(message)
+    message.hide()
+    return holder, message
+
+
 # ---- loads table -------------------------------------------------------------------------------------
 
-LOAD_COLUMNS = ("Type", "Case", "Value", "At / from / height", "To", "Label")
+LOAD_COLUMNS = ("Type", "Case", "Value", "Start x / at x / h", "End x", "Label")
 LOAD_TIPS = (
     "line: uniform load along the wall (from-to); point: a concentrated load; lateral: an in-plane shear (W or E only).",
     "ASCE 7-16 load case symbol (section 2.2): D dead, L live, Lr roof live, S snow, R rain, W wind, E seismic.",
     "Positive downward; a negative W line or point load is uplift. Lateral loads are magnitudes; the window checks "
     "both directions (Kernline mechanics).",
-    "Line: where it starts; point: where it acts (both from the wall's start end); lateral: height above the top of "
-    "the footing (the arm about the footing's base is height + t_f).",
-    "Line loads only: where the load ends (the whole wall when not given).",
+    "x is measured along the wall from the wall's start end (not from the footing's end: the footing begins "
+    "'extension at start' before it). Line load: the x where it starts; point load: the x where it acts; lateral "
+    "load: its height h above the top of the footing (the arm about the footing's base is h + t_f).",
+    "Line loads only: the x where the load ends, from the wall's start end (the whole wall when not given).",
     "Your description, printed beside the load.",
+)
+
+
+LOADS_WHERE = (
+    "x: measured along the wall from the wall's start end (the footing's end lies 'extension at start' before "
+    "it). h: height of a lateral load above the top of the footing."
 )
 
 
@@ -379,13 +408,11 @@ class LoadsEditor(QWidget):
             | QAbstractItemView.EditTrigger.AnyKeyPressed
             | QAbstractItemView.EditTrigger.SelectedClicked
         )
+        self.table.setTabKeyNavigation(False)  # Tab goes on to the next input; the arrow keys move between cells
         self.table.setItemDelegateForColumn(0, _ChoiceDelegate(KINDS, self.table))
         self.table.setItemDelegateForColumn(1, _ChoiceDelegate(CASES, self.table))
         self.table.setMinimumHeight(150)
-        self.message = QLabel(self)
-        self.message.setObjectName("fieldError")
-        self.message.setWordWrap(True)
-        self.message.hide()
+        holder, self.message = reserved_message(self)
         buttons = QHBoxLayout()
         buttons.setSpacing(4)
         self.add_buttons = {}
@@ -407,10 +434,13 @@ class LoadsEditor(QWidget):
         self.remove_button.clicked.connect(self._remove)
         self.up_button.clicked.connect(lambda: self._move(-1))
         self.down_button.clicked.connect(lambda: self._move(1))
+        self.where = Note(self)
+        self.where.setText(LOADS_WHERE)
         layout = QVBoxLayout(self)
         layout.setContentsMargins(8, 0, 0, 0)
+        layout.addWidget(self.where)
         layout.addWidget(self.table)
-        layout.addWidget(self.message)
+        layout.addWidget(holder)
         layout.addLayout(buttons)
         self._refreshing = False
         self._units = ""
@@ -658,19 +688,20 @@ class CombinationsEditor(QWidget):
     def __init__(self, document: ProjectDocument, parent: QWidget | None = None) -> None:
         super().__init__(parent)
         self.document = document
-        self.custom = QCheckBox("Use our own list of combinations")
-        self.custom.setToolTip("Replace the method's preset combinations by a list edited here. Starts as a copy of the preset.")
+        self.custom = QCheckBox("Edit the combinations for this project")
+        self.custom.setToolTip(
+            "Replace the method's combinations by a list of this project's own, edited here. It starts as a copy of "
+            "the method's; untick to return to the method's list."
+        )
         self.checks: tuple[Check, ...] = ()
         self.table = QTableWidget(0, 0, self)
         self.table.setObjectName("combinationsTable")
+        self.table.setTabKeyNavigation(False)  # Tab goes on to the next input; the arrow keys move between cells
         self._set_columns()
         self.table.verticalHeader().setDefaultSectionSize(20)
         self.table.verticalHeader().hide()
         self.table.setMinimumHeight(180)
-        self.message = QLabel(self)
-        self.message.setObjectName("fieldError")
-        self.message.setWordWrap(True)
-        self.message.hide()
+        holder, self.message = reserved_message(self)
         self.add_button = QPushButton("+ combination")
         self.remove_button = QPushButton("Delete")
         buttons = QHBoxLayout()
@@ -681,7 +712,7 @@ class CombinationsEditor(QWidget):
         layout.setContentsMargins(8, 0, 0, 0)
         layout.addWidget(self.custom)
         layout.addWidget(self.table)
-        layout.addWidget(self.message)
+        layout.addWidget(holder)
         layout.addLayout(buttons)
         self._refreshing = False
         self._key: tuple | None = None
@@ -1006,9 +1037,9 @@ def _section_order(section: Section, group: FieldGroup) -> list[QWidget]:
     content = section.content
     form = content.layout()
     if not isinstance(form, QFormLayout):
-        return [w for w in content.findChildren(QAbstractScrollArea) if isinstance(w, QTableWidget)]
+        return [section.toggle, *(w for w in content.findChildren(QAbstractScrollArea) if isinstance(w, QTableWidget))]
     by_widget = {id(f): f for f in group.fields}
-    order: list[QWidget] = []
+    order: list[QWidget] = [section.toggle]
     for row in range(form.rowCount()):
         for role in (QFormLayout.ItemRole.FieldRole, QFormLayout.ItemRole.SpanningRole):
             item = form.itemAt(row, role)
@@ -1017,6 +1048,8 @@ def _section_order(section: Section, group: FieldGroup) -> list[QWidget]:
                 order.append(widget)
             elif widget is not None and id(widget) in by_widget:
                 order.append(by_widget[id(widget)].edit)
+            if widget is not None:
+                break  # a spanning row answers to both roles
     return order
 
 
@@ -1489,7 +1522,7 @@ class ProjectForm(QWidget):
         order = []
         for section in self.sections.values():
             if section.content is self.combinations:
-                order += [self.combinations.custom, self.combinations.table]
+                order += [section.toggle, self.combinations.custom, self.combinations.table]
             else:
                 order += _section_order(section, self.group)
         return order
