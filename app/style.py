@@ -36,9 +36,9 @@ NO_DEMAND_MARK = "–"
 # Line styles of the check boundaries on the design map, given to the registered checks in their order
 # (overturning, sliding, bearing, embedment, ...; a further check reuses them from the start): a dash
 # pattern (dash, gap, ...; (1, 0) is solid), a tone, and the glyph that draws the pattern in the legend.
-CHECK_DASHES = ((1, 0), (6, 3), (1.5, 2.5), (8, 3, 1.5, 3))
-CHECK_TONES = ("#2f3439", "#7a4b8c", "#b4532a", "#6f5f3f")
-CHECK_GLYPHS = ("──", "– –", "···", "–·–")
+CHECK_DASHES = ((1, 0), (6, 3), (1.5, 2.5), (8, 3, 1.5, 3), (12, 4), (8, 3, 1.5, 3, 1.5, 3))
+CHECK_TONES = ("#2f3439", "#7a4b8c", "#b4532a", "#6f5f3f", "#2b5f9e", "#8c3a5b")
+CHECK_GLYPHS = ("──", "– –", "···", "–·–", "— —", "–··–")
 
 
 def check_style(index: int) -> tuple[tuple[float, ...], str, str]:
@@ -69,6 +69,7 @@ QTreeWidget::item:selected, QTableView::item:selected, QListWidget::item:selecte
     background: {ACCENT_LIGHT}; color: {GRAPHITE};
 }}
 QTabWidget::pane {{ border: 1px solid {HAIRLINE}; }}
+QScrollArea#verdictBox, QWidget#verdict {{ background: {PAPER}; }}
 QToolBar {{ border: none; spacing: 4px; background: {PANEL}; }}
 QToolBar QToolButton:checked {{ background: {ACCENT}; color: white; border-radius: 3px; }}
 QPushButton {{ padding: 3px 10px; }}

@@ -20,7 +20,7 @@ from kernline.engine.registry import Check
 from kernline.engine.sizing import SizingResult, sized_footing_values
 from kernline.engine.stability import table_checks
 from kernline.engine.units import Kind
-from PySide6.QtCore import QRectF, Qt, Signal
+from PySide6.QtCore import QPointF, QRectF, Qt, Signal
 from PySide6.QtWidgets import QFrame, QGridLayout, QHBoxLayout, QLabel, QPushButton, QScrollArea, QVBoxLayout, QWidget
 
 from .. import commands
@@ -32,7 +32,9 @@ from .fields import LONG, SHORT, trim, unit_factor
 NOT_ALLOWED, FAILS, PASSES = 0, 1, 2
 # Clip for drawing boundaries: "no demand" (inf) becomes a large finite number.
 _CLIP = 1.0e3
-RING_ROOM = 0.08  # of the grid's span, kept around it for the ring of a corner cell
+RING_ROOM = 0.08  # of the grid's span, kept around it for the ring of a corner cell before the plot has a size
+RING_RADIUS_PX = 11.0  # the chosen ring's 18 px symbol, its pen and a pixel to spare
+LABEL_GAP_PX = 3.0  # between a boundary's end and its label, and between two nudged labels
 SIDE_WIDTH = 320  # px: the buttons, message and legend beside the map
 
 
@@ -63,6 +65,40 @@ def boundary_lines(values: np.ndarray, widths: np.ndarray, thicknesses: np.ndarr
     return np.array(xs), np.array(ys)
 
 
+def dash_glyph(dashes: tuple[float, ...]) -> str:
+    """The legend glyph of a line drawn with the dash pattern ``dashes`` (on, off, on, off, … in pen
+    widths, as QPen.setDashPattern takes it; an off length of 0 is a solid line).
+
+    A short mark (under 2 pen widths) is a dot, a long one (10 or more) an em dash, others en dashes;
+    gaps of 2 pen widths or more are spaces. The pattern repeats until the glyph shows three marks.
+    """
+    if len(dashes) < 2 or not any(dashes[1::2]):
+        return "───"
+    period = ["·" if on < 2 else "—" if on >= 10 else "–" for on in dashes[0::2]]
+    spaced = any(off >= 2 for off in dashes[1::2])
+    marks = [period[k % len(period)] for k in range(max(3, len(period) + 1))]
+    return (" " if spaced else "").join(marks)
+
+
+def _line_end(
+    xs: np.ndarray, ys: np.ndarray, x_span: tuple[float, float], y_span: tuple[float, float]
+) -> tuple[float, float] | None:
+    """The end of a boundary where its label goes: of the ends of its pieces, the one farthest up and to
+    the right of the grid (away from the small sizes, where the ring usually sits)."""
+    finite = np.isfinite(xs) & np.isfinite(ys)
+    if not finite.any():
+        return None
+    idx = np.flatnonzero(finite)
+    # ends of the pieces: first and last finite index of each run between NaNs
+    breaks = np.flatnonzero(np.diff(idx) > 1)
+    ends = np.unique(np.concatenate([idx[[0, -1]], idx[breaks], idx[breaks + 1]]))
+    sx = (x_span[1] - x_span[0]) or 1.0
+    sy = (y_span[1] - y_span[0]) or 1.0
+    score = (xs[ends] - x_span[0]) / sx + (ys[ends] - y_span[0]) / sy
+    k = int(ends[int(np.argmax(score))])
+    return float(xs[k]), float(ys[k])
+
+
 def _length_sized(s: SizingResult) -> bool:
     """Whether sizing tried more than one length (the wall has extension bounds)."""
     return s.extensions is not None and s.extensions.size > 1
@@ -80,6 +116,52 @@ def _extensions(entry: SizingEntry) -> dict[str, float] | None:
     e = s.extension if s.extension is not None else float(s.extensions[-1])
     footing = entry.wall.footing
     return {"extension_start": footing.extension_start + e, "extension_end": footing.extension_end + e}
+
+
+def _free_top(wanted: float, left: float, w: float, h: float, placed: list[QRectF], bounds: QRectF) -> float | None:
+    """The top (scene y) nearest ``wanted`` at which a w × h label at ``left`` stays inside ``bounds`` and
+    clear of ``placed``; tries steps up and down alternately. None when nothing is clear."""
+    low, high = bounds.top(), bounds.bottom() - h
+    start = min(max(wanted, low), high)
+    step = 2.0
+    tops = [start]
+    for k in range(1, int((bounds.height() + h) / step) + 2):
+        tops += [start - k * step, start + k * step]
+    for top in tops:
+        if not low - 1e-6 <= top <= high + 1e-6:
+            continue
+        rect = QRectF(left, top, w, h).adjusted(-1, -LABEL_GAP_PX / 2, 1, LABEL_GAP_PX / 2)
+        if not any(rect.intersects(other) for other in placed):
+            return top
+    return None
+
+
+def _layout(items: list[tuple[QPointF, float, float]], bounds: QRectF) -> tuple[int, list[QRectF]]:
+    """Rectangles for labels of size w × h at line ends p, in this order: each just above its end, right
+    of it (left when the right would leave ``bounds``), nudged up or down clear of those placed before it
+    (beside one of them when the plot is too short for that). Returns
+    how many found no clear place (those stay at their end, inside ``bounds``) and the rectangles."""
+    placed: list[QRectF] = []
+    misses = 0
+    for p, w, h in items:
+        right_side, left_side = p.x() + LABEL_GAP_PX, p.x() - LABEL_GAP_PX - w
+        sides = [right_side, left_side] if right_side + w <= bounds.right() else [left_side, right_side]
+        # last resorts on a short plot: beside a label already placed
+        sides += sorted(
+            (x for r in placed for x in (r.left() - w - LABEL_GAP_PX, r.right() + LABEL_GAP_PX)), key=lambda x: abs(x - sides[0])
+        )
+        sides = [min(max(x, bounds.left()), bounds.right() - w) for x in sides]
+        rect = None
+        for left in sides:
+            top = _free_top(p.y() - h, left, w, h, placed, bounds)
+            if top is not None:
+                rect = QRectF(left, top, w, h)
+                break
+        if rect is None:
+            misses += 1
+            rect = QRectF(sides[0], min(max(p.y() - h, bounds.top()), bounds.bottom() - h), w, h)
+        placed.append(rect)
+    return misses, placed
 
 
 class DesignMapView(QWidget):
@@ -170,11 +252,15 @@ class DesignMapView(QWidget):
         self.fresh = False
         self.busy = False
         self._grid_key: tuple | None = None
+        self._grid_rect: QRectF | None = None
+        self._cell = (1.0, 1.0)
+        self._label_ends: list[tuple[float, float] | None] = []
         self._units = ""
         self.size_button.clicked.connect(self.size_requested)
         self.size_all_button.clicked.connect(self.size_all_requested)
         self.adopt_button.clicked.connect(self.adopt_chosen)
         self.adopt_all_button.clicked.connect(self.adopt_all)
+        self.plot.getPlotItem().getViewBox().sigResized.connect(self._on_resized)
         self.plot.scene().sigMouseMoved.connect(self._on_mouse_moved)
         self.plot.scene().sigMouseClicked.connect(self._on_mouse_clicked)
 
@@ -194,19 +280,22 @@ class DesignMapView(QWidget):
         self.boundaries, self.boundary_labels = [], []
         glyphs = []
         for k, check in enumerate(checks):
-            dashes, tone, glyph = check_style(k)
-            pen = _pen(tone, 2.0, Qt.PenStyle.CustomDashLine if len(dashes) > 1 and dashes[1] else Qt.PenStyle.SolidLine)
-            if len(dashes) > 1 and dashes[1]:
+            dashes, tone, _glyph = check_style(k)
+            dashed = len(dashes) > 1 and any(dashes[1::2])
+            pen = _pen(tone, 2.0, Qt.PenStyle.CustomDashLine if dashed else Qt.PenStyle.SolidLine)
+            pen.setCapStyle(Qt.PenCapStyle.FlatCap)  # the marks as long as the pattern says, as the glyph shows them
+            if dashed:
                 pen.setDashPattern(list(dashes))
             curve = pg.PlotCurveItem(pen=pen, connect="finite")
             curve.setZValue(3)
             item.addItem(curve)
             self.boundaries.append(curve)
-            label = pg.TextItem("", color=tone, anchor=(0, 1))
+            label = pg.TextItem("", color=tone, anchor=(0, 0))
+            label.textItem.document().setDocumentMargin(1.0)
             label.setZValue(4)
             item.addItem(label)
             self.boundary_labels.append(label)
-            glyphs.append(f"{glyph} {check.title.lower()}")
+            glyphs.append(f"{dash_glyph(dashes)} {check.title.lower()}")
         self.checks = checks
         self.legend.setText(
             "Filled cells pass every check; grey cells are narrower than the wall. "
@@ -215,6 +304,10 @@ class DesignMapView(QWidget):
             + "\n".join("    ".join(glyphs[i : i + 2]) for i in range(0, len(glyphs), 2))
             + "\n◯ smallest passing size (least B × t_f)   ✕ current size"
         )
+
+    def legend_glyphs(self) -> dict[str, str]:
+        """Each check's legend glyph by its name, as the legend prints it."""
+        return {c.title.lower(): dash_glyph(check_style(k)[0]) for k, c in enumerate(self.checks)}
 
     def legend_checks(self) -> list[str]:
         """The checks the legend names, in its order."""
@@ -263,23 +356,19 @@ class DesignMapView(QWidget):
         key = (rect.x(), rect.y(), rect.width(), rect.height())
         if key != self._grid_key:
             self._grid_key = key
-            # half a cell more on every side, and room for the ring's radius on a small map, so the
-            # ring and cross at a corner cell show whole
-            px = max(dw / 2, RING_ROOM * rect.width())
-            py = max(dt / 2, RING_ROOM * rect.height())
-            item.setRange(xRange=(rect.left() - px, rect.right() + px), yRange=(rect.top() - py, rect.bottom() + py), padding=0.0)
+            self._grid_rect = QRectF(rect)
+            self._cell = (dw, dt)
+            self._fit_range()
+        self._label_ends = []
+        x_span = (float(widths[0]), float(widths[-1]))
+        y_span = (float(thicknesses[0]), float(thicknesses[-1]))
         for k, curve in enumerate(self.boundaries):
             xs, ys = boundary_lines(s.check_normalized[k], widths, thicknesses)
             curve.setData(xs, ys)
-            label = self.boundary_labels[k]
-            finite = np.isfinite(xs)
-            if finite.any():
-                idx = np.flatnonzero(finite)
-                mid = idx[len(idx) // 2]
-                label.setText(self.checks[k].title.lower())
-                label.setPos(float(xs[mid]), float(ys[mid]))
-            else:
-                label.setText("")
+            end = _line_end(xs, ys, x_span, y_span)
+            self.boundary_labels[k].setText(self.checks[k].title.lower() if end is not None else "")
+            self._label_ends.append(end)
+        self._place_labels()
         if s.feasible:
             self.chosen.setData([s.width / f], [s.thickness / f])
         else:
@@ -290,6 +379,60 @@ class DesignMapView(QWidget):
         if not fresh:
             text = ("Sizing again…  " if self.busy else "The inputs changed since this map was made; size again.  ") + text
         self.message.setText(text)
+
+    def _fit_range(self) -> None:
+        """Show the grid with half a cell more on every side and room for the ring's radius (in pixels,
+        from the plot's present size), so the ring and cross at a corner cell show whole."""
+        rect = self._grid_rect
+        if rect is None:
+            return
+        dw, dt = self._cell
+        box = self.plot.getPlotItem().getViewBox()
+        w_px, h_px = box.width(), box.height()
+
+        def room(span: float, cell: float, pixels: float) -> float:
+            # the margin m in data units with m >= r px once the view spans span + 2m over the pixels
+            if pixels > 4 * RING_RADIUS_PX:
+                return max(cell / 2, RING_RADIUS_PX * span / (pixels - 2 * RING_RADIUS_PX))
+            return max(cell / 2, RING_ROOM * span)
+
+        px = room(rect.width(), dw, w_px)
+        py = room(rect.height(), dt, h_px)
+        box.setRange(xRange=(rect.left() - px, rect.right() + px), yRange=(rect.top() - py, rect.bottom() + py), padding=0.0)
+
+    def _on_resized(self) -> None:
+        self._fit_range()
+        self._place_labels()
+
+    def _place_labels(self) -> None:
+        """Put each boundary's label at the boundary's end, inside the plot, nudged up or down (or to the
+        other side of the end) clear of the other labels, in scene pixels since the labels keep their
+        size on screen."""
+        box = self.plot.getPlotItem().getViewBox()
+        bounds = box.sceneBoundingRect()
+        wanted: list[tuple[pg.TextItem, QPointF, float, float]] = []
+        for label, end in zip(self.boundary_labels, self._label_ends, strict=False):
+            if end is None or not label.toPlainText():
+                continue
+            size = label.textItem.boundingRect()
+            wanted.append((label, box.mapViewToScene(QPointF(*end)), size.width(), size.height()))
+        best: tuple[int, list[QRectF]] | None = None
+        # the checks' order first; when a label finds no clear place, the labels top down, then bottom up
+        for order in (
+            list(range(len(wanted))),
+            sorted(range(len(wanted)), key=lambda i: wanted[i][1].y()),
+            sorted(range(len(wanted)), key=lambda i: -wanted[i][1].y()),
+        ):
+            misses, rects = _layout([wanted[i][1:] for i in order], bounds)
+            by_label = [rects[order.index(i)] for i in range(len(wanted))]
+            if best is None or misses < best[0]:
+                best = (misses, by_label)
+            if misses == 0:
+                break
+        if best is None:
+            return
+        for (label, *_rest), rect in zip(wanted, best[1], strict=True):
+            label.setPos(box.mapSceneToView(rect.topLeft()))
 
     def _message(self, s: SizingResult, unit: str, f: float) -> str:
         if s.feasible:

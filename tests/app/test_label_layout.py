@@ -140,4 +140,6 @@ def test_schedule_shows_verdict_first_and_copies_in_engine_order(qtbot, window):
     header = view.table.horizontalHeader()
     result_column = view.headers.index("Result")
     assert header.sectionViewportPosition(result_column) + header.sectionSize(result_column) <= view.table.viewport().width()
-    assert view.tsv().splitlines()[0].split("\t") == schedule_headers(window.document.units)
+    # the demo has a concrete section: the engine's columns include the bars and the strength checks
+    assert window.document.project.concrete is not None
+    assert view.tsv().splitlines()[0].split("\t") == schedule_headers(window.document.units, window.document.project)
