@@ -584,7 +584,8 @@ WALL_FIELDS = (
         None,
         None,
         lambda w: w.label,
-        "A description of the wall (grid line, storey); printed in the schedule.",
+        "A description of the wall (grid line, storey), in your words; printed in the schedule and beside the wall's "
+        "sheets of the package (Kernline schedule).",
         text=True,
     ),
     _wall_field(
@@ -622,7 +623,9 @@ STEM_FIELDS = (
         Kind.LENGTH,
         SHORT,
         lambda w: w.stem.thickness,
-        "Thickness of the stem wall (used only when the stem height is above zero).",
+        "Thickness of the stem wall, used only when the stem height is above zero: its weight (concrete unit weight × "
+        "stem thickness × stem height × wall length) is dead load, and the soil cover is taken over B minus the "
+        "stem thickness (Kernline mechanics, plain statics).",
     ),
 )
 
@@ -714,7 +717,7 @@ SIZING_FIELDS = tuple(
 _EXTENSION_RULE = (
     "Sizing of the footing's length: equal extensions e are added at both ends, from 0 to this bound by this "
     "step, on top of the extensions entered above; L_f = extension at start + wall length + extension at end + 2e. "
-    "Both bounds are given together, or neither (then the length is not sized)."
+    "Both bounds are given together, or neither (then the length is not sized). Kernline sizing rule."
 )
 
 EXTENSION_FIELDS = tuple(
@@ -748,7 +751,7 @@ SOIL_FIELDS = (
         None,
         lambda p: p.soil.friction,
         "Coefficient of friction between footing and soil; resists sliding as friction × N while N > 0 "
-        "(presumptive values: IBC 2021 Table 1806.2; the geotechnical report governs).",
+        "(IBC 2021 1806.3.2; presumptive values in IBC 2021 Table 1806.2; the geotechnical report governs).",
     ),
     _project_field(
         ("soil", "cohesion"),

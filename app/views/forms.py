@@ -1254,7 +1254,10 @@ class ProjectForm(QWidget):
             ("criteria", "method"),
             "Method",
             [(method_name(code), code.id) for code in codes(Family.SERVICE)],
-            "The code basis: its load combinations, required ratios and options. Options the method does not "
+            "The code basis: ASCE 7-16 or ASCE 7-22 allowable stress design (2.4), the alternative basic "
+            "combinations of IBC 2021 1605.2, or service loads with factors of safety (common practice); each "
+            "item's tooltip gives its clauses. It sets the load combinations, required ratios and options. "
+            "Options the method does not "
             "take are hidden, and choosing another method removes those the new one does not take (one undo step).",
         ).box
         for i, code in enumerate(codes(Family.SERVICE)):
