@@ -21,7 +21,7 @@ from PySide6.QtGui import QColor
 from PySide6.QtWidgets import QComboBox, QWidget
 
 from ..style import ACCENT, ACCENT_LIGHT, GRAPHITE, MUTED, WARM, configure_pyqtgraph
-from .elevation import Placement, Spot, _pen, place_labels, style_axes
+from .elevation import GAP, Placement, Spot, _pen, place_labels, style_axes
 from .fields import LONG, PRESSURE, trim, unit_factor
 
 MIN_HEIGHT = 140  # px
@@ -126,6 +126,7 @@ class PressurePlot(pg.PlotWidget):
         plot.addItem(self.notice)
         self._units = ""
         self._y_range: tuple[float, float] | None = None
+        self._top: float | None = None
         self.diagram: PressureDiagram | None = None
         self.shown_q: np.ndarray = np.zeros(0)
         self.shown_allowable = 0.0
@@ -133,7 +134,7 @@ class PressurePlot(pg.PlotWidget):
         self.label_rects: list[QRectF] = []
         box = plot.getViewBox()
         box.sigRangeChanged.connect(self.layout_labels)
-        box.sigResized.connect(self.layout_labels)
+        box.sigResized.connect(self._on_resized)
 
     def render(self, wall: Wall, result: WallResult, index: int, units: str) -> PressureDiagram:  # type: ignore[override]
         """Draw the pressure of case ``index`` of ``result``; returns the engine's diagram."""
@@ -163,7 +164,8 @@ class PressurePlot(pg.PlotWidget):
         self.base.setData([0.0, length], [0.0, 0.0])
         peak = float(np.max(q)) if diagram.stable else 0.0
         top = _nice_ceiling(max(peak, allowable) * 1.18)
-        y_range = (-0.22 * top, top * 1.45)
+        self._top = top
+        y_range = self._headroom_range(top)
         if y_range != self._y_range:  # a new range re-ticks the axis: only when the nice ceiling moves
             self._y_range = y_range
             plot.setYRange(*y_range, padding=0.0)
@@ -172,6 +174,8 @@ class PressurePlot(pg.PlotWidget):
         increased = result.table.wind_or_seismic[index] and result.table.criteria.bearing_increase != 1.0
         self.allowable_label.setText(f"allowable {trim(allowable, 1)} {q_unit}" + (" (increased)" if increased else ""))
         k1, k2 = diagram.kern
+        for label in self.kern_labels:  # emptied while nothing was checked
+            label.setText("kern")
         self.kern[0].setValue(k1 / fl)
         self.kern[1].setValue(k2 / fl)
         kern_spots = [[Spot(k1 / fl, y_range[0], (1.0, 0.0))], [Spot(k2 / fl, y_range[0], (0.0, 0.0))]]
@@ -221,6 +225,25 @@ class PressurePlot(pg.PlotWidget):
         self.layout_labels()
         return diagram
 
+    def _headroom_range(self, top: float) -> tuple[float, float]:
+        """The pressure axis range: to 1.45 × top below the footing line, and above it room for the kern
+        labels (their height in pixels at the plot's present height), at least 0.22 × top."""
+        box = self.getPlotItem().getViewBox()
+        need = self.kern_labels[0].textItem.boundingRect().height() + 2 * GAP + 7.0  # and the ▼'s upper half
+        pixels = box.height()
+        above = 0.22 * top
+        if pixels > 2 * need:
+            above = max(above, need * 1.45 * top / (pixels - need))
+        return (-above, top * 1.45)
+
+    def _on_resized(self, *_args) -> None:
+        if self.diagram is not None and self._top is not None:
+            y_range = self._headroom_range(self._top)
+            if y_range != self._y_range:
+                self._y_range = y_range
+                self.getPlotItem().setYRange(*y_range, padding=0.0)
+        self.layout_labels()
+
     def render_unchecked(self, wall: Wall, units: str, missing: str) -> None:
         """Nothing is checked yet (site values missing): the footing line and a notice of what to enter."""
         plot = self.getPlotItem()
@@ -237,6 +260,7 @@ class PressurePlot(pg.PlotWidget):
             line.setValue(x)
         for label in (*self.kern_labels, *self.end_labels, self.contact_label):
             label.setText("")
+        self._top = None
         self._y_range = (-0.25, 1.0)
         plot.setYRange(*self._y_range, padding=0.0)
         plot.hideAxis("left")  # no pressure: no pressure scale
@@ -251,8 +275,22 @@ class PressurePlot(pg.PlotWidget):
         bounds = box.sceneBoundingRect()
         # the allowable line is an obstacle for the labels placed before the allowable label itself
         band = QRectF(bounds.left(), line - 1.5, bounds.width(), 3.0)
-        before = [p for p in self._placements if p.item is not self.allowable_label]
-        rects = place_labels(box, before, [band])
+        # the kern labels keep off the pressure block and the resultant's ▼
+        diagram_rects = []
+        if len(self.shown_q):
+            xs, _ys = self.block.getData()
+            if xs is not None and len(xs):
+                a = box.mapViewToScene(QPointF(float(np.min(xs)), 0.0))
+                b = box.mapViewToScene(QPointF(float(np.max(xs)), float(np.max(self.shown_q))))
+                diagram_rects.append(QRectF(a, b).normalized().adjusted(0.0, -1.0, 0.0, 0.0))
+            rx, ry = self.resultant.getData()
+            if rx is not None and len(rx):
+                c = box.mapViewToScene(QPointF(float(rx[0]), float(ry[0])))
+                diagram_rects.append(QRectF(c.x() - 7.0, c.y() - 7.0, 14.0, 14.0))
+        kern = [p for p in self._placements if p.item in self.kern_labels]
+        rects = place_labels(box, kern, [band, *diagram_rects])
+        before = [p for p in self._placements if p.item is not self.allowable_label and p.item not in self.kern_labels]
+        rects += place_labels(box, before, [band, *[r.adjusted(-GAP, -GAP, GAP, GAP) for r in rects]])
         shown = [QRectF(r) for r in rects]
         own = [p for p in self._placements if p.item is self.allowable_label]
         self.label_rects = shown + place_labels(box, own, [r.adjusted(-2.0, -2.0, 2.0, 2.0) for r in shown])
