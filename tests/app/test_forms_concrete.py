@@ -16,6 +16,7 @@ import json
 import pytest
 from kernline.engine.model import WallConstruction
 from kernline.engine.project_file import load_project
+from kernline.engine.results import concrete_json
 from PySide6.QtWidgets import QApplication
 from window_helpers import INCH, demo_raw, field, type_into
 
@@ -255,3 +256,35 @@ def test_show_field_reaches_the_concrete_inputs(qtbot, window):
     ):
         assert window.show_field(path), path
         qtbot.waitUntil(lambda t=target: QApplication.focusWidget() is t(), timeout=2000)
+
+
+def test_the_warning_of_a_missing_seismic_design_category_leads_to_its_choice(qtbot, window):
+    """A concrete design with E loads and no category is warned about; the warning's click reaches the choice,
+    and choosing a category clears the warning."""
+    doc = window.document
+    view = window.warnings_view
+    assert not any(w.field == "criteria.seismic_design_category" for w in doc.warnings())
+    _with_concrete(window)
+    row = next(i for i, w in enumerate(doc.warnings()) if w.field == "criteria.seismic_design_category")
+    assert view.texts()[row].startswith("⚠ Seismic design category:")  # the field in the form's words
+    window.project_form.sections["Criteria"].toggle.setChecked(False)
+    view._on_item(view.list.item(row))
+    box = window.project_form.choices[("criteria", "seismic_design_category")].box
+    qtbot.waitUntil(lambda: QApplication.focusWidget() is box, timeout=2000)
+    assert window.project_form.sections["Criteria"].toggle.isChecked()
+    window.project_form.set_choice(("criteria", "seismic_design_category"), "D")
+    assert not any(w.field == "criteria.seismic_design_category" for w in doc.warnings())
+    assert not any(t.startswith("⚠ Seismic design category") for t in view.texts())
+
+
+def test_a_concrete_edit_is_live_in_the_results(qtbot, window):
+    """A thinner cover raises d and so the one-way shear capacity the engine reports (ACI 318-19 22.5.5.1)."""
+    doc = window.document
+    _with_concrete(window)
+    before = concrete_json(doc.current_result)["transverse"]["shear_capacity"]
+    type_into(qtbot, field(window, "concrete", "cover"), "2 in")
+    assert doc.project.concrete.cover == pytest.approx(2 * INCH)
+    after = concrete_json(doc.current_result)["transverse"]["shear_capacity"]
+    assert after > before  # d one inch larger: Vc grows (8 λ ρw^(1/3) √f'c b d, ρw = As / (b d))
+    doc.undo_stack.undo()
+    assert concrete_json(doc.current_result)["transverse"]["shear_capacity"] == pytest.approx(before)
