@@ -20,6 +20,7 @@ from kernline.app.views.fields import (
     unit_label,
 )
 from kernline.engine.units import Kind, parse_quantity
+from PySide6.QtCore import QPoint
 from PySide6.QtWidgets import QApplication
 from window_helpers import demo_raw, field, select_wall, type_into
 
@@ -196,9 +197,14 @@ def test_a_bare_number_in_a_load_cell_is_read_in_the_unit_the_cell_shows(qtbot, 
     assert "kip" in table.horizontalHeaderItem(2).toolTip() and "plf" in table.horizontalHeaderItem(2).toolTip()
 
 
-def test_the_warnings_fold_away_while_the_design_map_needs_the_height(qtbot, window):
-    assert window.warnings_view.isVisible()
+def test_the_warnings_keep_their_place_when_the_design_map_opens(qtbot, window):
+    """Steady layout: opening the design map neither hides the warnings nor moves them."""
+    view = window.warnings_view
+    assert view.isVisible()
+    y = view.mapTo(window, QPoint(0, 0)).y()
     window.tabs.setCurrentWidget(window.design_map)
-    assert not window.warnings_view.isVisible()
+    QApplication.processEvents()
+    assert view.isVisible() and view.mapTo(window, QPoint(0, 0)).y() == y
     window.tabs.setCurrentWidget(window.cases_table)
-    assert window.warnings_view.isVisible()
+    QApplication.processEvents()
+    assert view.isVisible() and view.mapTo(window, QPoint(0, 0)).y() == y
