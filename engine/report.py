@@ -61,11 +61,13 @@ if TYPE_CHECKING:  # pragma: no cover
 # so the package looks the same on every machine and in the frozen build.
 FONT_FOLDER = "fonts"
 INCH = 72.0
-SEAL_SIZE = 3.0 * INCH  # the empty square kept for the engineer's seal and signature
-BAND_HEIGHT = SEAL_SIZE + 12.0  # title block: the seal square plus its caption line
-MARGIN_TOP = 36.0
-MARGIN_BOTTOM = 28.0
-BAND_GAP = 10.0
+STRIP_HEIGHT = 0.7 * INCH  # the title strip across the top of every sheet (at most 0.75 in)
+SMALL_SEAL = STRIP_HEIGHT  # the optional seal box at the strip's right end
+MARGIN_TOP = 26.0
+MARGIN_BOTTOM = 34.0  # the footer line (print date) sits in it
+FOOTER_Y = 18.0
+STRIP_GAP = 9.0
+TEXT_FLOOR = 6.5  # the smallest text size of drawings and tables (body text is at least 7 pt)
 _CELL_PAD = 2.5
 _PAD_TOP = 1.5
 _PAD_BOTTOM = 2.0
@@ -416,17 +418,21 @@ def _flowable_classes() -> dict[str, type]:
     class SectionStart(Flowable):
         """Zero-size marker: the sheet's subject from here on, and the sheet where the section starts."""
 
-        def __init__(self, key: str, subject: str) -> None:
+        def __init__(self, key: str, subject: str, outline: tuple[tuple[str, str, int], ...] = ()) -> None:
             super().__init__()
-            self.key, self.subject = key, subject
+            self.key, self.subject, self.outline = key, subject, outline
             self.width = self.height = 0
 
         def wrap(self, aw: float, ah: float) -> tuple[float, float]:
             return 0, 0
 
         def draw(self) -> None:
-            self.canv._kl_subject = self.subject
-            self.canv._kl_starts.setdefault(self.key, self.canv.getPageNumber())
+            c = self.canv
+            if self.subject:  # a heading's bookmark keeps the sheet's subject
+                c._kl_subject = self.subject
+            c._kl_starts.setdefault(self.key, c.getPageNumber())
+            for key, title, level in self.outline:  # (destination, words, level) entries of the PDF outline
+                c._kl_marks.append((c.getPageNumber(), key, title, level))
 
     class ContentsLine(Flowable):
         """One line of the contents: the title now, the sheet numbers when the canvas is saved."""
@@ -453,6 +459,9 @@ def _flowable_classes() -> dict[str, type]:
             c.setDash()
             x, y = c.absolutePosition(self.width, 2)
             c._kl_numbers.append((c.getPageNumber(), x, y, self.refs))
+            if self.refs:  # the whole line links to the first sheet it names
+                x0, y0 = c.absolutePosition(0, 0)
+                c._kl_links.append((c.getPageNumber(), (x0, y0 - 1, x0 + self.width, y0 + self.size + 2), self.refs[0][1]))
 
     class RichText(Flowable):
         """Wrapped runs of text with an optional bullet, box and border; splits between lines."""
@@ -562,9 +571,17 @@ def _flowable_classes() -> dict[str, type]:
         is several times faster than reportlab's general Table for the package's long tables.
         """
 
-        def __init__(self, spec: GridSpec, fonts: _Fonts, rows: list[list[Any]], bold_rows: frozenset[int]) -> None:
+        def __init__(
+            self,
+            spec: GridSpec,
+            fonts: _Fonts,
+            rows: list[list[Any]],
+            bold_rows: frozenset[int],
+            links: tuple[str, ...] = (),
+        ) -> None:
             super().__init__()
             self.spec, self.fonts, self.rows, self.bold_rows = spec, fonts, rows, bold_rows
+            self.links = links  # per row (the header's entry ""): the section key its row links to
             self.width = sum(spec.widths)
             self._heights: list[float] | None = None
 
@@ -601,8 +618,15 @@ def _flowable_classes() -> dict[str, type]:
             if k - head < _MIN_ROWS:  # nor alone under the header at the bottom of this one
                 return []
             header = self.rows[:head]
-            first = Grid(self.spec, self.fonts, self.rows[:k], frozenset(i for i in self.bold_rows if i < k))
-            rest = Grid(self.spec, self.fonts, header + self.rows[k:], frozenset(i - k + head for i in self.bold_rows if i >= k))
+            links = self.links + ("",) * (len(self.rows) - len(self.links))
+            first = Grid(self.spec, self.fonts, self.rows[:k], frozenset(i for i in self.bold_rows if i < k), links[:k])
+            rest = Grid(
+                self.spec,
+                self.fonts,
+                header + self.rows[k:],
+                frozenset(i - k + head for i in self.bold_rows if i >= k),
+                links[:head] + links[k:],
+            )
             return [first, rest]
 
         def draw(self) -> None:
@@ -676,9 +700,78 @@ def _flowable_classes() -> dict[str, type]:
             c.drawText(text)
             for flow, x, y_top in flows:  # wrapped to their column when the row height was found
                 flow.drawOn(c, x, y_top - flow.height)
+            for r, key in enumerate(self.links):  # a row that names a wall links to its sheets
+                if key and r < len(self.rows):
+                    x0, y0 = c.absolutePosition(0, tops[r + 1])
+                    x1, y1 = c.absolutePosition(xs[1], tops[r])
+                    c._kl_links.append((c.getPageNumber(), (x0, y0, x1, y1), key))
             c.restoreState()
 
-    return {"SectionStart": SectionStart, "ContentsLine": ContentsLine, "RichText": RichText, "Sketch": Sketch, "Grid": Grid}
+    class CalcLine(Flowable):
+        """One step of a calculation: the clause in a narrow left column, the step wrapped at its operators
+        in the middle, the result repeated in a right-hand results column; a remark under it when given."""
+
+        def __init__(
+            self, clause: str, main: list[Span], result: list[Span], note: list[Span], fonts: _Fonts, text: _Text
+        ) -> None:
+            super().__init__()
+            self.clause, self.main, self.result, self.note = clause, main, result, note
+            self.fonts, self.text = fonts, text
+            self._lines: list[_WrappedLine] = []
+            self._clause: list[_WrappedLine] = []
+            self._result: list[_WrappedLine] = []
+            self._note: list[_WrappedLine] = []
+
+        def wrap(self, aw: float, ah: float) -> tuple[float, float]:
+            self.width = aw
+            mid = aw - _CLAUSE_COLUMN - _RESULT_COLUMN - 8.0
+            self._lines = _layout([self.main], _STYLES["calc"], self.fonts, self.text, mid)
+            self._clause = _layout([[Span(self.clause)]], _STYLES["clause"], self.fonts, self.text, _CLAUSE_COLUMN - 4.0)
+            self._result = _layout([self.result], _STYLES["result"], self.fonts, self.text, _RESULT_COLUMN)
+            self._note = _layout([self.note], _STYLES["remark"], self.fonts, self.text, mid) if self.note else []
+            lead = _STYLES["calc"].leading
+            body = max(len(self._lines) * lead, len(self._clause) * _STYLES["clause"].leading)
+            self.height = body + len(self._note) * _STYLES["remark"].leading + 1.5
+            return aw, self.height
+
+        def draw(self) -> None:
+            c = self.canv
+            top = self.height
+            st, cl, rs, rm = _STYLES["calc"], _STYLES["clause"], _STYLES["result"], _STYLES["remark"]
+            _draw_lines(c, self._clause, 0.0, top - 0.6, cl.leading, cl.size)
+            _draw_lines(c, self._lines, _CLAUSE_COLUMN, top, st.leading, st.size)
+            # the results column: right-aligned on the step's last line, behind a hairline
+            last = top - (len(self._lines) - 1) * st.leading
+            x_res = self.width - _RESULT_COLUMN
+            c.saveState()
+            c.setStrokeColorRGB(0.7, 0.7, 0.7)
+            c.setLineWidth(0.3)
+            c.line(x_res - 4.0, top, x_res - 4.0, top - len(self._lines) * st.leading)
+            c.restoreState()
+            res = [(max(0.0, _RESULT_COLUMN - _line_width(segs)), segs) for _, segs in self._result[:1]]
+            _draw_lines(c, res, x_res, last, rs.leading, rs.size)
+            if self._note:
+                _draw_lines(c, self._note, _CLAUSE_COLUMN + 10.0, top - len(self._lines) * st.leading, rm.leading, rm.size)
+
+        def getSpaceAfter(self) -> float:  # noqa: N802 - reportlab's name
+            return 1.5
+
+    return {
+        "SectionStart": SectionStart,
+        "ContentsLine": ContentsLine,
+        "RichText": RichText,
+        "Sketch": Sketch,
+        "Grid": Grid,
+        "CalcLine": CalcLine,
+    }
+
+
+_CLAUSE_COLUMN = 62.0  # the left margin column of a calculation step: the clause it follows
+_RESULT_COLUMN = 92.0  # the right-hand results column
+
+
+def _line_width(segments: list[_Segment]) -> float:
+    return sum(_width(piece, font, size) for piece, font, size, _, _ in segments)
 
 
 def _draw_shape(c: Any, shape: Any, fonts: _Fonts, text: _Text) -> None:
@@ -714,6 +807,7 @@ def _draw_shape(c: Any, shape: Any, fonts: _Fonts, text: _Text) -> None:
     elif isinstance(shape, Arrow):
         _arrow(c, shape.x1, shape.y1, shape.x2, shape.y2, shape.width, _COLORS.get(shape.color, _COLORS["ink"]))
     elif isinstance(shape, Label):
+        shape = replace(shape, size=max(shape.size, TEXT_FLOOR))
         font = fonts.bold if shape.bold else fonts.regular
         runs = formula(shape.text) if shape.markup else plain(shape.text)
         c.saveState()
@@ -766,7 +860,7 @@ def _arrow(c: Any, x1: float, y1: float, x2: float, y2: float, width: float, col
 
 
 def _dimension(c: Any, d: Dimension, fonts: _Fonts, text: _Text) -> None:
-    size = 6.0
+    size = TEXT_FLOOR
     runs = formula(d.text) if d.markup else plain(d.text)
     w = _runs_width(runs, fonts.regular, size, text)
     c.saveState()
@@ -814,17 +908,41 @@ def _dimension(c: Any, d: Dimension, fonts: _Fonts, text: _Text) -> None:
 # ---------------------------------------------------------------------------------------------
 
 _STYLES = {
-    "h1": TextStyle(size=13, leading=16, bold=True, space_after=6, keep_with_next=True),
-    "h2": TextStyle(size=9.5, leading=12, bold=True, space_before=8, space_after=3, keep_with_next=True),
-    "body": TextStyle(),
-    "small": TextStyle(size=7, leading=9.6, color="grey"),
-    "note": TextStyle(size=7.5, leading=9.5, space_before=6),
-    "caution": TextStyle(size=9, leading=12, bold=True, border=True, padding=5, space_before=8, space_after=10, splits=False),
-    "pass": TextStyle(bold=True, back="pass", padding=3, space_before=4, space_after=6, splits=False),
-    "fail": TextStyle(bold=True, back="fail", padding=3, space_before=4, space_after=6, color="fail", splits=False),
-    "bullet": TextStyle(left_indent=12, bullet="•", space_after=3),
+    "h1": TextStyle(size=12, leading=14, bold=True, space_after=4, keep_with_next=True),
+    "h2": TextStyle(size=9, leading=11, bold=True, space_before=5, space_after=1.5, keep_with_next=True),
+    "body": TextStyle(size=8, leading=10.2, space_after=2.5),
+    "small": TextStyle(size=7, leading=8.8, color="grey", space_after=2),
+    "note": TextStyle(size=7.5, leading=9.2, space_before=4),
+    "caution": TextStyle(size=8.5, leading=11, bold=True, border=True, padding=5, space_before=6, space_after=8, splits=False),
+    "pass": TextStyle(size=8, leading=10.2, bold=True, back="pass", padding=2.5, space_before=3, space_after=4, splits=False),
+    "fail": TextStyle(
+        size=8, leading=10.2, bold=True, back="fail", padding=2.5, space_before=3, space_after=4, color="fail", splits=False
+    ),
+    "bullet": TextStyle(size=7.5, leading=9.4, left_indent=10, bullet="•", space_after=1.5),
     "eq": TextStyle(leading=12, left_indent=58, first_indent=-50, space_after=4, splits=False),
+    # a calculation step: the step, its clause, its result and a remark (see CalcLine)
+    "calc": TextStyle(size=8, leading=9.8, left_indent=10, first_indent=-10, space_after=0),
+    "clause": TextStyle(size=6.5, leading=8.0, color="grey", space_after=0),
+    "result": TextStyle(size=8, leading=9.8, bold=True, space_after=0),
+    "remark": TextStyle(size=7, leading=8.2, color="grey", space_after=0),
 }
+
+
+_NO_BREAK = "\u00a0"
+_OPERATORS = ("+", "−", "×", "/", "=", "-")
+
+
+def _operator_breaks(spans: list[Span]) -> list[Span]:
+    """Spans whose spaces allow a line break only before an operator (+ − × / =): the other spaces
+    become no-break spaces, so a long substitution wraps at an operator."""
+    out = []
+    for sp in spans:
+        words = sp.text.split(" ")
+        text = words[0]
+        for word in words[1:]:
+            text += (" " if word[:1] in _OPERATORS else _NO_BREAK) + word
+        out.append(replace(sp, text=text))
+    return out
 
 
 def _hard_lines(spans: list[Span]) -> list[list[Span]]:
@@ -847,6 +965,10 @@ class _Builder:
         self.fonts = fonts
         self.text = _Text(fonts)
         self.classes = _flowable_classes()
+        self._parent = ""
+        self._section = ""
+        self._level = 0
+        self._marks = 0
 
     def rich(self, value: Cell, style: str | TextStyle = "body") -> Any:
         st = _STYLES[style] if isinstance(style, str) else style
@@ -855,7 +977,8 @@ class _Builder:
     def section(self, section: Section, package: Package) -> list[Any]:
         from reportlab.platypus import CondPageBreak, PageBreak
 
-        out: list[Any] = [PageBreak(), self.classes["SectionStart"](section.key, section.subject)]
+        start = self.classes["SectionStart"](section.key, section.subject, self._outline(section))
+        out: list[Any] = [PageBreak(), start] if section.new_sheet else [start]
         blocks = section.blocks
         k = 0
         while k < len(blocks):
@@ -871,11 +994,29 @@ class _Builder:
             k += 1
         return out
 
+    def _outline(self, section: Section) -> tuple[tuple[str, str, int], ...]:
+        """The outline entries a section starts: its group's entry when the group changes, then its own."""
+        entries: list[tuple[str, str, int]] = []
+        level = 0
+        if section.parent:
+            if section.parent != self._parent:
+                entries.append((f"{section.key}#group", section.parent, 0))
+            level = 1
+        self._parent = section.parent
+        self._section, self._level = section.key, level
+        entries.append((section.key, section.title, level))
+        return tuple(entries)
+
     def block(self, block: Block, package: Package) -> list[Any]:
         from reportlab.platypus import KeepTogether, Spacer
 
         if isinstance(block, Heading):
-            return [self.rich(block.text, "h1" if block.level == 1 else "h2")]
+            head = self.rich(block.text, "h1" if block.level == 1 else "h2")
+            if block.bookmark:
+                self._marks += 1
+                key = f"{self._section}#{self._marks}"
+                return [self.classes["SectionStart"](key, "", ((key, block.bookmark, self._level + 1),)), head]
+            return [head]
         if isinstance(block, Para):
             return [self.rich(block.text, block.style)]
         if isinstance(block, Verdict):
@@ -904,10 +1045,12 @@ class _Builder:
 
     def table(self, t: Table) -> Any:
         align = (t.align or "") + "L" * max(0, len(t.headers) - len(t.align or ""))
-        spec = GridSpec(tuple(w * CONTENT_WIDTH for w in t.widths), align, t.font_size, t.font_size * 1.22)
+        size = max(t.font_size, TEXT_FLOOR)
+        spec = GridSpec(tuple(w * CONTENT_WIDTH for w in t.widths), align, size, size * 1.2)
         rows = [[self._cell(h, spec, True, j) for j, h in enumerate(t.headers)]]
         rows += [[self._cell(v, spec, k in t.fail_rows, j) for j, v in enumerate(row)] for k, row in enumerate(t.rows)]
-        return self.classes["Grid"](spec, self.fonts, rows, frozenset(k + 1 for k in t.fail_rows))
+        links = ("", *t.links) if t.links else ()
+        return self.classes["Grid"](spec, self.fonts, rows, frozenset(k + 1 for k in t.fail_rows), links)
 
     def key_values(self, kv: KeyValues) -> Any:
         pairs = list(kv.pairs)
@@ -916,7 +1059,7 @@ class _Builder:
         unit = CONTENT_WIDTH / cols
         widths = (unit * (0.42 if cols > 1 else 0.34), unit * (0.58 if cols > 1 else 0.66)) * cols
         spec = GridSpec(
-            widths, "L" * 2 * cols, 8.5, 10.5, header=False, ruled=False, label_columns=frozenset(2 * k for k in range(cols))
+            widths, "L" * 2 * cols, 8.0, 9.8, header=False, ruled=False, label_columns=frozenset(2 * k for k in range(cols))
         )
         rows = []
         for r in range(n):
@@ -959,17 +1102,16 @@ class _Builder:
         return self.rich(value, style)
 
     def equation(self, eq: Equation) -> Any:
-        """``symbol = formula`` on the first line, then ``= numbers`` and ``= result`` hanging under it."""
-        parts = [_spans(v) for v in (eq.formula, eq.numbers) if v is not None]
-        parts.append(_spans(eq.result, bold=True))
-        first = [Span(r.text, bold=True, sub=r.sub) for r in eq.symbol] + [Span(" = "), *parts[0]]
-        lines = [first, *[[Span("= "), *p] for p in parts[1:]]]
+        """One line per step, ``symbol = formula = numbers = result``, wrapped only at an operator, with
+        the clause in the left margin column and the result repeated in the right-hand column."""
+        main = [Span(r.text, bold=True, sub=r.sub) for r in eq.symbol]
+        for part in (eq.formula, eq.numbers):
+            if part is not None:
+                main += [Span(" = "), *_operator_breaks(_spans(part))]
+        main += [Span(" = "), *_spans(eq.result)]
+        result = [replace(sp, bold=True) for sp in _spans(eq.result)]
         note = _spans(eq.note) if eq.note else []
-        if eq.clause:
-            note = [Span(f"ACI 318-19 {eq.clause}" + ("; " if note else "")), *note]
-        if note:
-            lines.append([replace(sp, small=True, color="grey") for sp in note])
-        return self.classes["RichText"](lines, _STYLES["eq"], self.fonts, self.text)
+        return self.classes["CalcLine"](eq.clause, main, result, note, self.fonts, self.text)
 
     def drawing_row(self, row: DrawingRow) -> Any:
         from reportlab.platypus import Table as RLTable
@@ -1008,7 +1150,8 @@ def _canvas_class(package: Package, fonts: _Fonts) -> type:
     from reportlab.pdfgen.canvas import Canvas
 
     class SheetCanvas(Canvas):
-        """Keeps every page until the end, then draws each title block with the sheet count."""
+        """Keeps every page until the end, then draws each title strip with the sheet count, the
+        contents' sheet numbers, the outline entries and the links (all known only at the end)."""
 
         def __init__(self, *args: Any, **kwargs: Any) -> None:
             super().__init__(*args, **kwargs)
@@ -1016,6 +1159,8 @@ def _canvas_class(package: Package, fonts: _Fonts) -> type:
             self._kl_subject = ""
             self._kl_starts: dict[str, int] = {}
             self._kl_numbers: list[tuple[int, float, float, tuple[tuple[str, str], ...]]] = []
+            self._kl_marks: list[tuple[int, str, str, int]] = []
+            self._kl_links: list[tuple[int, tuple[float, float, float, float], str]] = []
 
         def showPage(self) -> None:  # noqa: N802 - reportlab's name
             self._kl_pages.append(dict(self.__dict__))
@@ -1023,125 +1168,146 @@ def _canvas_class(package: Package, fonts: _Fonts) -> type:
 
         def save(self) -> None:
             total = len(self._kl_pages)
-            starts, numbers = self._kl_starts, self._kl_numbers
+            starts, numbers, marks, links = self._kl_starts, self._kl_numbers, self._kl_marks, self._kl_links
             for n, state in enumerate(self._kl_pages, start=1):
                 self.__dict__.update(state)
-                _title_block(self, package, fonts, n, total, state.get("_kl_subject", ""))
-                self.setFont(fonts.regular, 8.5)
+                self.setFont(fonts.regular, 8.0)
                 for page, x, y, refs in numbers:
                     if page == n:
                         where = "; ".join(f"{words} {starts[key]}" for words, key in refs if key in starts)
                         self.drawRightString(x, y, where)
+                _title_strip(self, package, fonts, n, total, state.get("_kl_subject", ""))
+                for page, key, title, level in marks:
+                    if page == n:
+                        self.bookmarkPage(key)
+                        self.addOutlineEntry(title, key, level, closed=level > 0)
+                for k, (page, rect, key) in enumerate(links):
+                    if page == n and key in starts:
+                        self.linkRect("", key, rect, relative=0, thickness=0, name=f"klLink{k}")
                 super().showPage()
+            self.showOutline()
             super().save()
 
     return SheetCanvas
 
 
-def _fit(c: Any, text: str, font: str, size: float, width: float, minimum: float = 5.5) -> tuple[str, float]:
+def _fit(c: Any, text: str, font: str, size: float, width: float, minimum: float = TEXT_FLOOR) -> tuple[str, float]:
     """Shrink the font (down to ``minimum``) and then shorten the text so that it fits ``width``."""
     while size > minimum and _width(text, font, size) > width:
         size -= 0.5
     return _clip(text, font, size, width), size
 
 
-_TITLE_FORM = "klTitleBlock"
+_STRIP_FORM = "klTitleStrip"
 
 
-def _title_rows(tb: Any, subject: str, sheet_text: str) -> list[list[tuple[str, str, bool, float]]]:
-    """The fields of the title block, top row first: (label, value, bold, share of the row)."""
-    return [
-        [("Project", tb.project_name, True, 1.0)],
-        [("Project number", tb.project_number, False, 0.4), ("Client", tb.client, False, 0.6)],
-        [("Sheet subject", subject, True, 0.6), ("Sheet", sheet_text, True, 0.4)],
-        [("Prepared by", tb.prepared_by, False, 0.6), ("Date", tb.date, False, 0.4)],
-        [("Checked by", tb.checked_by, False, 0.6), ("Revision", tb.revision, False, 0.4)],
-        [("Program", tb.program, False, 1.0)],
-    ]
+def _title_strip(c: Any, package: Package, fonts: _Fonts, sheet: int, total: int, subject: str) -> None:
+    """Draw the title strip across the top of the sheet and the print line at its foot.
 
-
-_DYNAMIC = {(2, 0), (2, 1)}  # (row, field) of the sheet subject and "Sheet N of M"
-
-
-def _title_block(c: Any, package: Package, fonts: _Fonts, sheet: int, total: int, subject: str) -> None:
-    """Draw the title block along the foot of the sheet, with the empty seal square at its right.
-
-    Everything but the sheet subject and number is the same on every sheet: it is drawn once into a
-    PDF form and placed on each page.
+    The strip, left to right: the sheet's number in a dark tab ("Sheet N of M"), the sheet's subject
+    (the wall) over the project's name and job number, then a narrow column of sign-off (by, checked,
+    revision, date); optionally a small seal box at the right end. Everything but the tab and the
+    subject is the same on every sheet: drawn once into a PDF form and placed on each page.
     """
     if not getattr(c, "_kl_form_ready", False):
-        c.beginForm(_TITLE_FORM)
-        _title_fields(c, package, fonts, "", "", static=True)
+        c.beginForm(_STRIP_FORM)
+        _strip_fields(c, package, fonts, static=True, subject="", sheet="")
         c.endForm()
         c._kl_form_ready = True
-    c.doForm(_TITLE_FORM)
-    _title_fields(c, package, fonts, subject, f"Sheet {sheet} of {total}", static=False)
+    c.doForm(_STRIP_FORM)
+    _strip_fields(c, package, fonts, static=False, subject=subject, sheet=f"Sheet {sheet} of {total}")
 
 
-def _title_fields(c: Any, package: Package, fonts: _Fonts, subject: str, sheet_text: str, static: bool) -> None:
-    page_w, _ = c._pagesize
+_TAB_WIDTH = 74.0
+_SIGN_WIDTH = 150.0
+
+
+def _strip_fields(c: Any, package: Package, fonts: _Fonts, static: bool, subject: str, sheet: str) -> None:
+    page_w, page_h = c._pagesize
     tb = package.title
     glyph = _Text(fonts).glyphs
     x0 = (page_w - CONTENT_WIDTH) / 2.0
-    y0 = MARGIN_BOTTOM
-    x_seal = x0 + CONTENT_WIDTH - SEAL_SIZE
-    left_w = x_seal - x0
+    y_top = page_h - MARGIN_TOP
+    y0 = y_top - STRIP_HEIGHT
+    x_end = x0 + CONTENT_WIDTH - (SMALL_SEAL if package.seal_every_sheet else 0.0)
+    x_sign = x_end - _SIGN_WIDTH
     c.saveState()
-    c.setStrokeColorRGB(0, 0, 0)
+    if not static:
+        # the tab: sheet number, white on dark, at the strip's left end
+        c.setFillColorRGB(0.16, 0.22, 0.30)
+        c.rect(x0, y0, _TAB_WIDTH, STRIP_HEIGHT, stroke=0, fill=1)
+        c.setFillColorRGB(1, 1, 1)
+        words, of = sheet.split(" of ") if " of " in sheet else (sheet, "")
+        text_obj = c.beginText()  # one text object, so that the sheet reads "Sheet N of M" when extracted
+        for string, font, size, y in (
+            ("Sheet", fonts.regular, 7.0, y0 + STRIP_HEIGHT - 13.0),
+            (words.replace("Sheet ", ""), fonts.bold, 15.0, y0 + 17.0),
+            (f"of {of}", fonts.regular, 7.0, y0 + 6.0),
+        ):
+            text_obj.setFont(font, size)
+            text_obj.setTextOrigin(x0 + _TAB_WIDTH / 2 - _width(string, font, size) / 2, y)
+            text_obj.textOut(string + " ")
+        c.drawText(text_obj)
+        c.setFillColorRGB(0, 0, 0)
+        text, size = _fit(c, glyph(subject), fonts.bold, 11.0, x_sign - x0 - _TAB_WIDTH - 14)
+        c.setFont(fonts.bold, size)
+        c.drawString(x0 + _TAB_WIDTH + 8, y0 + STRIP_HEIGHT - 16.0, text)
+        c.restoreState()
+        return
+    c.setStrokeColorRGB(0.16, 0.22, 0.30)
+    c.setLineWidth(1.2)
+    c.line(x0, y0, x0 + CONTENT_WIDTH, y0)  # a rule under the whole strip
+    c.setLineWidth(0.4)
+    c.line(x_sign, y0 + 4, x_sign, y_top - 4)
     c.setFillColorRGB(0, 0, 0)
-    if static:
-        c.setLineWidth(0.9)
-        c.rect(x0, y0, CONTENT_WIDTH, BAND_HEIGHT, stroke=1, fill=0)
-        # the seal square: kept empty; its caption sits above it
+    # project and job under the subject
+    left = x0 + _TAB_WIDTH + 8
+    room = x_sign - left - 6
+    job = "Job " + (tb.project_number or "—") + (f" · {tb.client}" if tb.client else "")
+    job, size = _fit(c, glyph(job), fonts.regular, 7.0, room)
+    c.setFont(fonts.regular, size)
+    c.setFillColorRGB(0.3, 0.3, 0.3)
+    c.drawString(left, y0 + 6.0, job)
+    c.setFillColorRGB(0, 0, 0)
+    name, size = _fit(c, glyph(tb.project_name), fonts.regular, 8.5, room)
+    c.setFont(fonts.regular, size)
+    c.drawString(left, y0 + 17.0, name)
+    # sign-off column: label and value per line
+    rows = (
+        ("by", tb.prepared_by or "—"),
+        ("checked", tb.checked_by or "—"),
+        ("rev.", tb.revision or "0"),
+        ("rev. date", tb.date or "—"),
+    )
+    for k, (label, value) in enumerate(rows):
+        y = y_top - 11.0 - 10.8 * k
+        c.setFillColorRGB(0.35, 0.35, 0.35)
+        c.setFont(fonts.regular, 6.5)
+        c.drawString(x_sign + 5, y, label)
+        c.setFillColorRGB(0, 0, 0)
+        value, size = _fit(c, glyph(value), fonts.regular, 7.5, _SIGN_WIDTH - 48)
+        c.setFont(fonts.regular, size)
+        c.drawString(x_sign + 42, y, value)
+    if package.seal_every_sheet:
         c.setLineWidth(0.6)
-        c.rect(x_seal, y0, SEAL_SIZE, SEAL_SIZE, stroke=1, fill=0)
-        c.line(x_seal, y0, x_seal, y0 + BAND_HEIGHT)
-        c.setFont(fonts.regular, 6)
-        c.drawString(x_seal + 3, y0 + SEAL_SIZE + 3.5, "Engineer's seal and signature (3 in square, keep clear)")
-        c.line(x_seal, y0 + SEAL_SIZE, x0 + CONTENT_WIDTH, y0 + SEAL_SIZE)
-    rows = _title_rows(tb, subject, sheet_text)
-    row_h = BAND_HEIGHT / len(rows)
-    last = len(rows) - 1
-    for r, fields in enumerate(rows):
-        y_top = y0 + BAND_HEIGHT - r * row_h
-        if r and static:
-            c.setLineWidth(0.4)
-            c.line(x0, y_top, x_seal, y_top)
-        x = x0
-        for k, (label, value, bold, share) in enumerate(fields):
-            w = left_w * share
-            if ((r, k) in _DYNAMIC) == static:
-                x += w
-                continue
-            if x > x0 and static:
-                c.setLineWidth(0.4)
-                c.line(x, y_top, x, y_top - row_h)
-            c.setFont(fonts.regular, 5.5)
-            c.setFillColorRGB(0.3, 0.3, 0.3)
-            c.drawString(x + 3, y_top - 7.5, label)
-            c.setFillColorRGB(0, 0, 0)
-            font = fonts.bold if bold else fonts.regular
-            text, size = _fit(c, glyph(value), font, 10.0 if bold else 9.0, w - 7)
-            c.setFont(font, size)
-            baseline = y_top - 19.0 if r == last else y_top - row_h + 0.42 * row_h - size / 2 + 2
-            c.drawString(x + 3.5, baseline, text)
-            x += w
-    if static:
-        # the caution under the program line, small
-        from reportlab.lib.utils import simpleSplit
-
-        lines = simpleSplit(glyph(tb.caution), fonts.regular, 5.5, left_w - 7)
-        c.setFont(fonts.regular, 5.5)
-        for k, line in enumerate(lines[:2]):
-            c.drawString(x0 + 3.5, y0 + 10.0 - 6.5 * k, line)
+        c.rect(x_end + 3, y0 + 2, SMALL_SEAL - 3, STRIP_HEIGHT - 4, stroke=1, fill=0)
+        c.setFont(fonts.regular, 6.5)
+        c.setFillColorRGB(0.4, 0.4, 0.4)
+        c.drawCentredString(x_end + 1.5 + SMALL_SEAL / 2, y0 + 5, "seal")
+    # the print line at the foot of the sheet
+    c.setFillColorRGB(0.3, 0.3, 0.3)
+    c.setFont(fonts.regular, 6.5)
+    printed = f"Printed {tb.printed} with {tb.program}" if tb.printed else f"Printed with {tb.program}"
+    c.drawString(x0, FOOTER_Y, glyph(printed))
+    c.drawRightString(x0 + CONTENT_WIDTH, FOOTER_Y, glyph(_fit(c, tb.project_name, fonts.regular, 6.5, 200)[0]))
     c.restoreState()
 
 
 def _frame_geometry(units: str) -> tuple[float, float, float, float, float, float]:
     page_w, page_h = _page_size(units)
     x = (page_w - CONTENT_WIDTH) / 2.0
-    y = MARGIN_BOTTOM + BAND_HEIGHT + BAND_GAP
-    return page_w, page_h, x, y, CONTENT_WIDTH, page_h - MARGIN_TOP - y
+    y = MARGIN_BOTTOM
+    return page_w, page_h, x, y, CONTENT_WIDTH, page_h - MARGIN_TOP - STRIP_HEIGHT - STRIP_GAP - y
 
 
 # ---------------------------------------------------------------------------------------------
@@ -1166,13 +1332,18 @@ def render_package(package: Package) -> bytes:
         pagesize=(page_w, page_h),
         leftMargin=fx,
         rightMargin=page_w - fx - fw,
-        topMargin=MARGIN_TOP,
+        topMargin=page_h - fy - fh,
         bottomMargin=fy,
         title=f"Calculation package: {package.title.project_name}",
         author=package.title.prepared_by,
-        subject="Strip footings under shear walls: overturning, sliding, soil bearing",
+        subject="Strip footings under shear walls: overturning, sliding, soil bearing"
+        + (
+            ", and the footing's concrete design (ACI 318-19)"
+            if any(s.key.startswith("concrete:") for s in package.sections)
+            else ""
+        ),
         creator=package.title.program,
-        invariant=1,
+        invariant=0,  # the PDF's creation date is the date of this print
     )
     frame = Frame(fx, fy, fw, fh, leftPadding=0, rightPadding=0, topPadding=0, bottomPadding=0, id="body")
     doc.addPageTemplates([PageTemplate(id="sheet", frames=[frame])])

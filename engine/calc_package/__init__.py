@@ -39,9 +39,7 @@ from ..model import (
     Wall,
 )
 from ..results import CaseResult, Governing, WallResult, check_wall
-from ..schedule import schedule_rows
 from ..sizing import SizingResult, size_footing
-from ..soil_pressure import PressureDiagram, pressure_diagram
 from ..stability import reported_checks, table_checks
 from ..units import Kind, format_length, format_quantity, to_display, unit_label
 
@@ -97,8 +95,11 @@ Cell = Rich | str
 
 @dataclass(frozen=True, slots=True)
 class Heading:
+    """A heading; ``bookmark`` puts it in the PDF outline under its section."""
+
     text: Cell
     level: int = 1
+    bookmark: str = ""
 
 
 @dataclass(frozen=True, slots=True)
@@ -129,6 +130,7 @@ class Table:
     font_size: float = 8.0
     fail_rows: tuple[int, ...] = ()
     repeat_header: bool = True
+    links: tuple[str, ...] = ()  # per row: the section key its first cell links to ("" for none)
 
 
 @dataclass(frozen=True, slots=True)
@@ -280,12 +282,18 @@ Block = Heading | Para | Bullets | Table | KeyValues | Equation | Verdict | Draw
 
 @dataclass(frozen=True, slots=True)
 class Section:
-    """A part of the package that starts on a new sheet; ``subject`` goes in the title block."""
+    """A part of the package that starts on a new sheet; ``subject`` goes in the title strip.
+
+    ``parent`` groups sections in the PDF outline ("Front matter", "Wall N1"); the section's
+    ``title`` is its entry there.
+    """
 
     key: str
     title: str
     subject: str
     blocks: tuple[Block, ...]
+    parent: str = ""
+    new_sheet: bool = True  # False: runs on from the previous section (a wall's checks after its inputs)
 
 
 @dataclass(frozen=True, slots=True)
@@ -300,6 +308,7 @@ class TitleBlock:
     revision: str
     program: str
     caution: str
+    printed: str = ""  # the date of this print (the footer); ``date`` is the revision's date
 
 
 @dataclass(frozen=True, slots=True)
@@ -308,6 +317,7 @@ class Package:
     units: str
     sections: tuple[Section, ...]
     wall_ids: tuple[str, ...] = field(default_factory=tuple)
+    seal_every_sheet: bool = False  # a small seal box in every sheet's title strip (the cover has the full square)
 
 
 # ---------------------------------------------------------------------------------------------
@@ -546,6 +556,8 @@ def build_package(
     revision: str | None = None,
     issued: _dt.date | str | None = None,
     checked_by: str = "",
+    printed: _dt.date | None = None,
+    seal_every_sheet: bool = False,
 ) -> Package:
     """Assemble the calculation package of ``project`` (the walls named, or all of them).
 
@@ -556,9 +568,11 @@ def build_package(
             when None (a blank to fill when that is empty too).
         revision: the revision printed in the title block; the project's ``project.revision`` when
             None ("0" when that is empty too).
-        issued: the date printed in the title block; the project's ``project.revision_date`` when None,
-            else today.
+        issued: the revision's date printed in the title strip; the project's ``project.revision_date``
+            when None (a dash when that is empty too: the print date is not a revision date).
         checked_by: the checker's name; the project's ``project.checker`` when empty.
+        printed: the date of this print, in the footer of every sheet (today when None).
+        seal_every_sheet: a small seal box in every sheet's title strip (the cover has the 3 in square).
     """
     walls = select_walls(project, wall_ids)
     fmt = _Fmt(project.units)
@@ -568,8 +582,9 @@ def build_package(
     revision = revision if revision is not None else (info.revision or None)
     checked_by = checked_by or info.checker
     if issued is None:
-        issued = info.revision_date.strip() or _dt.date.today()
+        issued = info.revision_date.strip()
     date_text = issued.isoformat() if isinstance(issued, _dt.date) else _clean(str(issued))
+    printed = printed or _dt.date.today()
     title = TitleBlock(
         project_name=_clean(info.name) or "(project name not given)",
         project_number=_clean(info.number),
@@ -581,35 +596,38 @@ def build_package(
         revision=_clean(revision) if revision else "0",
         program=f"{PROGRAM} {__version__}",
         caution=CAUTION,
+        printed=printed.isoformat(),
     )
     report_text = _clean(soil_report).strip() if soil_report else ""
     sections = [
         _design_basis(project, reports, fmt, report_text),
-        _references_and_notes(project, fmt),
-        _cautions(project, report_text),
+        _references_and_notes(project, fmt, report_text),
         _schedule(project, reports, fmt),
     ]
     entries = [ContentsEntry("Project information and contents", (("sheet", "cover"),))]
     entries += [ContentsEntry(s.title, (("sheet", s.key),)) for s in sections]
     for r in reports:
-        sections.append(_wall_section(project, r, fmt))
+        first, checks = _wall_sections(project, r, fmt)
+        sections += [first, checks]
+        refs = [("stability: sheet", first.key)]
         member = _concrete_section(project, r, fmt)
         if member is not None:
             sections.append(member)
-    for r in reports:
-        sections.append(_appendix(project, r, fmt))
-    for r in reports:
-        entries.append(
-            ContentsEntry(wall_title(r.wall), (("sheet", f"wall:{r.wall.id}"), ("all cases: sheet", f"appendix:{r.wall.id}")))
-        )
+            refs.append(("concrete", member.key))
+        entries.append(ContentsEntry(wall_title(r.wall), tuple(refs)))
     if reports:
-        entries.append(
-            ContentsEntry(
-                "Appendix: every combination and direction, by wall", (("from sheet", f"appendix:{reports[0].wall.id}"),)
-            )
-        )
+        sections.append(_appendix(project, reports, fmt))
+        entries.append(ContentsEntry("Appendix: every combination and direction of every wall", (("sheet", "appendix"),)))
     sections.insert(0, _cover(project, reports, title, tuple(entries)))
-    return Package(title=title, units=project.units, sections=tuple(sections), wall_ids=tuple(w.id for w in walls))
+    front = {"cover", "basis", "references", "schedule"}
+    sections = [replace(s, parent="Front matter") if s.key in front else s for s in sections]
+    return Package(
+        title=title,
+        units=project.units,
+        sections=tuple(sections),
+        wall_ids=tuple(w.id for w in walls),
+        seal_every_sheet=seal_every_sheet,
+    )
 
 
 # ---------------------------------------------------------------------------------------------
@@ -676,6 +694,7 @@ def _cover(project: Project, reports: Sequence[WallReport], title: TitleBlock, c
         Para(scope),
         verdict,
         Para(CAUTION, "caution"),
+        seal_drawing(title),
     ]
     if info.notes.strip():
         blocks += [Heading("Project notes", 2), Para(plain(_clean(info.notes)))]
@@ -699,6 +718,61 @@ _METHOD_TEXT = {
         "required ratios below; the gravity combinations are checked for bearing only."
     ),
 }
+
+
+ASSUMED = "assumed"
+
+
+def assumed(project: Project, path: str) -> bool:
+    """The engineer did not enter the value at ``path``: Kernline took it by default (``project.assumptions``)."""
+    return any(a.field == path for a in project.assumptions)
+
+
+def mark_assumed(project: Project, path: str, text: str) -> str:
+    """``text`` with "(assumed)" beside it when the value at ``path`` was taken by default."""
+    return f"{text} ({ASSUMED})" if assumed(project, path) else text
+
+
+SEAL_SIZE = 216.0  # points: the 3 in square kept clear for the engineer's seal and signature (cover only)
+
+
+def seal_drawing(title: TitleBlock) -> Drawing:
+    """The cover's sign-off: the revision, its date and the names at the left, the empty 3 in seal square at the right."""
+    width, height = CONTENT_WIDTH, SEAL_SIZE + 14.0
+    x_seal = width - SEAL_SIZE
+    shapes: list[Shape] = [
+        Rect(x_seal, 0.0, SEAL_SIZE, SEAL_SIZE, width=0.6),
+        Label(x_seal + SEAL_SIZE / 2, SEAL_SIZE + 4.0, "Engineer's seal and signature (3 in square, keep clear)", "middle", 6.5),
+    ]
+    rows = (
+        ("Prepared by", title.prepared_by or "—"),
+        ("Checked by", title.checked_by or "—"),
+        ("Revision", title.revision),
+        ("Revision date", title.date or "—"),
+        ("Printed", title.printed or "—"),
+    )
+    for k, (label, value) in enumerate(rows):
+        y = SEAL_SIZE - 18.0 - 26.0 * k
+        shapes.append(Label(0.0, y + 9.0, label, "start", 6.5, color="grey"))
+        shapes.append(Label(0.0, y, brief(value, 60), "start", 9.0))
+        shapes.append(Line(0.0, y - 4.0, x_seal - 18.0, y - 4.0, 0.4, color="grey"))
+    return Drawing(width, height, tuple(shapes))
+
+
+def _strength_basis(project: Project) -> list[Block]:
+    """The strength combinations of the footing's concrete design, once for the package."""
+    from .concrete import strength_combination_blocks
+
+    blocks = strength_combination_blocks(project)
+    return [Heading("Strength combinations for the concrete design", 2), *blocks] if blocks else []
+
+
+def _paired_rows(rows: Sequence[tuple[Cell, ...]]) -> tuple[tuple[Cell, ...], ...]:
+    """Rows of (number, name, checks) two to a table row, the first half on the left (factors are in the names)."""
+    short = [(r[0], r[1], r[3]) for r in rows]
+    half = (len(short) + 1) // 2
+    left, right = short[:half], short[half:]
+    return tuple((*a, *(right[k] if k < len(right) else ("", "", ""))) for k, a in enumerate(left))
 
 
 def _combination_rows(combos: Sequence[LoadCombination]) -> tuple[tuple[Cell, ...], ...]:
@@ -749,6 +823,13 @@ def _option_rows(project: Project, fmt: _Fmt) -> list[tuple[Any, Any]]:
             )
         )
     frost = project.site.frost_depth
+    for k, (label, value) in enumerate(rows):
+        path = {
+            "Vertical seismic effect at the soil": "criteria.ev_at_soil",
+            "Reduction of seismic overturning": "criteria.seismic_overturning_reduction",
+        }.get(str(label), "")
+        if path and assumed(project, path):
+            rows[k] = (label, (plain(value) if isinstance(value, str) else value) + plain(f" ({ASSUMED})"))
     rows.append(
         (
             "Frost depth",
@@ -769,6 +850,15 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
     else:
         method = _METHOD_TEXT.get(crit.method, crit.method.wording)
     req = crit.required
+    engineer_sets = crit.method.id == "service-fs"
+
+    def required(check_id: str, value: float) -> Cell:
+        """The required ratio with its citation: the code basis's clause, or the engineer's own value."""
+        path = f"criteria.required.{check_id}"
+        if engineer_sets and not assumed(project, path):
+            return f"{value:.2f} (set by the engineer)"
+        return plain(mark_assumed(project, path, f"{value:.2f}"))
+
     increase = (
         f"× {factor_text(crit.bearing_increase)} in combinations with W or E (a value the geotechnical report, or IBC 2021 "
         "1806.1 with the alternative combinations, must permit)"
@@ -794,18 +884,31 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
             _combination_rows(combos),
             (0.06, 0.38, 0.32, 0.24),
             align="CLLL",
+            font_size=7.0,
+        )
+        if crit.custom_combinations
+        else Table(
+            ("No.", "Combination (the factors as named)", "Checks it applies to", "No.", "Combination", "Checks"),
+            _paired_rows(_combination_rows(combos)),
+            (0.04, 0.26, 0.2, 0.04, 0.26, 0.2),
+            align="CLLCLL",
+            font_size=7.0,
         ),
+        *_strength_basis(project),
         Heading("Required ratios and seismic and bearing settings", 2),
         KeyValues(
             (
-                (formula("Overturning, M_{R} / M_{OT} ≥"), f"{req.overturning:.2f}"),
-                ("Sliding, R / V ≥", f"{req.sliding:.2f}"),
-                (formula("Bearing, q_{a} / q ≥"), f"{req.bearing:.2f}"),
+                (formula("Overturning, M_{R} / M_{OT} ≥"), required("overturning", req.overturning)),
+                ("Sliding, R / V ≥", required("sliding", req.sliding)),
+                (formula("Bearing, q_{a} / q ≥"), required("bearing", req.bearing)),
+                (
+                    "Basis of the required ratios",
+                    "set by the engineer" if engineer_sets else plain(crit.method.required_basis),
+                ),
                 (
                     formula("Embedment, (h_{s} + t_{f}) / d_{req} ≥"),
                     formula(f"1.00, d_{{req}} = max({fmt.length(MIN_DEPTH)}, frost depth) (IBC 2021 1809.4, 1809.5)"),
                 ),
-                ("Basis of the required ratios", plain(crit.method.required_basis)),
                 (formula("S_{DS}"), f"{crit.sds:g}"),
                 ("Allowable bearing increase", increase),
                 *_option_rows(project, fmt),
@@ -853,6 +956,34 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
         ),
         Heading("Materials", 2),
         KeyValues(((formula("Concrete unit weight γ_{c}"), concrete),), columns=1),
+    ]
+    blocks += _assumptions(project)
+    return Section("basis", "Design basis", "Design basis", tuple(blocks))
+
+
+_REFERENCES = (
+    "ASCE/SEI 7-16, Minimum Design Loads and Associated Criteria for Buildings and Other Structures: "
+    "section 2.4.1 (basic combinations for allowable stress design), 2.4.5 (ASD combinations with seismic load "
+    "effects), 12.4.2.2 (vertical seismic load effect Ev = 0.2 S_{DS} D, and Ev = 0 at the soil-structure "
+    "interface in Eq. 12.4-2), 12.13.4 (reduction of foundation overturning).",
+    "ASCE/SEI 7-22, the same title: section 2.4.1 (ASD combinations with 0.7S) and 2.4.5, where the project uses it.",
+    "International Building Code 2021: section 1605 (load combinations; 1605.1.1 stability, 1605.2 alternative "
+    "allowable stress design combinations), section 1806 (1806.1 one-third increase with the alternative "
+    "combinations; presumptive load-bearing values of Table 1806.2; 1806.3 lateral sliding resistance, 1806.3.1 "
+    "combined friction and passive resistance, 1806.3.2 cohesion-type resistance at most one-half of the dead "
+    "load), section 1809 (1809.4 depth and width of footings, 1809.5 frost protection).",
+    "Das, B. M., Principles of Foundation Engineering: eccentrically loaded foundations (e = M / N; q_{max} = "
+    "4N / (3B (L − 2e)) beyond the kern); stability of retaining structures (overturning about the toe).",
+    "Bowles, J. E., Foundation Analysis and Design, 5th ed.: section 4-8 (footings with eccentric load, the kern); "
+    "sliding factor of safety as resisting over driving force.",
+    "Hibbeler, R. C., Statics, 14th ed., section 4.9: resultant of a distributed load.",
+)
+
+
+def _how_checks_are_made(project: Project) -> list[Block]:
+    """The symbols and the method of each stability check, in words (for the references and notes sheet)."""
+    soil = project.soil
+    return [
         Heading("How the checks are made", 2),
         Bullets(
             (
@@ -911,34 +1042,36 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
             )
         ),
     ]
-    return Section("basis", "Design basis", "Design basis", tuple(blocks))
 
 
-_REFERENCES = (
-    "ASCE/SEI 7-16, Minimum Design Loads and Associated Criteria for Buildings and Other Structures: "
-    "section 2.4.1 (basic combinations for allowable stress design), 2.4.5 (ASD combinations with seismic load "
-    "effects), 12.4.2.2 (vertical seismic load effect Ev = 0.2 S_{DS} D, and Ev = 0 at the soil-structure "
-    "interface in Eq. 12.4-2), 12.13.4 (reduction of foundation overturning).",
-    "ASCE/SEI 7-22, the same title: section 2.4.1 (ASD combinations with 0.7S) and 2.4.5, where the project uses it.",
-    "International Building Code 2021: section 1605 (load combinations; 1605.1.1 stability, 1605.2 alternative "
-    "allowable stress design combinations), section 1806 (1806.1 one-third increase with the alternative "
-    "combinations; presumptive load-bearing values of Table 1806.2; 1806.3 lateral sliding resistance, 1806.3.1 "
-    "combined friction and passive resistance, 1806.3.2 cohesion-type resistance at most one-half of the dead "
-    "load), section 1809 (1809.4 depth and width of footings, 1809.5 frost protection).",
-    "Das, B. M., Principles of Foundation Engineering: eccentrically loaded foundations (e = M / N; q_{max} = "
-    "4N / (3B (L − 2e)) beyond the kern); stability of retaining structures (overturning about the toe).",
-    "Bowles, J. E., Foundation Analysis and Design, 5th ed.: section 4-8 (footings with eccentric load, the kern); "
-    "sliding factor of safety as resisting over driving force.",
-    "Hibbeler, R. C., Statics, 14th ed., section 4.9: resultant of a distributed load.",
-)
+def _assumptions(project: Project) -> list[Block]:
+    """Every value the engineer did not enter, together (each is also marked "assumed" where it is printed)."""
+    if not project.assumptions:
+        return [Heading("Assumed values", 2), Para("None: every value was entered by the engineer.")]
+    grouped: dict[tuple[str, str], list[str]] = {}  # one row per value and basis, its fields together
+    for a in project.assumptions:
+        grouped.setdefault((_clean(a.value), _clean(a.basis)), []).append(a.field)
+    rows = tuple((plain(", ".join(fields)), plain(value), plain(basis)) for (value, basis), fields in grouped.items())
+    return [
+        Heading("Assumed values (not entered by the engineer; confirm each, or enter it)", 2),
+        Table(("Field", "Value assumed", "Basis"), rows, (0.36, 0.2, 0.44), align="LLL", font_size=6.5),
+    ]
 
 
-def _references_and_notes(project: Project, fmt: _Fmt) -> Section:
-    notes: list[Cell] = [
+def _references_and_notes(project: Project, fmt: _Fmt, soil_report: str = "") -> Section:
+    scope = (
         "Scope: global stability of each wall and its strip footing in the plane of the wall (overturning, sliding, "
-        "soil bearing). Not covered here and to be checked separately: footing reinforcement, flexure and shear of "
-        "the footing, hold-down and anchor embedment, settlement, frost depth and code minimum footing sizes, and "
-        "out-of-plane loads.",
+        "soil bearing) and the footing's design as a concrete member (ACI 318-19) across its width and along its "
+        "length. Not covered here and to be checked separately: hold-down and anchor embedment, settlement, code "
+        "minimum footing sizes, and out-of-plane loads."
+        if project.concrete is not None
+        else "Scope: global stability of each wall and its strip footing in the plane of the wall (overturning, "
+        "sliding, soil bearing). Not covered here and to be checked separately: footing reinforcement, flexure and "
+        "shear of the footing, hold-down and anchor embedment, settlement, code minimum footing sizes, and "
+        "out-of-plane loads."
+    )
+    notes: list[Cell] = [
+        scope,
         "Loads are as entered by the engineer of record. Vertical loads are positive downward; lateral loads are "
         "in-plane shears at a height above the top of the footing.",
         "Coordinates: x runs along the footing from its start end (x = 0) to x = L_{f} = extension at start + wall "
@@ -963,56 +1096,50 @@ def _references_and_notes(project: Project, fmt: _Fmt) -> Section:
         ),
         'A ratio of "no demand" means the case produces no overturning moment, no shear or no pressure for that check.',
     ]
+    source = f"the geotechnical report ({soil_report})" if soil_report else "the geotechnical report for the site"
+    notes += [
+        "These results are for review by a licensed engineer, who takes responsibility for the design by sealing "
+        "and signing this package. They are not a design until then.",
+        "The local building code as adopted and amended by the jurisdiction governs. Where it differs from the "
+        "load combinations, factors or limits used here, the code governs and the results must be revised.",
+        f"The soil values must be those of {source}. Where the report limits bearing pressure, friction, "
+        "cohesion, passive resistance or any increase for wind or seismic load, the report governs.",
+        "The inputs printed on the wall sheets must match the structural drawings (wall lengths, footing sizes, "
+        "loads and their positions). Check them before sealing.",
+    ]
     blocks: list[Block] = [
         Heading("References"),
         Bullets(tuple(formula(r) for r in _REFERENCES)),
+        *_how_checks_are_made(project),
         Heading("General notes"),
+        Para(CAUTION, "caution"),
         Bullets(tuple(formula(n) if isinstance(n, str) else n for n in notes)),
     ]
     return Section("references", "References and general notes", "References and notes", tuple(blocks))
 
 
-def _cautions(project: Project, soil_report: str) -> Section:
-    source = f"the geotechnical report ({soil_report})" if soil_report else "the geotechnical report for the site"
-    blocks: list[Block] = [
-        Heading("Cautions"),
-        Para(CAUTION, "caution"),
-        Bullets(
-            (
-                "These results are for review by a licensed engineer, who takes responsibility for the design by sealing "
-                "and signing this package. They are not a design until then.",
-                "The local building code as adopted and amended by the jurisdiction governs. Where it differs from the "
-                "load combinations, factors or limits used here, the code governs and the results must be revised.",
-                f"The soil values must be those of {source}. Where the report limits bearing pressure, friction, "
-                "cohesion, passive resistance or any increase for wind or seismic load, the report governs.",
-                "The inputs printed on the wall sheets must match the structural drawings (wall lengths, footing sizes, "
-                "loads and their positions). Check them before sealing.",
-                "The checks cover global stability only; see the general notes for what is not checked.",
-            )
-        ),
-    ]
-    return Section("cautions", "Cautions", "Cautions", tuple(blocks))
-
-
 def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Section:
-    rows_in = schedule_rows(project, [r.result for r in reports])
     rows: list[tuple[Cell, ...]] = []
     fail_rows = []
-    for k, (r, row) in enumerate(zip(reports, rows_in, strict=True)):
-        # schedule columns: wall, label, wall length, B, D, L, then (ratio, required, case) per check, result
-        cells: list[Cell] = [plain(row[0]), plain(brief(_clean(row[1]))), f"{row[3]} × {row[4]} × {row[5]}"]
-        for j, check in enumerate(reported_checks(project)):
-            ratio, required = row[6 + 3 * j : 8 + 3 * j]
-            g = r.result.governing[check]
-            if ratio == "no demand":
+    for k, r in enumerate(reports):
+        # from the engine's results: the footing as checked and each reported check's governing ratio
+        res = r.result
+        cells: list[Cell] = [
+            plain(r.wall.id),
+            plain(brief(_clean(r.wall.label))),
+            f"{fmt.length(res.width)} × {fmt.length(res.thickness)} × {fmt.length(res.length)}",
+        ]
+        for check in reported_checks(project):
+            g = res.governing[check]
+            shown = ratio_text(g.ratio, g.required, g.passes)
+            if math.isinf(g.ratio):
                 cells.append("no demand")
             elif not g.combination:
-                cells.append(f"{ratio_text(g.ratio, g.required, g.passes)} / {required}")
+                cells.append(f"{shown} / {g.required:.2f}")
             else:
-                shown = ratio_text(g.ratio, g.required, g.passes)
-                cells.append(f"{shown} / {required}\n{case_name(g.combination, g.direction)}")
-        failing = [_CHECK_WORD.get(c, c.id) for c in reported_checks(project) if not r.result.governing[c].passes]
-        cells.append("passes" if r.result.passes else "FAILS: " + ", ".join(failing))
+                cells.append(f"{shown} / {g.required:.2f}\n{case_name(g.combination, g.direction)}")
+        failing = [_CHECK_WORD.get(c, c.id) for c in reported_checks(project) if not res.governing[c].passes]
+        cells.append("passes" if res.passes else "FAILS: " + ", ".join(failing))
         if not r.result.passes:
             fail_rows.append(k)
         rows.append(tuple(cells))
@@ -1038,6 +1165,7 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
             align="L" * (4 + len(reported_checks(project))),
             font_size=7.0,
             fail_rows=tuple(fail_rows),
+            links=tuple(f"wall:{r.wall.id}" for r in reports),
         ),
     ]
     sized = [r for r in reports if r.sizing is not None]
@@ -1065,7 +1193,6 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
                 (0.12, 0.30, 0.20, 0.38),
             ),
         ]
-    blocks.append(Para(CAUTION, "note"))
     return Section("schedule", "Summary schedule", "Summary schedule", tuple(blocks))
 
 
@@ -1080,27 +1207,57 @@ def _same_size(wall: Wall, sizing: SizingResult) -> bool:
 # ---------------------------------------------------------------------------------------------
 
 
-def _wall_section(project: Project, report: WallReport, fmt: _Fmt) -> Section:
+def _mark(blocks: list[Block], name: str) -> list[Block]:
+    """``blocks`` with their first heading (inside a group too) entered in the PDF outline as ``name``."""
+    out = list(blocks)
+    for k, b in enumerate(out):
+        if isinstance(b, Heading):
+            out[k] = replace(b, bookmark=name)
+            return out
+        if isinstance(b, Group):
+            inner = _mark(list(b.blocks), name)
+            if inner != list(b.blocks):
+                out[k] = Group(tuple(inner))
+                return out
+    return out
+
+
+def _wall_sections(project: Project, report: WallReport, fmt: _Fmt) -> tuple[Section, Section]:
+    """A wall's two stability sheets: (1) sketch, inputs and self weight; (2) the checks, the pressure
+    diagram and sizing. The checks' sheets come from :data:`CHECK_SHEETS`, in the registry's order."""
+    from .sheets import CHECK_SHEETS
+
     wall, result = report.wall, report.result
     title = wall_title(wall)
     blocks: list[Block] = [Heading(plain(title)), _wall_verdict(result)]
     blocks.append(
         DrawingRow(
             (
-                elevation := elevation_drawing(wall, fmt, 372.0, 236.0),
+                elevation := elevation_drawing(wall, fmt, 372.0, 132.0),
                 section_drawing(wall, project, fmt, 140.0, max(elevation.height, 150.0)),
             )
         )
     )
     blocks += _inputs(project, wall, result, fmt)
-    blocks += _loads(wall, fmt)
+    blocks += _loads(project, wall, fmt)
     blocks += _self_weight(project, wall, result, fmt)
-    blocks += _overturning(wall, result, fmt)
-    blocks += _sliding(project, wall, result, fmt)
-    blocks += _bearing(project, wall, result, fmt)
-    blocks += _results_table(result)
-    blocks += _sizing(project, report, fmt)
-    return Section(f"wall:{wall.id}", title, f"Wall {wall.id}", tuple(blocks))
+    checks: list[Block] = []
+    for check in result.governing:
+        sheet = CHECK_SHEETS.get(check.id)
+        if sheet is not None:
+            checks += _mark(sheet(project, wall, result, fmt), _CHECK_TITLE.get(check, check.title))
+    checks += _mark(_sizing(project, report, fmt), "Sizing")
+    return (
+        Section(f"wall:{wall.id}", "Sketch, inputs and self weight", f"Wall {wall.id}: stability", tuple(blocks), parent=title),
+        Section(
+            f"checks:{wall.id}",
+            "Stability checks and sizing",
+            f"Wall {wall.id}: stability",
+            tuple(checks),
+            parent=title,
+            new_sheet=False,
+        ),
+    )
 
 
 def _concrete_section(project: Project, report: WallReport, fmt: _Fmt) -> Section | None:
@@ -1111,12 +1268,14 @@ def _concrete_section(project: Project, report: WallReport, fmt: _Fmt) -> Sectio
     if blocks is None:
         return None
     wall = report.wall
-    return Section(f"concrete:{wall.id}", f"{wall_title(wall)}: concrete design", f"Wall {wall.id} concrete", tuple(blocks))
+    return Section(
+        f"concrete:{wall.id}", "Concrete design (ACI 318-19)", f"Wall {wall.id}: concrete", tuple(blocks), parent=wall_title(wall)
+    )
 
 
 def _wall_verdict(result: WallResult) -> Verdict:
     if result.passes:
-        names = ", ".join(_CHECK_WORD.get(c, c.id) for c in result.governing)
+        names = ", ".join(_CHECK_WORD.get(c, c.title.lower()) for c in result.governing)
         return Verdict(True, f"Wall {result.wall_id} PASSES every check ({names}) on its current footing.")
     parts = []
     for check in result.governing:
@@ -1124,7 +1283,7 @@ def _wall_verdict(result: WallResult) -> Verdict:
         if not g.passes:
             where = f", {case_name(g.combination, g.direction)}" if g.combination else ""
             parts.append(
-                f"{_CHECK_WORD.get(check, check.id)} (ratio {ratio_text(g.ratio, g.required, g.passes)} < {g.required:.2f} "
+                f"{_CHECK_WORD.get(check, check.title.lower())} (ratio {ratio_text(g.ratio, g.required, g.passes)} < {g.required:.2f} "
                 f"required{where})"
             )
     return Verdict(False, f"Wall {result.wall_id} FAILS " + "; ".join(parts) + " on its current footing.")
@@ -1162,7 +1321,7 @@ def _load_position(load: LineLoad | PointLoad | LateralLoad, fmt: _Fmt) -> str:
     return f"h = {fmt.length(load.height)}"
 
 
-def _loads(wall: Wall, fmt: _Fmt) -> list[Block]:
+def _loads(project: Project, wall: Wall, fmt: _Fmt) -> list[Block]:
     verticals = iter(vertical_resultants(wall))
     rows: list[tuple[Cell, ...]] = []
     long_labels: list[tuple[int, str]] = []
@@ -1181,7 +1340,9 @@ def _loads(wall: Wall, fmt: _Fmt) -> list[Block]:
         if _is_long(label):
             long_labels.append((i, label))
         label = brief(label) + (" [reverses]" if getattr(load, "reverses", False) else "")
-        rows.append((str(i), kind, load.case.value, value, _load_position(load, fmt), resultant, where, plain(label)))
+        index = next((k for k, w in enumerate(project.walls) if w.id == wall.id), -1)
+        position = mark_assumed(project, f"walls[{index}].loads[{i - 1}]", _load_position(load, fmt))
+        rows.append((str(i), kind, load.case.value, value, position, resultant, where, plain(label)))
     if not rows:
         return [Heading("Loads", 2), Para("The wall carries no loads; only the self weight acts.")]
     in_full: list[Block] = [Para(plain(f"Label of load {i} in full: {label}"), "small") for i, label in long_labels]
@@ -1190,16 +1351,15 @@ def _loads(wall: Wall, fmt: _Fmt) -> list[Block]:
         Table(
             ("No.", "Type", "Case", "Value", "Position on wall", "Resultant", "x on footing", "Label"),
             tuple(rows),
-            (0.05, 0.07, 0.06, 0.12, 0.17, 0.13, 0.16, 0.24),
+            (0.035, 0.055, 0.045, 0.1, 0.175, 0.1, 0.15, 0.34),
             align="CLCRLRLL",
             font_size=7.0,
         ),
         *in_full,
         Para(
             formula(
-                "Resultant of a line load w from s_{1} to s_{2}: P = w (s_{2} − s_{1}) at its mid-point (Hibbeler 4.9). "
-                'x on footing = extension at start + position; a reversing load acts at the position after "−:" '
-                "in direction −. Negative values act upward (uplift)."
+                "P = w (s_{2} − s_{1}) at the mid-point (Hibbeler 4.9); x on footing = extension at start + position; "
+                '"−:" the position in direction − of a reversing load; negative values act upward.'
             ),
             "small",
         ),
@@ -1238,7 +1398,7 @@ def _self_weight(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) ->
             formula(f"γ_{{s}} h_{{s}} (B − {t_sup}) L_{{f}}"),
             f"{fmt.unit_weight(project.soil.unit_weight)} × {fmt.length(f.cover)} × ({B} − {fmt.length(wall.supported_thickness)}) × {L}",
             fmt.sub(sw.soil, Kind.FORCE),
-            "soil on both sides of the wall or stem, over the full footing length",
+            "",
         )
     )
     eqs.append(
@@ -1247,7 +1407,7 @@ def _self_weight(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) ->
             formula("W_{f} + W_{stem} + W_{soil}"),
             f"{fmt.sub(sw.footing, Kind.FORCE)} + {fmt.sub(sw.stem, Kind.FORCE)} + {fmt.sub(sw.soil, Kind.FORCE)}",
             plain(fmt.sub(sw.total, Kind.FORCE), bold=True),
-            f"printed to the digits carried into the checks below ({fmt.force(sw.total)})",
+            "",
         )
     )
     return _lead(eqs, 2)
@@ -1271,16 +1431,9 @@ def _case_of(result: WallResult, g: Governing) -> tuple[CaseResult, LoadCombinat
 
 
 def _governing_heading(check: Check, g: Governing) -> list[Block]:
-    head = Heading(f"{_CHECK_TITLE[check]}: governing case {case_name(g.combination, g.direction)}", 2)
-    return [
-        head,
-        Para(
-            plain("The case with the lowest ratio / required of all combinations and directions: ")
-            + formula(direction_words(g.direction))
-            + plain("."),
-            "small",
-        ),
-    ]
+    words = {"+": ", lateral load toward x = L_{f}", "-": ", lateral load toward x = 0"}.get(g.direction, "")
+    head = Heading(formula(f"{_CHECK_TITLE[check]}: governing case {case_name(g.combination, g.direction)}{words}"), 2)
+    return [head]
 
 
 def _lateral_terms(wall: Wall, combo: LoadCombination, direction: str, fmt: _Fmt, with_arm: bool) -> list[str]:
@@ -1321,317 +1474,12 @@ def _n_equation(wall: Wall, result: WallResult, combo: LoadCombination, f_d: flo
     return Equation(formula("N"), formula("Σ f P + f_{D} W"), _join(terms), fmt.carried(value, Kind.FORCE))
 
 
-def _overturning(wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
-    g = result.governing[Check.OVERTURNING]
-    if math.isinf(g.ratio):
-        return [
-            Heading("Overturning", 2),
-            Para("No case produces an overturning moment (no lateral load and no uplift): no demand.", "body"),
-            Verdict(True, "Overturning passes: no demand."),
-        ]
-    case, combo, i, f_d = _case_of(result, g)
-    ot = case.overturning
-    assert ot is not None
-    toe_sign = float(result.table.toe_sign[i])
-    L = fmt.length(result.length)
-    toe = (
-        f"toe at x = L_{{f}} = {L} (the end the load pushes toward)"
-        if toe_sign > 0
-        else "toe at x = 0 (the end the load pushes toward)"
-    )
-    resisting, overturning = [], []
-    mirrored = False
-    for v in vertical_resultants(wall):
-        f = combo.factor(v.case)
-        if f == 0.0 or v.force == 0.0:
-            continue
-        x = fmt.length(_position(v, g.direction))
-        mirrored = mirrored or (g.direction == "-" and abs(v.x_reversed - v.x) > 1e-9)
-        arm = f"({L} − {x})" if toe_sign > 0 else x
-        if f * v.force > 0.0:  # downward: resists
-            resisting.append(f"{factor_text(f)} × {fmt.sub(v.force, Kind.FORCE)} × {arm}")
-        else:  # upward: overturns
-            overturning.append(f"|{factor_text(f)} × {fmt.sub(v.force, Kind.FORCE)}| × {arm}")
-    weight = fmt.sub(result.self_weight.total, Kind.FORCE)
-    if f_d > 0.0:
-        resisting.append(f"{factor_text(f_d)} × {weight} × {L}/2")
-    elif f_d < 0.0:
-        overturning.append(f"|{factor_text(f_d)}| × {weight} × {L}/2")
-    lateral = _lateral_terms(wall, combo, g.direction, fmt, with_arm=True)
-    mirror_note = (
-        'loads marked reverses act at their mirror position about the wall\'s mid-length in direction − (loads table, after "−:")'
-        if mirrored
-        else ""
-    )
-    blocks: list[Block] = _governing_heading(Check.OVERTURNING, g)
-    blocks.append(Para(formula(f"Moments about the {toe}. Arms of vertical loads are measured from the toe."), "small"))
-    blocks += [
-        Equation(
-            formula("M_{OT}"),
-            formula("Σ f H (h + t_{f}) + Σ |f P| arm (uplift)" + (" + |f_{D}| W L_{f}/2" if f_d < 0 else "")),
-            _join(lateral + overturning),
-            fmt.moment(ot.moment),
-            mirror_note if overturning else "",
-        ),
-        Equation(
-            formula("M_{R}"),
-            formula("Σ f P arm (downward loads)" + (" + f_{D} W L_{f}/2" if f_d > 0 else "")),
-            _join(resisting),
-            fmt.moment(ot.resisting),
-            mirror_note,
-        ),
-        Equation(
-            formula("ratio"),
-            formula("M_{R} / M_{OT}"),
-            f"{fmt.moment(ot.resisting)} / {fmt.moment(ot.moment)}",
-            plain(ratio_text(ot.ratio, ot.required, ot.passes), bold=True),
-        ),
-    ]
-    blocks.append(_check_verdict(Check.OVERTURNING, ot.ratio, ot.required, ot.passes))
-    return [Group(tuple(blocks))]
-
-
 def _check_verdict(check: Check, ratio: float, required: float, passes: bool, symbol: str | None = None) -> Verdict:
     shown = ratio_text(ratio, required, passes)
     sign = "≥" if passes else "<"
     word = "passes" if passes else "FAILS"
     symbol = symbol or _CHECK_RATIO[check]
     return Verdict(passes, formula(f"{_CHECK_TITLE[check]} {word}: {symbol} = {shown} {sign} {required:.2f} required."))
-
-
-def _sliding(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
-    g = result.governing[Check.SLIDING]
-    if math.isinf(g.ratio):
-        return [
-            Heading("Sliding", 2),
-            Para("No case has a lateral shear: no demand."),
-            Verdict(True, "Sliding passes: no demand."),
-        ]
-    case, combo, i, f_d = _case_of(result, g)
-    sl = case.sliding
-    assert sl is not None
-    soil = project.soil
-    N = fmt.sub(case.vertical, Kind.FORCE)
-    B, t = fmt.length(result.width), fmt.length(result.thickness)
-    hs = fmt.length(wall.footing.cover)
-    blocks: list[Block] = _governing_heading(Check.SLIDING, g)
-    blocks.append(
-        Equation(
-            formula("V"),
-            formula("Σ f H"),
-            _join(_lateral_terms(wall, combo, g.direction, fmt, with_arm=False)),
-            fmt.force(sl.force),
-        )
-    )
-    bearing = result.governing[Check.BEARING]
-    if not math.isinf(bearing.ratio) and bearing.combination == g.combination:
-        blocks.append(
-            Equation(
-                formula("N"), None, None, N, "vertical load on the soil; same combination as the bearing check, built up there"
-            )
-        )
-    else:
-        n_eq = _n_equation(wall, result, combo, f_d, case.vertical, fmt)
-        blocks.append(replace(n_eq, note="vertical load on the soil in this combination"))
-    if case.vertical > 0.0:
-        blocks.append(Equation(formula("F_{μ}"), formula("μ N"), f"{soil.friction:g} × {N}", fmt.force(sl.friction), "friction"))
-    else:
-        blocks.append(Equation(formula("F_{μ}"), None, None, fmt.force(sl.friction), "N ≤ 0: no friction"))
-    if soil.cohesion > 0.0:
-        a = fmt.exact(float(result.evaluation.contact_length[i]))
-        blocks.append(
-            Equation(
-                formula("F_{c}"),
-                formula("min(c B a, 0.5 N)"),
-                f"min({fmt.pressure(soil.cohesion)} × {fmt.exact(result.width)} × {a}, 0.5 × {N})",
-                fmt.force(sl.cohesion),
-                "cohesion c over the contact length a, capped at half of N (see the design basis)",
-            )
-        )
-    else:
-        blocks.append(Equation(formula("F_{c}"), None, None, fmt.force(sl.cohesion), "no cohesion (c = 0)"))
-    if soil.passive > 0.0:
-        z = fmt.length(soil.passive_ignore)
-        note = "passive on the end face from z_{0} = max(h_{s}, ignored depth) below grade to the base at h_{s} + t_{f}"
-        if sl.passive == 0.0:
-            note = "the ignored depth reaches the base: no passive resistance"
-        blocks.append(
-            Equation(
-                formula("F_{p}"),
-                formula("p_{p} B ((h_{s} + t_{f})² − z_{0}²) / 2"),
-                f"{fmt.gradient(soil.passive)} × {B} × (({hs} + {t})² − max({hs}, {z})²) / 2",
-                fmt.force(sl.passive),
-                formula(note),
-            )
-        )
-    else:
-        blocks.append(Equation(formula("F_{p}"), None, None, fmt.force(sl.passive), formula("no passive resistance (p_{p} = 0)")))
-    blocks += [
-        Equation(
-            formula("R"),
-            formula("F_{μ} + F_{c} + F_{p}"),
-            f"{fmt.force(sl.friction)} + {fmt.force(sl.cohesion)} + {fmt.force(sl.passive)}",
-            fmt.force(sl.resistance),
-            "friction and passive combined (IBC 1806.3.1)",
-        ),
-        Equation(
-            formula("ratio"),
-            formula("R / V"),
-            f"{fmt.force(sl.resistance)} / {fmt.force(sl.force)}",
-            plain(ratio_text(sl.ratio, sl.required, sl.passes), bold=True),
-        ),
-        _check_verdict(Check.SLIDING, sl.ratio, sl.required, sl.passes),
-    ]
-    return _lead(_tail(blocks, 3), 5)
-
-
-def _bearing(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
-    g = result.governing[Check.BEARING]
-    if math.isinf(g.ratio):
-        return [
-            Heading("Soil bearing", 2),
-            Para("No case presses on the soil: no demand."),
-            Verdict(True, "Bearing passes: no demand."),
-        ]
-    case, combo, i, f_d = _case_of(result, g)
-    br = case.bearing
-    assert br is not None
-    soil = project.soil
-    L = fmt.length(result.length)
-    Ld, Bd = fmt.exact(result.length), fmt.exact(result.width)
-    # N and M carry the digits the lines below use (one more than the display precision when not exact)
-    N, M = fmt.sub(case.vertical, Kind.FORCE), fmt.sub(case.moment, Kind.MOMENT)
-    m_terms = []
-    mirrored = False
-    for v in vertical_resultants(wall):
-        f = combo.factor(v.case)
-        if f == 0.0 or v.force == 0.0:
-            continue
-        x = _position(v, g.direction)
-        mirrored = mirrored or (g.direction == "-" and abs(v.x_reversed - v.x) > 1e-9)
-        if abs(x - 0.5 * result.length) > 1e-9:  # a load at mid-length adds no moment about it
-            m_terms.append(f"{factor_text(f)} × {fmt.sub(v.force, Kind.FORCE)} × ({fmt.length(x)} − {L}/2)")
-    lateral = _lateral_terms(wall, combo, g.direction, fmt, with_arm=True)
-    if lateral:
-        sign = "" if g.direction == "+" else "−"
-        m_terms.insert(0, f"{sign}[{' + '.join(lateral)}]")
-    m_note = "about the footing's mid-length; + toward x = L_{f}; loads at mid-length add nothing"
-    if mirrored:
-        m_note += "; loads marked reverses at their mirror position (direction −)"
-    blocks: list[Block] = _governing_heading(Check.BEARING, g)
-    blocks += [
-        _n_equation(wall, result, combo, f_d, case.vertical, fmt),
-        Equation(
-            formula("M"),
-            formula("± Σ f H (h + t_{f}) + Σ f P (x − L_{f}/2)"),
-            _join(m_terms),
-            fmt.carried(case.moment, Kind.MOMENT),
-            formula(m_note),
-        ),
-    ]
-    if not br.stable:
-        blocks += [
-            Equation(
-                formula("e"),
-                formula("M / N"),
-                f"{M} / {N}",
-                formula(fmt.signed_length(br.eccentricity)) if math.isfinite(br.eccentricity) else "∞",
-            ),
-            Para(
-                formula(
-                    "N ≤ 0 or |e| ≥ L_{f}/2: the resultant falls outside the footing and the footing cannot be in "
-                    "equilibrium on the soil. It overturns; bearing fails."
-                ),
-                "fail",
-            ),
-            _check_verdict(Check.BEARING, br.ratio, br.required, br.passes),
-        ]
-        return [Group(tuple(blocks))]
-    e_abs = fmt.decimal(abs(br.eccentricity))
-    beyond = br.contact_length < result.length * (1.0 - 1e-9)
-    diagram = pressure_diagram(case.vertical, br.eccentricity, result.width, result.length)
-    kern_half = (diagram.kern[1] - diagram.kern[0]) / 2.0  # L/6: half the middle third (display only)
-    blocks.append(Equation(formula("e"), formula("M / N"), f"{M} / {N}", formula(fmt.signed_length(br.eccentricity))))
-    if not beyond:
-        blocks += [
-            Equation(
-                formula("|e|"),
-                None,
-                None,
-                formula(f"{e_abs} ≤ L_{{f}}/6 = {fmt.decimal(kern_half)}", bold=True),
-                "the resultant is inside the kern (middle third): the whole footing is in contact",
-            ),
-            Equation(
-                formula("q_{max}"),
-                formula("N / (B L_{f}) (1 + 6|e| / L_{f})"),
-                f"{N} / ({Bd} × {Ld}) × (1 + 6 × {e_abs} / {Ld})",
-                fmt.pressure(br.q_max),
-            ),
-            Equation(
-                formula("q_{min}"),
-                formula("N / (B L_{f}) (1 − 6|e| / L_{f})"),
-                f"{N} / ({Bd} × {Ld}) × (1 − 6 × {e_abs} / {Ld})",
-                fmt.pressure(br.q_min),
-            ),
-        ]
-    else:
-        a_text = fmt.decimal(br.contact_length) + (f" ({fmt.length(br.contact_length)})" if fmt.units == "US" else "")
-        blocks += [
-            Equation(
-                formula("|e|"),
-                None,
-                None,
-                formula(f"{e_abs} > L_{{f}}/6 = {fmt.decimal(kern_half)}", bold=True),
-                "the resultant is beyond the kern: only part of the footing is in contact and the pressure is a triangle",
-            ),
-            Equation(formula("a"), formula("3 (L_{f}/2 − |e|)"), f"3 × ({Ld}/2 − {e_abs})", a_text, "contact length"),
-            Equation(
-                formula("q_{max}"),
-                formula("2N / (3B (L_{f}/2 − |e|))"),
-                f"2 × {N} / (3 × {Bd} × ({Ld}/2 − {e_abs}))",
-                fmt.pressure(br.q_max),
-            ),
-            Equation(formula("q_{min}"), None, None, fmt.pressure(br.q_min), "no tension beyond the contact length"),
-        ]
-    tail: list[Block] = []
-    if soil.bearing_basis is BearingBasis.NET:
-        tail.append(
-            Equation(
-                formula("q"),
-                formula("q_{max} − γ_{s} (h_{s} + t_{f})"),
-                f"{fmt.pressure(br.q_max)} − {fmt.unit_weight(soil.unit_weight)} × ({fmt.length(wall.footing.cover)} + {fmt.length(result.thickness)})",
-                fmt.pressure(br.pressure_compared),
-                "net pressure, for a net allowable",
-            )
-        )
-        q_symbol = "q"
-    else:
-        q_symbol = "q_{max}"
-    if combo.has_wind_or_seismic and project.criteria.bearing_increase != 1.0:
-        tail.append(
-            Equation(
-                formula("q_{a}"),
-                formula("q_{a,report} × increase"),
-                f"{fmt.pressure(soil.allowable_bearing)} × {factor_text(project.criteria.bearing_increase)}",
-                fmt.pressure(br.allowable),
-                "combination with W or E",
-            )
-        )
-    else:
-        tail.append(Equation(formula("q_{a}"), None, None, fmt.pressure(br.allowable), "allowable bearing pressure"))
-    tail += [
-        Equation(
-            formula("ratio"),
-            formula(f"q_{{a}} / {q_symbol}"),
-            f"{fmt.pressure(br.allowable)} / {fmt.pressure(br.pressure_compared)}",
-            plain(ratio_text(br.ratio, br.required, br.passes), bold=True),
-        ),
-        _check_verdict(Check.BEARING, br.ratio, br.required, br.passes, f"q_{{a}} / {q_symbol}"),
-    ]
-    drawing = pressure_drawing(diagram, br.allowable, result, g, fmt, CONTENT_WIDTH, 150.0)
-    # the heading and the equations from N to the pressures on one sheet; the allowable, ratio and
-    # verdict on one sheet; the diagram with them when it fits
-    return [Group(tuple(blocks)), Group(tuple(tail)), drawing]
 
 
 def _results_table(result: WallResult) -> list[Block]:
@@ -1682,13 +1530,11 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
     blocks.append(
         Para(
             formula(
-                f"Searched: widths B from {fmt.length(z.width_min)} to {fmt.length(z.width_max)} in steps of "
-                f"{fmt.length(z.width_step)} ({s.widths.size} values) and thicknesses t_{{f}} from {fmt.length(z.thickness_min)} to "
-                f"{fmt.length(z.thickness_max)} in steps of {fmt.length(z.thickness_step)} ({s.thicknesses.size} values): "
-                f"{s.candidates:,} candidates, each checked in every combination and direction, with the footing length "
-                "and the loads as entered. Candidates are ranked by their cross-section B × t_{f} (the least concrete per "
-                "unit length of footing); of two with the same cross-section the thinner ranks first, then the narrower. The "
-                "chosen size is the first passing candidate in that ranking."
+                f"B from {fmt.length(z.width_min)} to {fmt.length(z.width_max)} by {fmt.length(z.width_step)} "
+                f"({s.widths.size}) × t_{{f}} from {fmt.length(z.thickness_min)} to {fmt.length(z.thickness_max)} by "
+                f"{fmt.length(z.thickness_step)} ({s.thicknesses.size}): {s.candidates:,} candidates, each in every case, "
+                "L_{f} and loads as entered; ranked by cross-section B × t_{f}, then thinner, then narrower; the first "
+                "that passes is chosen."
             )
         )
     )
@@ -1706,7 +1552,7 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
         (("smallest passing", row, col), ("next narrower", row, col - 1), ("next thinner", row - 1, col))
     ):
         if r < 0 or c < 0:
-            table_rows.append((name, "outside the bounds", *([""] * len(s.checks)), "not a candidate"))
+            continue  # outside the bounds searched: not a candidate
             continue
         values = []
         for j in range(len(s.checks)):
@@ -1720,19 +1566,20 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
             verdict = "FAILS " + s.governing_check(r, c).id
             fail_rows.append(k)
         table_rows.append((name, f"{fmt.length(float(s.widths[c]))} × {fmt.length(float(s.thicknesses[r]))}", *values, verdict))
+    # one line per candidate: its size, each check's lowest ratio / required (1.000 or more passes), result
+    lines = tuple(
+        plain(
+            f"{row[0]}, {row[1]}: "
+            + ", ".join(f"{c.title.lower()} {v}" for c, v in zip(s.checks, row[2:-1], strict=True))
+            + f"; {row[-1]}",
+            bold=k in fail_rows,
+        )
+        for k, row in enumerate(table_rows)
+    )
     blocks += [
         Para(formula(f"Smallest passing size: B × t_{{f}} = {fmt.length(s.width)} × {fmt.length(s.thickness)}.", bold=True)),
-        Table(
-            ("Candidate", formula("B × t_{f}"), *(c.title for c in s.checks), "Result"),
-            tuple(table_rows),
-            (0.16, 0.2, *((0.44 / len(s.checks),) * len(s.checks)), 0.2),
-            align="LL" + "R" * len(s.checks) + "L",
-            fail_rows=tuple(fail_rows),
-        ),
-        Para(
-            "Values are the lowest ratio / required over all cases (1.000 or more passes). Program's finding: " + s.message + ".",
-            "small",
-        ),
+        Bullets(lines),
+        Para("Each check's lowest ratio / required over all cases (1.000 or more passes).", "small"),
     ]
     if report.sized_result is not None:
         sr = report.sized_result
@@ -1741,14 +1588,12 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
             + ("no demand" if math.isinf(sr.governing[c].normalized) else f"{sr.governing[c].normalized:.3f}")
             for c in ALL_CHECKS
         ]
-        blocks.append(Para("Governing ratio / required at the smallest passing size: " + ", ".join(parts) + ".", "small"))
+        del parts  # the first row of the table gives them
     if row == 0 and col == 0:
         blocks.append(
             Para(
-                "The lower bounds of the search pass: stability does not govern this footing. Its size is then set by "
-                "the code minimums (IBC 2021 section 1809: minimum footing width and thickness, frost depth) and by "
-                "practice, not by these checks.",
-                "note",
+                "The lower bounds pass: stability does not govern; the code minimums (IBC 2021 1809) and practice set the size.",
+                "small",
             )
         )
     if _same_size(wall, s):
@@ -1785,7 +1630,18 @@ def _short_ratio(ratio: float, required: float, passes: bool) -> str:
 _CHECK_ABBREVIATION = {Check.OVERTURNING: "OT", Check.SLIDING: "SL", Check.BEARING: "BR"}
 
 
-def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
+def _appendix(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Section:
+    """One appendix for every wall: the key once, then each wall's table of every case under its heading."""
+    tables = [_appendix_table(project, r, fmt) for r in reports]
+    key = tables[0][0] if tables else ""
+    blocks: list[Block] = [Heading("Appendix: every combination and direction"), Para(formula(key), "small")]
+    for r, (_, head, table) in zip(reports, tables, strict=True):
+        blocks += [Heading(plain(head), 2, bookmark=f"Wall {r.wall.id}"), table]
+    return Section("appendix", "Appendix: every combination and direction", "Appendix: all cases", tuple(blocks))
+
+
+def _appendix_table(project: Project, report: WallReport, fmt: _Fmt) -> tuple[str, str, Table]:
+    """The key, the heading and the table of one wall's cases."""
     result = report.result
     rows: list[tuple[Cell, ...]] = []
     fail_rows = []
@@ -1796,13 +1652,13 @@ def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
     for k, c in enumerate(result.cases):
         ot, sl, br = c.overturning, c.sliding, c.bearing
         failing = [name for name, r in (("OT", ot), ("SL", sl), ("BR", br)) if r is not None and not r.passes]
-        mark = f"\n* governs {', '.join(governs[k])}" if k in governs else ""
+        mark = ""
         if br is None:
             e_cell = "n/a"
         elif not br.stable:
             e_cell = fmt.number(br.eccentricity, Kind.LENGTH) + "\nno equil."
         elif br.contact_length < result.length * (1.0 - 1e-9):
-            e_cell = fmt.number(br.eccentricity, Kind.LENGTH) + f"\nbeyond kern, a = {fmt.number(br.contact_length, Kind.LENGTH)}"
+            e_cell = fmt.number(br.eccentricity, Kind.LENGTH) + f"\na = {fmt.number(br.contact_length, Kind.LENGTH)}"
         else:
             e_cell = fmt.number(br.eccentricity, Kind.LENGTH)
         rows.append(
@@ -1821,7 +1677,8 @@ def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
                 fmt.number(br.q_max, Kind.PRESSURE) if br is not None else "n/a",
                 fmt.number(br.allowable, Kind.PRESSURE) if br is not None else "n/a",
                 _short_ratio(br.ratio, br.required, br.passes) if br is not None else "n/a",
-                "passes" if not failing else "FAILS " + ", ".join(failing),
+                ("passes" if not failing else "FAILS " + ", ".join(failing))
+                + (f"\n* {', '.join(governs[k])}" if k in governs else ""),
             )
         )
         if failing:
@@ -1845,364 +1702,39 @@ def _appendix(project: Project, report: WallReport, fmt: _Fmt) -> Section:
         "BR ratio",
         "Result",
     )
-    widths = (0.16, 0.035, 0.055, 0.05, 0.06, 0.085, 0.06, 0.06, 0.05, 0.055, 0.05, 0.055, 0.05, 0.05, 0.075)
+    widths = (0.215, 0.04, 0.052, 0.045, 0.058, 0.085, 0.058, 0.058, 0.045, 0.052, 0.045, 0.052, 0.045, 0.045, 0.075)
     total = sum(widths)
     any_na = any("n/a" in row for row in rows)
     key = (
-        f"Footing {fmt.length(result.width)} × {fmt.length(result.thickness)} × {fmt.length(result.length)} (B × t_{{f}} × L_{{f}}). "
-        "N vertical load on the soil, V shear, M moment about the footing's mid-length, e = M / N (lengths in "
+        "Footing B × t_{f} × L_{f} as drawn, under each wall's heading. N vertical load on the soil, V shear, M moment about the footing's mid-length, e = M / N (lengths in "
         + ("decimal feet" if project.units == "US" else "metres")
-        + '; "beyond kern" marks a case with the resultant outside the middle third, with its contact length a), '
+        + '; a second line "a = ..." marks a resultant beyond the kern (middle third), with its contact length a), '
         "M_{OT} and M_{R} moments about the toe, R sliding resistance, q_{max} peak soil pressure, q_{a} allowable. "
         "Dir.: + lateral load toward x = L_{f}, − toward x = 0, none: no lateral load. OT, SL, BR: overturning, sliding, "
-        'bearing. "* governs" marks the case that governs the checks named. "no dem.": no demand (no overturning '
+        'bearing. "* OT" in the result column marks the case that governs the checks named. "no dem.": no demand (no overturning '
         "moment, shear or pressure)." + (" n/a: the combination does not apply to that check." if any_na else "")
     )
-    blocks: list[Block] = [
-        Heading(plain(f"Appendix: every combination and direction, wall {report.wall.id}")),
-        Para(formula(key), "small"),
-        Table(
-            headers,
-            tuple(rows),
-            tuple(w / total for w in widths),
-            align="LCRRRRRRRRRRRRL",
-            font_size=6.0,
-            fail_rows=tuple(fail_rows),
-        ),
-    ]
-    return Section(
-        f"appendix:{report.wall.id}",
-        f"Appendix: all cases, wall {report.wall.id}",
-        f"Appendix, wall {report.wall.id}",
-        tuple(blocks),
+    head = (
+        f"{wall_title(report.wall)}: footing {fmt.length(result.width)} × {fmt.length(result.thickness)} × "
+        f"{fmt.length(result.length)}"
     )
+    table = Table(
+        headers,
+        tuple(rows),
+        tuple(w / total for w in widths),
+        align="LCRRRRRRRRRRRRL",
+        font_size=6.5,
+        fail_rows=tuple(fail_rows),
+    )
+    return key, head, table
 
 
 # ---------------------------------------------------------------------------------------------
 # Drawings
 # ---------------------------------------------------------------------------------------------
 
-# Drawing scales: (points per metre at 1:n, the printed name). US architectural and engineering
-# scales; SI ratios (common practice).
-_US_SCALES = (
-    (16, '3/4" = 1\'-0"'),
-    (24, '1/2" = 1\'-0"'),
-    (32, '3/8" = 1\'-0"'),
-    (48, '1/4" = 1\'-0"'),
-    (64, '3/16" = 1\'-0"'),
-    (96, '1/8" = 1\'-0"'),
-    (128, '3/32" = 1\'-0"'),
-    (192, '1/16" = 1\'-0"'),
-    (240, '1" = 20\'-0"'),
-    (384, '1/32" = 1\'-0"'),
-    (480, '1" = 40\'-0"'),
-    (600, '1" = 50\'-0"'),
-    (1200, '1" = 100\'-0"'),
-    (2400, '1" = 200\'-0"'),
-)
-_SI_SCALES = tuple((n, f"1:{n}") for n in (10, 20, 25, 50, 75, 100, 150, 200, 250, 500, 1000, 2000))
-_POINTS_PER_METRE = 72.0 / 0.0254
-# A generous average character width of the sans-serif drawing font, per point of size (for
-# deciding whether a label fits; the renderer measures exactly).
-_TEXT_WIDTH = 0.58
-_CORNER_CLEAR = 6.0  # points: arrowheads nearer than this to the wall's top corner are moved apart
-
-
-def drawing_scale(fit: float, units: str) -> tuple[float, str]:
-    """The largest standard scale whose points per metre do not exceed ``fit``.
-
-    Returns (points per metre, printed scale). Falls back to ``fit`` itself ("not to a standard
-    scale") when even the smallest standard scale is too large.
-    """
-    for n, name in _US_SCALES if units == "US" else _SI_SCALES:
-        ppm = _POINTS_PER_METRE / n
-        if ppm <= fit:
-            return ppm, name
-    return fit, f"1:{_POINTS_PER_METRE / fit:,.0f}"
-
-
-def _group_loads(items: Sequence[tuple[float, str]]) -> list[tuple[float, str]]:
-    """Merge labels of loads at the same position."""
-    out: dict[float, list[str]] = {}
-    for x, text in items:
-        key = round(x, 6)
-        out.setdefault(key, []).append(text)
-    return [(x, ", ".join(t)) for x, t in sorted(out.items())]
-
-
-def elevation_drawing(wall: Wall, fmt: _Fmt, width: float, height: float) -> Drawing:
-    """To-scale elevation of the wall on its footing with its loads and dimensions (points)."""
-    f = wall.footing
-    length = wall.footing_length
-    laterals = lateral_resultants(wall)
-    h_top = max([h.height for h in laterals] + [0.0])
-    stem_h = wall.stem.height if wall.stem.present else 0.0
-    wall_top = max(h_top, stem_h + 2.0)  # at least a stub of wall above the stem
-    line_loads = [ld for ld in wall.loads if isinstance(ld, LineLoad)]
-    point_loads = [ld for ld in wall.loads if isinstance(ld, PointLoad)]
-    band = 10.0 * len(line_loads) + (24.0 if point_loads else 0.0)
-    left_margin, right_margin, bottom_margin, top_margin = 86.0, 46.0, 32.0, 14.0 + band
-    fit = min((width - left_margin - right_margin) / length, (height - bottom_margin - top_margin) / (wall_top + f.thickness))
-    s, scale_name = drawing_scale(fit, fmt.units)
-    height = bottom_margin + (wall_top + f.thickness) * s + top_margin  # the box shrinks to what it holds
-    x0 = left_margin + ((width - left_margin - right_margin) - length * s) / 2.0
-    y0 = bottom_margin + f.thickness * s  # top of footing
-
-    def X(x: float) -> float:
-        return x0 + x * s
-
-    def Y(y: float) -> float:
-        return y0 + y * s
-
-    shapes: list[Shape] = []
-    # grade line over the footing
-    grade = Y(f.cover)
-    shapes.append(Line(X(0) - 14, grade, X(length) + 8, grade, 0.5, dash=True, color="soil"))
-    shapes.append(Label(X(0) - 16, grade - 2, "grade", "end", 5.5, color="soil"))
-    if f.cover > 0:
-        shapes.append(Rect(X(0), Y(0), length * s, f.cover * s, fill="soil", width=0))
-    # footing
-    shapes.append(Rect(X(0), Y(-f.thickness), length * s, f.thickness * s, fill="concrete"))
-    # stem (full footing length) and wall
-    base = 0.0
-    if wall.stem.present:
-        shapes.append(Rect(X(0), Y(0), length * s, stem_h * s, fill="stem"))
-        base = stem_h
-    ws, we = f.extension_start, f.extension_start + wall.length
-    shapes.append(Rect(X(ws), Y(base), wall.length * s, (wall_top - base) * s, fill="wall"))
-    # break mark at the top of the wall (the wall continues above)
-    top = Y(wall_top)
-    shapes.append(Line(X(ws) + 0.45 * wall.length * s, top, X(ws) + 0.5 * wall.length * s, top + 4, 0.6, color="paper"))
-    # lateral loads: arrows at their heights pushing in direction +
-    for y, text in _group_loads([(h.height, f"{h.case.value} {fmt.force(h.force)}") for h in laterals]):
-        yy = Y(y)
-        shapes.append(Arrow(X(ws) - 30, yy, X(ws), yy))
-        shapes.append(Label(X(ws) - 33, yy - 2, text, "end", 6.0, color="load"))
-    # heights of lateral loads above the top of footing, on the right
-    for k, (y, _) in enumerate(_group_loads([(h.height, "") for h in laterals])):
-        shapes.append(Dimension(X(length), Y(0), X(length), Y(y), fmt.length(y), offset=14.0 + 18.0 * k))
-    # vertical loads: line loads as bands of arrows above the wall, point loads as single arrows
-    y_band = top + 8.0
-    for ld in line_loads:
-        xa, xb = X(f.extension_start + ld.start), X(f.extension_start + ld.end)
-        down = ld.value >= 0
-        shapes.append(Line(xa, y_band + 8, xb, y_band + 8, 0.5, color="load"))
-        n = max(2, int((xb - xa) / 18.0) + 1)
-        for k in range(n):
-            xx = xa + (xb - xa) * k / (n - 1)
-            if down:
-                shapes.append(Arrow(xx, y_band + 8, xx, y_band + 1, 0.5))
-            else:
-                shapes.append(Arrow(xx, y_band + 1, xx, y_band + 8, 0.5))
-        text = f"{ld.case.value} {fmt.line_load(ld.value)}" + (" (reverses)" if ld.reverses else "")
-        shapes.append(Label(xa - 4, y_band + 2, text, "end", 5.5, color="load"))
-        y_band += 10.0
-    shear_at_top = any(abs(Y(h.height) - top) < _CORNER_CLEAR for h in laterals)
-    if point_loads:
-        items = [
-            (f.extension_start + p.at, f"{p.case.value} {fmt.force(p.value)}" + (" rev." if p.reverses else ""))
-            for p in point_loads
-        ]
-        for up in (False, True):  # downward (compression) and upward (uplift) loads drawn apart
-            group = [it for it, p in zip(items, point_loads, strict=True) if (p.value < 0) == up]
-            for x, text in _group_loads(group):
-                xx = X(x)
-                # a shear arrow at the wall's top corner: keep the point load's arrowhead clear above it
-                gap = 7.0 if shear_at_top and abs(xx - X(ws)) < _CORNER_CLEAR else 2.0
-                if up:  # uplift: the arrow leaves the top of the wall, pointing up
-                    shapes.append(Arrow(xx, top + gap, xx, y_band + 16, 0.7))
-                else:
-                    shapes.append(Arrow(xx, y_band + 16, xx, top + gap, 0.7))
-                shapes.append(Label(xx, y_band + 18, text, "middle", 5.5, color="load"))
-    # dimensions: footing length, extensions and wall length, footing thickness
-    shapes.append(
-        Dimension(X(0), Y(-f.thickness), X(length), Y(-f.thickness), f"L_{{f}} = {fmt.length(length)}", offset=-18.0, markup=True)
-    )
-    if f.extension_start > 0 or f.extension_end > 0:
-        if f.extension_start > 0:
-            shapes.append(
-                Dimension(
-                    X(0), Y(-f.thickness), X(ws), Y(-f.thickness), fmt.length(f.extension_start), offset=-8.0, outside="start"
-                )
-            )
-        if f.extension_end > 0:
-            shapes.append(Dimension(X(we), Y(-f.thickness), X(length), Y(-f.thickness), fmt.length(f.extension_end), offset=-8.0))
-    wall_text = f"wall, {fmt.length(wall.length)} long"
-    if wall.length * s > _TEXT_WIDTH * 6.0 * len(wall_text) + 6.0:
-        shapes.append(Label(X(ws + wall.length / 2), Y((base + wall_top) / 2), wall_text, "middle", 6.0))
-    else:  # a narrow wall: the text runs up it
-        shapes.append(Label(X(ws + wall.length / 2) + 2.0, Y((base + wall_top) / 2), wall_text, "middle", 6.0, angle=90.0))
-    if wall.stem.present:
-        shapes.append(Label(X(ws + wall.length / 2), Y(stem_h / 2) - 2, f"stem wall, {fmt.length(stem_h)} high", "middle", 5.5))
-    shapes.append(Label(X(0), Y(-f.thickness) - 30, "x = 0", "middle", 5.0))
-    shapes.append(Label(X(length), Y(-f.thickness) - 30, "x = L_{f}", "middle", 5.0, markup=True))
-    caption = f"Elevation along the wall, scale {scale_name} (printed at 100%); wall drawn to the highest lateral load; + direction to the right."
-    return Drawing(width, height, tuple(shapes), caption)
-
-
-def section_drawing(wall: Wall, project: Project, fmt: _Fmt, width: float, height: float) -> Drawing:
-    """To-scale section across the footing: width B, thickness t_f, soil cover h_s, wall and stem thicknesses."""
-    f = wall.footing
-    stem_h = wall.stem.height if wall.stem.present else 0.0
-    above = max(f.cover, stem_h) + 0.6  # show the wall a little above grade or the stem
-    margin_x, bottom, top = 24.0, 30.0, 22.0
-    fit = min((width - 2 * margin_x) / f.width, (height - bottom - top) / (above + f.thickness))
-    s, scale_name = drawing_scale(fit, fmt.units)
-    cx = width / 2.0
-    y0 = bottom + f.thickness * s
-
-    def Y(y: float) -> float:
-        return y0 + y * s
-
-    shapes: list[Shape] = []
-    half = f.width * s / 2.0
-    if f.cover > 0:
-        shapes.append(Rect(cx - half - 12, Y(0), f.width * s + 24, f.cover * s, fill="soil", width=0))
-    shapes.append(Line(cx - half - 14, Y(f.cover), cx + half + 14, Y(f.cover), 0.5, dash=True, color="soil"))
-    shapes.append(Rect(cx - half, Y(-f.thickness), f.width * s, f.thickness * s, fill="concrete"))
-    base = 0.0
-    if wall.stem.present:
-        ts = wall.stem.thickness * s
-        shapes.append(Rect(cx - ts / 2, Y(0), ts, stem_h * s, fill="stem"))
-        base = stem_h
-    tw = wall.thickness * s
-    shapes.append(Rect(cx - tw / 2, Y(base), tw, (above - base) * s, fill="wall"))
-    # thickness of the wall across its top, and of the stem across its mid-height
-    shapes.append(
-        Dimension(cx - tw / 2, Y(above), cx + tw / 2, Y(above), f"t_{{w}} = {fmt.length(wall.thickness)}", 8.0, markup=True)
-    )
-    if wall.stem.present:
-        ts = wall.stem.thickness * s
-        yy = Y(min(stem_h, f.cover if f.cover > 0 else stem_h) / 2)  # clear of the grade line
-        shapes.append(
-            Dimension(cx - ts / 2, yy, cx + ts / 2, yy, f"t_{{stem}} = {fmt.length(wall.stem.thickness)}", 0.0, markup=True)
-        )
-    shapes.append(Dimension(cx - half, Y(-f.thickness), cx + half, Y(-f.thickness), f"B = {fmt.length(f.width)}", offset=-12.0))
-    shapes.append(Dimension(cx + half, Y(-f.thickness), cx + half, Y(0), fmt.length(f.thickness), offset=10.0))
-    if f.cover > 0:
-        shapes.append(Dimension(cx - half, Y(0), cx - half, Y(f.cover), fmt.length(f.cover), offset=-10.0))
-    return Drawing(width, height, tuple(shapes), f"Section across the footing, scale {scale_name}.")
-
-
-_LABEL_STEP = 8.0  # points between the baselines of labels stacked in a margin (6 pt text)
-
-
-def _stack(wanted: Sequence[float], highest: float) -> list[float]:
-    """Baselines for margin labels wanted at ``wanted`` (points, y up), kept at least
-    :data:`_LABEL_STEP` apart and no higher than ``highest``; the order of the labels is kept."""
-    order = sorted(range(len(wanted)), key=lambda k: -wanted[k])
-    out = [0.0] * len(wanted)
-    limit = highest
-    for k in order:
-        out[k] = min(wanted[k], limit)
-        limit = out[k] - _LABEL_STEP
-    return out
-
-
-def pressure_drawing(
-    diagram: PressureDiagram, allowable: float, result: WallResult, g: Governing, fmt: _Fmt, width: float, height: float
-) -> Drawing:
-    """Soil pressure under the footing in the governing bearing case, with the allowable line.
-
-    The values are written in the side margins at the level they mark (q_max at the peak's end, q_min at
-    the other end, q_a at the end away from the peak), so no label crosses the outline, the fill or the
-    dashed allowable line; the contact length is dimensioned below the lowest line. ``height`` is the
-    most the drawing may take; it shrinks to what it holds.
-    """
-    length = result.length
-    left = right = 74.0
-    top = 48.0
-    depth = height - top - 44.0  # points for the deeper of q_max and q_a
-    sx = (width - left - right) / length
-    q_top = max(diagram.q_max if math.isfinite(diagram.q_max) else 0.0, allowable)
-    sy = depth / q_top if q_top > 0 else 0.0
-    partial = diagram.stable and diagram.contact_end - diagram.contact_start < length * (1 - 1e-9)
-    # below the lowest line: the contact dimension (text above its line), or room for two margin labels
-    # pushed apart (q_min and q_a at one end)
-    below = 18.0 if partial else 14.0
-    height = top + depth + below
-    y_base = height - top  # underside of the footing; pressure drawn downward from it
-    y_low = y_base - q_top * sy  # the lowest of the peak and the allowable line
-
-    def X(x: float) -> float:
-        return left + x * sx
-
-    shapes: list[Shape] = []
-    # footing strip and the kern (middle third)
-    shapes.append(Rect(X(0), y_base, length * sx, 10.0, fill="concrete"))
-    k1, k2 = diagram.kern
-    shapes.append(Line(X(k1), y_base + 10, X(k1), y_base + 16, 0.6))
-    shapes.append(Line(X(k2), y_base + 10, X(k2), y_base + 16, 0.6))
-    shapes.append(Line(X(k1), y_base + 16, X(k2), y_base + 16, 0.6))
-    kern_text = "kern (middle third)"
-    kern_w = _TEXT_WIDTH * 5.5 * len(kern_text) + 3.0
-    xr = X(diagram.resultant_x) if diagram.stable else X(length / 2)
-    # the kern's name beside its bracket, on the side away from the resultant's arrow
-    if X(k1) - 3 - kern_w < xr < X(k1) + 2:
-        shapes.append(Label(X(k2) + 3, y_base + 13, kern_text, "start", 5.5))
-    else:
-        shapes.append(Label(X(k1) - 3, y_base + 13, kern_text, "end", 5.5))
-    ya = y_base - allowable * sy
-    shapes.append(Line(X(0), ya, X(length), ya, 0.8, dash=True, color="allow"))
-    # margin labels: (end, wanted baseline, text, bold, colour); end 0 = left margin, 1 = right margin
-    margin: list[tuple[int, float, str, bool, str]] = []
-    if diagram.stable:
-        pts = tuple((X(float(x)), y_base - float(q) * sy) for x, q in zip(diagram.x, diagram.q, strict=True))
-        shapes.append(Polygon(pts, fill="pressure"))
-        # the resultant N
-        shapes.append(Arrow(xr, y_base + 36, xr, y_base + 11, 1.0))
-        assert g.case_index is not None
-        case = result.cases[g.case_index]
-        text = f"N = {fmt.force(case.vertical)}"
-        if case.bearing is not None:
-            text += f" at e = {fmt.decimal(case.bearing.eccentricity)}"
-        shapes.append(Label(xr, y_base + 38, text, "middle", 6.0, color="load"))
-        # pressure values beside the ends of the block, at their levels
-        peak_left = float(diagram.q[1]) >= float(diagram.q[2])
-        peak_end, other_end = (0, 1) if peak_left else (1, 0)
-        margin.append((peak_end, y_base - diagram.q_max * sy - 2, f"q_{{max}} = {fmt.pressure(diagram.q_max)}", True, "ink"))
-        if diagram.q_min > 0:
-            margin.append(
-                (other_end, y_base - diagram.q_min * sy - 2, f"q_{{min}} = {fmt.pressure(diagram.q_min)}", False, "ink")
-            )
-        if partial:
-            shapes.append(
-                Dimension(
-                    X(diagram.contact_start),
-                    y_base,
-                    X(diagram.contact_end),
-                    y_base,
-                    f"contact a = {fmt.length(diagram.contact_end - diagram.contact_start)}",
-                    offset=-(y_base - y_low + 12.0),
-                )
-            )
-    else:
-        peak_end, other_end = 0, 1
-        shapes.append(
-            Label(
-                width / 2,
-                y_base - 30,
-                "no equilibrium: the resultant is outside the footing",
-                "middle",
-                7.0,
-                bold=True,
-                color="fail",
-            )
-        )
-    margin.append((other_end, ya - 2, f"q_{{a}} = {fmt.pressure(allowable)}", False, "allow"))
-    for end in (0, 1):
-        items = [m for m in margin if m[0] == end]
-        for (_, _, text, bold, color), y in zip(items, _stack([m[1] for m in items], y_base - 8.0), strict=True):
-            x, anchor = (X(0) - 4, "end") if end == 0 else (X(length) + 4, "start")
-            shapes.append(Label(x, y, text, anchor, 6.0, bold=bold, color=color, markup=True))
-    shapes.append(Label(X(0) - 4, y_base + 2, "x = 0", "end", 5.5))
-    shapes.append(Label(X(length) + 4, y_base + 2, "x = L_{f}", "start", 5.5, markup=True))
-    caption = (
-        f"Soil pressure in the governing bearing case {case_name(g.combination, g.direction)} "
-        "(pressures drawn downward to a uniform scale; dashed: allowable)."
-    )
-    return Drawing(width, height, tuple(shapes), caption)
-
+# The drawings and the check sheets read the blocks above; imported last (they import this module).
+from .drawings import drawing_scale, elevation_drawing, pressure_drawing, section_drawing  # noqa: E402
 
 __all__ = [
     "CONTENT_WIDTH",
@@ -2233,6 +1765,10 @@ __all__ = [
     "WallReport",
     "build_package",
     "drawing_scale",
+    "elevation_drawing",
+    "pressure_drawing",
+    "section_drawing",
+    "Formatter",
     "formula",
     "plain",
     "ratio_text",

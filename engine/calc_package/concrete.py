@@ -21,8 +21,6 @@ from ..concrete.longitudinal import BeamDiagram, LongitudinalDesign
 from ..concrete.plain import FLEXURE_COEFFICIENT, MIN_THICKNESS, PHI_PLAIN, SHEAR_COEFFICIENT, SOIL_ALLOWANCE
 from ..concrete.transverse import (
     MASONRY_SECTION,
-    MAX_SPACING,
-    MAX_SPACING_THICKNESSES,
     MIN_DEPTH_ABOVE_BARS,
     MIN_STEEL_RATIO,
     VC_COEFFICIENT,
@@ -102,10 +100,9 @@ class MemberUnits:
 
 def _construction_words(construction: WallConstruction) -> str:
     return {
-        WallConstruction.CONCRETE: "concrete wall: the moment section at the face of the wall",
-        WallConstruction.MASONRY: "masonry wall: the moment section halfway between the wall's centre and its face",
-        WallConstruction.LIGHT_FRAME: "light-frame wall on a sill, treated as masonry (assumed): the moment section "
-        "halfway between the wall's centre and its face",
+        WallConstruction.CONCRETE: "concrete: moment section at the wall's face",
+        WallConstruction.MASONRY: "masonry: moment section halfway from centre to face",
+        WallConstruction.LIGHT_FRAME: "light-frame on a sill, as masonry: moment section halfway from centre to face",
     }[construction]
 
 
@@ -116,7 +113,7 @@ def _construction_words(construction: WallConstruction) -> str:
 
 def concrete_blocks(project: Project, report: WallReport, fmt: Formatter) -> list[Block] | None:
     """The blocks of the wall's concrete design sheet, or None without a concrete section."""
-    from . import Heading, KeyValues, Verdict, formula, plain
+    from . import Heading, Para, Verdict, formula, mark_assumed, plain
 
     result = report.result
     concrete = project.concrete
@@ -141,23 +138,30 @@ def concrete_blocks(project: Project, report: WallReport, fmt: Formatter) -> lis
     blocks: list[Block] = [
         Heading(plain(title)),
         Verdict(passes_across and passes_along, f"The footing {words} as a concrete member: " + ", ".join(parts) + "."),
-        KeyValues(
-            (
-                (formula("f'_{c} / f_{y}"), f"{u.stress(concrete.fc)} / {u.stress(concrete.fy)}"),
-                ("Cover to the bottom bars", u.small(concrete.cover, 1 if u.us else 0)),
-                ("λ (lightweight factor)", f"{concrete.lam:g}"),
-                ("Footing B × h", f"{fmt.length(result.width)} × {fmt.length(result.thickness)}"),
-                ("Wall", plain(_construction_words(wall.construction))),
-                ("Reinforcement", "plain concrete (ACI 318-19 chapter 14)" if grid.plain else _given_words(wall)),
+        Para(
+            formula(
+                f"f'_{{c}} = {u.stress(concrete.fc)}, f_{{y}} = {u.stress(concrete.fy)}, cover {u.small(concrete.cover, 1 if u.us else 0)}, "
+                f"λ = {concrete.lam:g}; footing B × h = {fmt.length(result.width)} × {fmt.length(result.thickness)}; "
+            )
+            + plain(
+                mark_assumed(project, _wall_path(project, wall, "construction"), _construction_words(wall.construction))
+                + "; "
+                + ("plain concrete (ACI 318-19 chapter 14)" if grid.plain else _given_words(wall))
+                + f". Loads: the strength combinations of {concrete.strength_method.title} (listed in the design "
+                "basis); W and E are nominal loads, so 1.0W and 1.0E."
             ),
-            columns=2,
+            "small",
         ),
-        *strength_combination_blocks(project),
     ]
     blocks += _across(project, report, fmt, u, grid, flexure, shear)
     if along is not None:
         blocks += _along(report, fmt, u, *along)
     return blocks
+
+
+def _wall_path(project: Project, wall: Any, name: str) -> str:
+    index = next((k for k, w in enumerate(project.walls) if w.id == wall.id), -1)
+    return f"walls[{index}].{name}"
 
 
 def _given_words(wall: Any) -> str:
@@ -185,7 +189,7 @@ def strength_combination_blocks(project: Project) -> list[Block]:
     names = "; ".join(c.name for c in combos)
     return [
         Para(
-            plain(f"Strength combinations ({concrete.strength_method.title}): ")
+            plain(f"{concrete.strength_method.title}: ")
             + plain(names)
             + formula(
                 ". W and E are the ASCE 7 nominal loads (the ASD combinations apply 0.6W and 0.7E), so these "
@@ -226,10 +230,7 @@ def _across(
             formula("q_{max} − f_{D} W / (B L_{f})"),
             f"{u.q(q_peak)} − {fmt.carried(own, Kind.FORCE)} / ({B} × {L})",
             u.q(rec.q_u),
-            formula(
-                f"net pressure of the factored wall loads at the most loaded point, {case_text}; the footing's own weight "
-                "and the soil on it go straight to the soil"
-            ),
+            formula(f"most loaded point, {case_text}; own weight and soil cover go straight to the soil"),
             clause="ACI 13.2.6.1",
         ),
     ]
@@ -240,7 +241,7 @@ def _across(
                 formula("(B − t_{w}) / 2"),
                 f"({B} − {fmt.decimal(t_w)}) / 2",
                 fmt.decimal(c),
-                "edge of the footing to the face of the wall",
+                "",
                 clause="Table 13.2.7.1",
             )
         )
@@ -251,7 +252,7 @@ def _across(
                 formula(f"(B − t_{{w}}) / 2 + {MASONRY_SECTION:g} t_{{w}}"),
                 f"({B} − {fmt.decimal(t_w)}) / 2 + {MASONRY_SECTION:g} × {fmt.decimal(t_w)}",
                 fmt.decimal(c),
-                "edge of the footing to halfway between the wall's centre and its face",
+                "",
                 clause="Table 13.2.7.1",
             )
         )
@@ -314,14 +315,6 @@ def _reinforced(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, flexure:
             clause="",
         ),
         Equation(
-            formula("s_{max}"),
-            formula(f"min({MAX_SPACING_THICKNESSES:g} h, {u.small(MAX_SPACING, 0)})"),
-            f"min({MAX_SPACING_THICKNESSES:g} × {h_in}, {u.small(MAX_SPACING, 0)})",
-            u.small(float(design.max_spacing), 1),
-            plain(f"s = {u.small(spacing, 1)}"),
-            clause="7.7.2.3",
-        ),
-        Equation(
             formula("φM_{n}"),
             formula("φ A_{s} f_{y} (d − a/2)"),
             None,
@@ -355,8 +348,8 @@ def _reinforced(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, flexure:
             numbers,
             u.shear(float(design.shear_capacity)),
             formula(
-                f"ρ_{{w}} = A_{{s,prov}} / (b d) = {rho * (1.0 if u.us else 1.0):.5f}; λ_{{s}} neglected for a footing (13.2.6.2); "
-                f"φ = {phi:g}" + (" (21.2.4.3, seismic design category D to F)" if phi < 0.75 else " (Table 21.2.1)")
+                f"ρ_{{w}} = {rho:.5f}; λ_{{s}} = 1 (13.2.6.2); φ = {phi:g}"
+                + (" (21.2.4.3, SDC D to F)" if phi < 0.75 else " (Table 21.2.1)")
             ),
             clause="22.5.5.1(c)",
         )
@@ -375,7 +368,7 @@ def _reinforced(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, flexure:
             formula("c − cover"),
             f"{u.small(c)} − {u.small(grid_cover(result))}",
             u.small(float(design.development_available)),
-            "from the moment section to the bar's end, less the end cover",
+            "",
             clause="25.4.2.4",
         ),
     ]
@@ -568,14 +561,13 @@ def _along(
         Heading("Along the length: the footing as a beam", 2),
         Para(
             formula(
-                f"Governing strength case {case.combination.name}{direction}. Loads on the beam: the factored self weight "
-                f"over L_{{f}}, the wall's factored loads where they act, {how}; the rigid-footing soil pressure balances "
-                "them. Bars: at least A_{s,min} = 0.0018 B h (7.6.1.1) and two bars, fitting in the width (25.2.1); one-way "
-                "shear |V| ≤ φV_{c} (22.5.5.1) at every point, with ρ_{w} of the face in tension there."
+                f"{case.combination.name}{direction} governs. Loads: factored self weight over L_{{f}}, the wall's factored "
+                f"loads, {how}, against the rigid-footing soil pressure. Bars: A_{{s}} ≥ 0.0018 B h (7.6.1.1), two at least, "
+                "fitting the width (25.2.1); |V| ≤ φV_{c} (22.5.5.1) everywhere."
             ),
             "small",
         ),
-        beam_drawing(diagram, fmt, CONTENT_WIDTH, 150.0, f"{case.combination.name}{direction}"),
+        beam_drawing(diagram, fmt, CONTENT_WIDTH, 96.0, f"{case.combination.name}{direction}"),
         Group(
             (
                 Table(

@@ -27,25 +27,29 @@ class RenderedPackage:
     pages: list[str]
 
     def subject(self, index: int) -> str:
-        """The sheet subject printed in the title block of page ``index`` (0-based)."""
-        m = re.search(r"Sheet subject (.*?) Sheet Sheet \d+ of \d+", self.pages[index])
+        """The sheet subject printed in the title strip of page ``index`` (0-based): the strip is drawn last,
+        its sheet number and subject at the very end of the page's text."""
+        m = re.search(r"Sheet \d+ of \d+ (.*)$", self.pages[index])
         assert m, f"no sheet subject on page {index + 1}"
         return m.group(1)
 
     def pages_of(self, subject: str) -> list[str]:
-        return [p for i, p in enumerate(self.pages) if self.subject(i) == subject]
+        """The pages of ``subject``, or of every subject it heads ("Wall N1" is "Wall N1: stability" and
+        "Wall N1: concrete")."""
+        return [p for i, p in enumerate(self.pages) if self.subject(i) in (subject,) or self.subject(i).startswith(subject + ":")]
 
     def text_of(self, subject: str) -> str:
         """The text of the subject's sheets without their title blocks, so sentences run on across sheets."""
         return " ".join(body(p) for p in self.pages_of(subject))
 
 
-TITLE_BLOCK_START = "Engineer's seal and signature"
+TITLE_BLOCK_START = "Job "
 
 
 def body(page: str) -> str:
-    """A page's text before its title block (the title block is drawn last, when the PDF is saved)."""
-    return page[: page.index(TITLE_BLOCK_START)].strip()
+    """A page's text before its title strip (the strip is drawn last, when the PDF is saved; it starts with
+    the job number)."""
+    return page[: page.rindex(TITLE_BLOCK_START)].strip()
 
 
 def page_texts(pdf: bytes) -> list[str]:

@@ -162,12 +162,12 @@ def test_schedule_and_headings_show_the_label_cut_short(long_label_package: list
 def test_inputs_print_the_labels_and_name_in_full(long_label_package: list[str]) -> None:
     text = squeezed(" ".join(body(p) for p in long_label_package))
     assert "Walllabelinfull:" + "W" * LONG + "Loads" in text
-    assert "Labelofload1infull:" + "L" * LONG + "Resultant" in text
+    assert "Labelofload1infull:" + "L" * LONG + "P=w" in text
     assert "Projectinfull:" + "N" * LONG + "Thispackagecovers" in text
 
 
 def test_title_block_fits_the_long_project_name_on_one_line(long_label_package: list[str]) -> None:
     for page in long_label_package:
-        title_block = page[page.index(TITLE_BLOCK_START) :]
-        name = title_block.split(" Project ", 1)[1].split(" Project number ", 1)[0]
+        title_strip = page[page.rindex(TITLE_BLOCK_START) :]
+        name = title_strip.split(" by ", 1)[0].rsplit(" ", 1)[1]  # the project's name ends the strip's first field
         assert name.endswith("N…") and set(name[:-1]) == {"N"}

@@ -9,6 +9,7 @@ from __future__ import annotations
 
 import io
 import os
+import re
 import subprocess
 import sys
 from pathlib import Path
@@ -57,20 +58,24 @@ def test_wall_subset(demo_document) -> None:
     """--walls C3,N1 gives sheets for those walls only, in that order, and says so on the cover."""
     package = render(demo_document, wall_ids=["C3", "N1"])
     subjects = list(dict.fromkeys(package.subject(i) for i in range(len(package.pages))))
-    walls = [s for s in subjects if s.startswith("Wall ")]
+    walls = list(dict.fromkeys(s.split(":")[0] for s in subjects if s.startswith("Wall ")))
     assert walls == ["Wall C3", "Wall N1"]
-    assert [s for s in subjects if s.startswith("Appendix")] == ["Appendix, wall C3", "Appendix, wall N1"]
-    assert "This package covers 2 walls of the project's 4: C3, N1." in package.pages[0]
+    assert [s for s in subjects if s.startswith("Appendix")] == ["Appendix: all cases"]
+    appendix = package.text_of("Appendix: all cases")
+    assert appendix.index("Wall C3: ") < appendix.index("Wall N1: ")
+    n = len(demo_document.project.walls)
+    assert f"This package covers 2 walls of the project's {n}: C3, N1." in package.pages[0]
     schedule = package.text_of("Summary schedule")
     assert "S2" not in schedule and "E4" not in schedule
     total = len(package.pages)
-    assert package.pages[-1].endswith(f"Sheet {total} of {total}")
+    assert f"Sheet {total} of {total} " in package.pages[-1]
 
 
 def test_wall_subset_as_comma_text(demo_document) -> None:
     """The ids may come as the command line's comma-separated text."""
     package = render(demo_document.project, wall_ids="E4, S2")
-    walls = [s for s in dict.fromkeys(package.subject(i) for i in range(len(package.pages))) if s.startswith("Wall ")]
+    subjects = [package.subject(i) for i in range(len(package.pages))]
+    walls = list(dict.fromkeys(s.split(":")[0] for s in subjects if s.startswith("Wall ")))
     assert walls == ["Wall E4", "Wall S2"]
 
 
@@ -92,12 +97,11 @@ def test_failing_wall_is_reported_failing_in_words(demo: RenderedPackage, demo_d
     sheets = demo.text_of("Wall C3")
     assert "Wall C3 FAILS bearing" in sheets
     assert "Soil bearing FAILS: qa / qmax = " in sheets
-    assert "The wall FAILS: the footing must be revised." in sheets
     assert "The current footing (1'-4\" × 1'-0\") FAILS" in sheets
     assert "FAILS: bearing" in demo.text_of("Summary schedule")
-    assert "1 of 4 walls FAILS on its current footing: C3." in demo.pages[0]
+    assert f"1 of {len(project.walls)} walls FAILS on its current footing: C3." in demo.pages[0]
     # and a passing wall is not reported failing
-    assert "Wall N1 PASSES every check (overturning, sliding, bearing, embedment)" in demo.text_of("Wall N1")
+    assert "Wall N1 PASSES every check (overturning, sliding, bearing, embedment" in demo.text_of("Wall N1")
     assert "FAILS" not in demo.text_of("Wall N1")
 
 
@@ -162,7 +166,7 @@ def test_service_method_marks_checks_that_do_not_apply(demo_document) -> None:
     case = next(c for c in check_wall(project, project.walls[0]).cases if c.combination == "D + L")
     assert case.overturning is None and case.sliding is None and case.bearing is not None  # engine: bearing only
     n = format_quantity(case.vertical, Kind.FORCE, "US").removesuffix(" kip")
-    appendix = package.text_of("Appendix, wall N1")
+    appendix = package.text_of("Appendix: all cases")
     assert f"D + L none {n} 0.00 0.00 0.000 n/a n/a n/a n/a n/a" in appendix
     assert "n/a: the combination does not apply to that check." in appendix  # the key explains the mark it uses
 
@@ -262,8 +266,8 @@ def test_command_line_report(tmp_path: Path) -> None:
     )
     assert done.returncode == 0, done.stderr
     texts = page_texts(out.read_bytes())
-    assert any("Sheet subject Wall C3 " in t for t in texts)
-    assert not any("Sheet subject Wall N1 " in t for t in texts)
+    assert any(re.search(r"Sheet \d+ of \d+ Wall C3: ", t) for t in texts)
+    assert not any(re.search(r"Sheet \d+ of \d+ Wall N1: ", t) for t in texts)
     bad = subprocess.run(
         [sys.executable, "-m", "kernline.app.cli", "report", str(demo), "-o", str(out), "--walls", "Q7"],
         capture_output=True,
