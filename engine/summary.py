@@ -27,6 +27,7 @@ from .results import Governing, WallResult
 from .sizing import SizingResult
 from .units import Kind, display_factor, format_length, format_quantity, unit_label
 
+MOMENT_DECIMALS = 1  # a wall's overturning moments in kip·ft or kN·m: tenths are plenty (common practice)
 NO_DEMAND = "no demand"
 NO_EQUILIBRIUM = "no equilibrium"
 OUTSIDE_BOUNDS = "outside the sizing bounds"
@@ -131,7 +132,7 @@ def _close(a: float | None, b: float) -> bool:
 def comparison_text(g: Governing, result: WallResult, units: str) -> str:
     """The demand against the capacity of ``g``, from its record, in the project's units.
 
-    "1,720 of 2,000 psf allowable" (bearing), "43.20 against 118.00 kip·ft resisting" (overturning:
+    "1,720 of 2,000 psf allowable" (bearing), "43.2 against 118.0 kip·ft resisting" (overturning:
     the overturning moment against the resisting one about the toe), "3.10 against 4.12 kip resisting"
     (sliding: the shear against the resistance), "depth 2'-0\", 1'-6\" required" (embedment),
     "Mu 0.70 of φMn 38.40 kip·ft/ft" (flexure), "Vu 2.10 of φVc 9.32 kip/ft" (one-way shear). A
@@ -147,7 +148,8 @@ def comparison_text(g: Governing, result: WallResult, units: str) -> str:
     if r is None:
         return f"ratio {g.ratio:.2f} of {g.required:.2f} required"
     if hasattr(r, "resisting") and hasattr(r, "moment"):  # overturning, about the toe
-        return _of(q(r.moment, Kind.MOMENT, units), q(r.resisting, Kind.MOMENT, units), "against") + " resisting"
+        moments = (q(r.moment, Kind.MOMENT, units, MOMENT_DECIMALS), q(r.resisting, Kind.MOMENT, units, MOMENT_DECIMALS))
+        return _of(*moments, "against") + " resisting"
     if hasattr(r, "resistance") and hasattr(r, "force"):  # sliding
         return _of(q(abs(r.force), Kind.FORCE, units), q(r.resistance, Kind.FORCE, units), "against") + " resisting"
     if hasattr(r, "pressure_compared") and hasattr(r, "allowable"):  # bearing
@@ -167,12 +169,11 @@ def comparison_text(g: Governing, result: WallResult, units: str) -> str:
                 f"ℓd {format_length(r.development_length, units)} with "
                 f"{format_length(max(r.development_available, 0.0), units)} available"
             )
-        limit = getattr(r, "message", "") or (
-            "the least thickness of a plain footing (ACI 318-19 14.3.2.1)"
-            if r.plain
-            else "As,min, bar spacing, d or εt (ACI 318-19 7.6.1.1, 7.7.2.3, 13.3.1.2, 7.3.3.1)"
-        )
-        return f"{shown}; limited by {limit}"
+        # another requirement sets the ratio; the record names it only when it fails ("message"), so
+        # the ratio comes first and the moments after it
+        rules = "h ≥ 8 in or the IBC 2021 1905.6.2 bars" if r.plain else "As,min, bar spacing, d or εt"
+        limit = getattr(r, "message", "") or f"ratio {g.ratio:.2f} by {rules}"
+        return f"{limit} ({shown})"
     if hasattr(r, "shear_capacity") and hasattr(r, "shear"):  # one-way shear across the width
         return _of(f"Vu {_per_length(r.shear, Kind.FORCE, units)}", f"φVc {_per_length(r.shear_capacity, Kind.FORCE, units)}")
     return f"ratio {g.ratio:.2f} of {g.required:.2f} required"

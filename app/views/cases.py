@@ -1,11 +1,20 @@
-"""Every combination and direction of the selected wall in a sortable table (engine numbers, formatted)."""
+"""Every combination and direction of the selected wall in a sortable table (engine numbers, formatted).
+
+With a concrete section the footing's strength combinations follow the service ones, marked
+"strength": their loads on the soil, and the flexure and one-way shear of the footing, which are judged
+at the most loaded strength case, shown on that case's row with the transverse bars
+("0.27 ✗ · #5 @ 12 in entered"). A ratio that is no number is said in words: "no demand", "no
+equilibrium"; "—" where a check does not apply to the row's combination.
+"""
 
 from __future__ import annotations
 
 import math
 from typing import Any
 
-from kernline.engine.results import WallResult
+from kernline.engine.results import Governing, WallResult
+from kernline.engine.schedule import ENTERED, bars_in_units, transverse_entered
+from kernline.engine.summary import NO_DEMAND, state_words
 from kernline.engine.units import Kind
 from PySide6.QtCore import QModelIndex, QSortFilterProxyModel, Qt, Signal
 from PySide6.QtGui import QBrush, QColor, QStandardItem, QStandardItemModel
@@ -17,6 +26,7 @@ from .fields import FORCE, LONG, PRESSURE, trim, unit_factor
 SORT_ROLE = Qt.ItemDataRole.UserRole + 1
 FIRST_CHECK_COLUMN = 6  # after combination, direction, N, V, e and q max
 CASE_ROLE = Qt.ItemDataRole.UserRole + 2
+STRENGTH_WORD = "strength"  # after a strength combination's name: its row is the footing's own design
 
 
 class CasesModel(QStandardItemModel):
@@ -36,6 +46,8 @@ class CasesModel(QStandardItemModel):
         q_unit = PRESSURE[0] if us else PRESSURE[1]
         f_q = unit_factor(q_unit, Kind.PRESSURE)
         per_case = [c for c in result.table.checks if c.per_case]
+        strength_table, strength_ev = result.strength_table, result.strength_evaluation
+        strength = list(strength_table.checks) if strength_table is not None and strength_ev is not None else []
         headers = [
             "Combination",
             "Dir.",
@@ -44,6 +56,7 @@ class CasesModel(QStandardItemModel):
             f"e ({LONG[0] if us else LONG[1]})",
             f"q max ({q_unit})",
             *[c.title for c in per_case],
+            *[c.title for c in strength],
             "Result",
         ]
         ev = result.evaluation
@@ -78,15 +91,61 @@ class CasesModel(QStandardItemModel):
                 ok = ok and r.passes
                 mark = OK_MARK if r.passes else NG_MARK
                 if math.isinf(r.ratio):
-                    texts.append("no demand")
+                    texts.append(NO_DEMAND)
                 elif not getattr(r, "stable", True):  # the resultant beyond the footing's end
                     texts.append(f"no equilibrium {mark}")
                 else:
                     texts.append(f"{r.ratio:.2f} {mark}")
                 keys.append(r.ratio / r.required)
+            for _check in strength:  # the strength checks use the strength combinations, not this one
+                texts.append("—")
+                keys.append(math.inf)
             texts.append("OK" if ok else "NG")
             keys.append(int(ok))
             rows.append((texts, keys, ok, i))
+        if strength_table is not None and strength_ev is not None:
+            wall_bars = _bars_of(result, units)
+            governing = {c: result.governing[c] for c in strength if c in result.governing}
+            s_ecc = strength_ev.eccentricity.tolist()
+            s_vertical = strength_ev.vertical.tolist()
+            s_q = strength_ev.statics.q_max.tolist()
+            s_shear = strength_table.shear.tolist()
+            for i, case in enumerate(strength_table.cases):
+                name, direction = case.combination.name, case.direction.value
+                e, q = float(s_ecc[i]), float(s_q[i])
+                texts = [
+                    f"{name} · {STRENGTH_WORD}",
+                    direction,
+                    trim(s_vertical[i] / f_force, 2),
+                    trim(s_shear[i] / f_force, 2),
+                    trim(e / f_len, 3) if math.isfinite(e) else "∞",
+                    trim(q / f_q, 0 if us else 1) if math.isfinite(q) else "∞",
+                ]
+                keys = [
+                    name,
+                    direction,
+                    s_vertical[i],
+                    s_shear[i],
+                    e if math.isfinite(e) else math.inf,
+                    q if math.isfinite(q) else math.inf,
+                ]
+                for _check in per_case:  # the stability checks use the service combinations
+                    texts.append("—")
+                    keys.append(math.inf)
+                marks = []
+                for check in strength:
+                    g = governing.get(check)
+                    if g is None or (g.combination, g.direction or "none") != (name, direction):
+                        texts.append("")  # judged at the most loaded strength case, on that case's row
+                        keys.append(math.inf)
+                        continue
+                    texts.append(_strength_text(g, result, wall_bars))
+                    keys.append(g.ratio / g.required)
+                    marks.append(g.passes)
+                ok = all(marks)
+                texts.append(("OK" if ok else "NG") if marks else "—")
+                keys.append(int(ok) if marks else 2)
+                rows.append((texts, keys, ok or not marks, None))
         reshaped = (
             self.rowCount() != len(rows)
             or [self.headerData(c, Qt.Orientation.Horizontal) for c in range(self.columnCount())] != headers
@@ -114,6 +173,8 @@ class CasesModel(QStandardItemModel):
                         if c >= 2:
                             item.setTextAlignment(Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter)
                         self.setItem(r, c, item)
+                    if item.data(CASE_ROLE) != case_index:  # a service case's index; None on a strength row
+                        item.setData(case_index, CASE_ROLE)
                     if item.text() != text:
                         item.setText(text)
                         item.setData(keys[c], SORT_ROLE)
@@ -124,6 +185,27 @@ class CasesModel(QStandardItemModel):
         if rows:
             self.dataChanged.emit(self.index(0, 0), self.index(len(rows) - 1, len(headers) - 1))
         return reshaped
+
+
+def _bars_of(result: WallResult, units: str) -> str:
+    """The flexure record's transverse bars and where they came from, "#5 @ 12 in (entered)" ("" without)."""
+    flexure = next((g.record for c, g in result.governing.items() if c.id == "flexure"), None)
+    bars = getattr(flexure, "bars", "") or ""
+    table = result.strength_table
+    if not bars or table is None:
+        return ""
+    return f"{bars_in_units(bars, units)} ({ENTERED if transverse_entered(table.wall) else 'designed'})"
+
+
+def _strength_text(g: Governing, result: WallResult, bars: str) -> str:
+    """ "0.27 ✗ · #5 @ 12 in" for flexure; "1.45 ✓" for one-way shear; "no demand" where there is none."""
+    words = state_words(g, result)
+    if words:
+        return words
+    text = f"{g.ratio:.2f} {OK_MARK if g.passes else NG_MARK}"
+    if g.check.id == "flexure" and bars:
+        text += f" · {bars}"
+    return text
 
 
 class CasesTable(QTableView):

@@ -1,4 +1,9 @@
-"""The footing schedule of all walls (engine.schedule rows), with copy and CSV export."""
+"""The footing schedule of all walls (engine.schedule rows), with copy and CSV export.
+
+With a concrete section the rows carry the footing's bars. The bottom and top bars come from the
+engine's design along the length, tens of milliseconds a wall, which each result works out once and
+keeps: a refresh after an edit designs only the edited wall again.
+"""
 
 from __future__ import annotations
 
@@ -25,13 +30,16 @@ from ..style import WARM
 def early_columns() -> tuple[str, ...]:
     """Shown first, so the verdict stays on screen in a narrow window; copy and CSV keep the engine's order.
 
-    The wall, its result, the ratio of each registered check (as the schedule names it) and the size.
+    The wall, its result, the ratio of each registered check (as the schedule names it), the size and,
+    with a concrete section, the bars.
     """
     ratios = [f"{c.title} ratio" for c in checks()]
-    return ("Wall", "Result", *ratios, "Footing width", "Footing thickness")
+    bars = ("Transverse bars", "Bottom bars", "Top bars")
+    return ("Wall", "Result", *ratios, "Footing width", "Footing thickness", *bars)
 
 
 NOTE = "Sizes as entered; ratios are the governing case of each check."
+BARS_TIP = 'Bars as entered in the project, or designed by Kernline where none were given (the "from" columns say which).'
 
 
 class ScheduleView(QWidget):
@@ -76,8 +84,10 @@ class ScheduleView(QWidget):
             self.rows = []
             self.note.setText("Not checked yet: enter " + doc.missing_text() + ".")
         else:
-            self.rows = schedule_rows(doc.project, [doc.results[w.id] for w in doc.project.walls])
+            results = [doc.results[w.id] for w in doc.project.walls]
+            self.rows = schedule_rows(doc.project, results)
             self.note.setText(NOTE)
+            self.note.setToolTip(BARS_TIP if doc.project.concrete is not None else "")
         self.copy_button.setEnabled(bool(self.rows))
         self.export_button.setEnabled(bool(self.rows))
         self.table.setColumnCount(len(self.headers))

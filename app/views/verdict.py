@@ -1,9 +1,16 @@
-"""The verdict: each registered check's governing ratio against its requirement, readable without colour.
+"""The verdict: each check of the engine's results as a demand against a capacity, with its margin.
 
-Each row is a ratio bar (ratio / required, with a tick at 1.0; a failing bar is also hatched) and
-text: "2.75 ≥ 1.00  ✓ OK  0.6D + 0.6W (+)". A geometric check (embedment) has no governing case: its
-row reads "depth 2'-0" ≥ 1'-6"  ✓ OK  required: below frost (IBC 2021 1809.5)" and names the rule that sets the depth. The rows are the
-checks of the engine's results, in the registry's order; the numbers are the engine's.
+One row per check, in the registry's order, readable without colour:
+
+    Bearing        1,043 of 2,000 psf allowable      ✓ OK, 47% margin    1.063D + 0.75L + 0.525E + 0.75S (+)
+    Flexure        ℓd 1'-4 3/4" of 4 1/2" available  ✗ NG, 73% short     1.32D + 1.0E + L + 0.2S (+) · #5 @ 12 in entered
+
+The demand and capacity are the check record's numbers in the project's units (engine.summary.
+comparison_text); the margin is the share of the usable capacity left (or lacking) at the governing
+case (engine.summary.margin_text); the last column names the governing case (a geometric check such as
+embedment names the rule that sets its requirement instead) and, for the footing's strength checks,
+the transverse bars and whether they were entered or designed by Kernline. A check with nothing to
+resist says "no demand"; a case whose resultant leaves the footing says "no equilibrium".
 """
 
 from __future__ import annotations
@@ -12,91 +19,83 @@ import math
 from typing import Any
 
 from kernline.engine.model import LateralLoad, Wall
-from kernline.engine.registry import Check
+from kernline.engine.registry import Check, Family
 from kernline.engine.results import Governing, WallResult
+from kernline.engine.schedule import ENTERED, bars_in_units, transverse_entered
 from kernline.engine.stability import table_checks
-from kernline.engine.summary import case_text
-from kernline.engine.units import format_length
-from PySide6.QtCore import QRectF, QSize, Qt
-from PySide6.QtGui import QBrush, QColor, QPainter, QPalette, QPen
+from kernline.engine.summary import (
+    NO_DEMAND,
+    NO_EQUILIBRIUM,
+    case_text,
+    comparison_text,
+    margin,
+    margin_text,
+    state_words,
+)
+from PySide6.QtCore import QSize, Qt
+from PySide6.QtGui import QColor, QPainter, QPalette
 from PySide6.QtWidgets import QGridLayout, QLabel, QSizePolicy, QVBoxLayout, QWidget
 
-from ..style import ACCENT, GRAPHITE, HAIRLINE, MUTED, WARM, mark
+from ..style import GRAPHITE, MUTED, NG_MARK, NO_DEMAND_MARK, OK_MARK, WARM
 
-BAR_SPAN = 2.0  # the bar's full width is twice the requirement
-
-
-def ratio_text(g: Governing) -> str:
-    if math.isinf(g.ratio):
-        return "no demand"
-    sign = "≥" if g.passes else "<"
-    return f"{g.ratio:.2f} {sign} {g.required:.2f}"
+CASE_FONT_SCALE = 0.92  # the case column is secondary: a little smaller, and muted
+CASE_MIN_WIDTH = 150  # px: a long demand-against-capacity text is elided before the case column is
 
 
-def _stable(result: WallResult, g: Governing) -> bool:
-    """Whether the governing case has equilibrium on the soil (the engine's evaluation, per case)."""
-    stable = result.evaluation.stable
-    return g.case_index is None or not 0 <= g.case_index < len(stable) or bool(stable[g.case_index])
+def verdict_words(g: Governing, result: WallResult) -> str:
+    """ "✓ 47% margin", "✗ 12% short", "✗ NG" (no equilibrium: no margin to give) or "–" (no demand).
+
+    The symbol and the word ("margin" or "short") each tell pass from fail without colour."""
+    words = state_words(g, result)
+    if words == NO_DEMAND:
+        return NO_DEMAND_MARK
+    if words == NO_EQUILIBRIUM:
+        return f"{NG_MARK} NG"
+    return f"{OK_MARK if g.passes else NG_MARK} {margin_text(g.ratio, g.required, g.passes)}"
 
 
-def depth_texts(g: Governing, units: str) -> tuple[str, str] | None:
-    """An embedment-style record (depth, required depth, frost depth) as (ratio words, rule words); None otherwise."""
+def depth_rule(g: Governing) -> str | None:
+    """The rule that sets an embedment-style requirement (depth, required depth, frost depth); None otherwise."""
     record: Any = g.record
-    depth = getattr(record, "depth", None)
     need = getattr(record, "required_depth", None)
-    if depth is None or need is None:
+    if getattr(record, "depth", None) is None or need is None:
         return None
-    sign = "≥" if g.passes else "<"
-    ratio = f"depth {format_length(depth, units)} {sign} {format_length(need, units)}"
     frost = getattr(record, "frost_depth", None)
     if frost is not None and frost >= need - 1e-12:
-        rule = "required: below frost (IBC 2021 1809.5)"
-    else:
-        rule = "required: 12 in (IBC 2021 1809.4)"
-    return ratio, rule
+        return "below frost (IBC 2021 1809.5)"
+    return "12 in minimum (IBC 2021 1809.4)"
 
 
-class RatioBar(QWidget):
-    """ratio / required as a bar with a tick at 1.0; hatched when failing."""
+def bars_words(wall: Wall, g: Governing, result: WallResult, units: str) -> str:
+    """The transverse bars of the footing (the flexure record's, shared by the strength checks) and
+    where they came from, "#5 @ 12 in (entered)" or "#4 @ 9 in (designed)"; "" for the other checks
+    and where a strength check has no demand."""
+    if g.check.family is not Family.STRENGTH or state_words(g, result):
+        return ""
+    flexure = next((f.record for c, f in result.governing.items() if c.id == "flexure"), None)
+    bars = getattr(flexure, "bars", None)
+    if not bars:
+        return ""
+    return f"{bars_in_units(bars, units)} ({ENTERED if transverse_entered(wall) else 'designed'})"
 
-    def __init__(self, parent: QWidget | None = None) -> None:
-        super().__init__(parent)
-        self.normalized = 0.0
-        self.passes = True
-        self.no_demand = False
-        self.setMinimumWidth(90)
-        self.setSizePolicy(QSizePolicy.Policy.Expanding, QSizePolicy.Policy.Fixed)
+
+class _Elided(QLabel):
+    """A one-line label that gives way to its neighbours: it paints its text elided ("…") where the
+    column is narrow, and its tooltip holds the whole."""
+
+    def minimumSizeHint(self) -> QSize:  # noqa: N802 - Qt's name
+        return QSize(60, self.fontMetrics().height())
 
     def sizeHint(self) -> QSize:  # noqa: N802 - Qt's name
-        return QSize(160, 16)
-
-    def set_value(self, normalized: float, passes: bool) -> None:
-        self.no_demand = math.isinf(normalized)
-        self.normalized = 0.0 if self.no_demand else max(0.0, normalized)
-        self.passes = passes
-        self.update()
+        return QSize(self.fontMetrics().horizontalAdvance(self.text()) + 2, self.fontMetrics().height())
 
     def paintEvent(self, _event) -> None:  # noqa: N802 - Qt's name
-        p = QPainter(self)
-        p.setRenderHint(QPainter.RenderHint.Antialiasing, False)
-        w, h = self.width() - 1, self.height() - 1
-        p.setPen(QPen(QColor(HAIRLINE)))
-        p.setBrush(Qt.BrushStyle.NoBrush)
-        p.drawRect(0, 2, w, h - 4)
-        if not self.no_demand:
-            fraction = min(self.normalized / BAR_SPAN, 1.0)
-            colour = QColor(ACCENT if self.passes else WARM)
-            p.setPen(Qt.PenStyle.NoPen)
-            p.setBrush(QBrush(colour, Qt.BrushStyle.SolidPattern if self.passes else Qt.BrushStyle.BDiagPattern))
-            p.drawRect(QRectF(1, 3, max(0.0, fraction * (w - 1)), h - 5))
-            if not self.passes:
-                p.setPen(QPen(colour))
-                p.setBrush(Qt.BrushStyle.NoBrush)
-                p.drawRect(QRectF(1, 3, max(0.0, fraction * (w - 1)), h - 5))
-        tick = int(w / BAR_SPAN)
-        p.setPen(QPen(QColor(GRAPHITE), 2))
-        p.drawLine(tick, 0, tick, h)
-        p.end()
+        painter = QPainter(self)
+        painter.setPen(self.palette().color(QPalette.ColorRole.WindowText))
+        painter.setFont(self.font())
+        shown = self.fontMetrics().elidedText(self.text(), Qt.TextElideMode.ElideRight, self.width())
+        painter.drawText(self.rect(), int(Qt.AlignmentFlag.AlignLeft | Qt.AlignmentFlag.AlignVCenter), shown)
+        painter.end()
 
 
 class VerdictView(QWidget):
@@ -110,11 +109,10 @@ class VerdictView(QWidget):
         self.headline.setWordWrap(True)
         self.grid = QGridLayout()
         self.grid.setContentsMargins(0, 0, 0, 0)
-        self.grid.setHorizontalSpacing(10)
-        self.grid.setVerticalSpacing(0)  # the bars keep 2 px above and below: rows stay apart
-        self.grid.setColumnStretch(1, 2)
-        self.grid.setColumnStretch(4, 3)
-        self.rows: dict[Check, tuple[QLabel, RatioBar, QLabel, QLabel, QLabel]] = {}
+        self.grid.setHorizontalSpacing(9)
+        self.grid.setVerticalSpacing(1)
+        self.grid.setColumnStretch(3, 1)  # the case column takes what is left
+        self.rows: dict[Check, tuple[QLabel, QLabel, QLabel, QLabel]] = {}
         self.hint = _Hint(self)
         self.hint.setObjectName("hint")
         self.hint.setWordWrap(True)
@@ -139,21 +137,25 @@ class VerdictView(QWidget):
         for r, check in enumerate(checks):
             name = QLabel(check.title)
             name.setToolTip(f"{check.title}: {check.ratio_words} ({check.basis})")
-            bar = RatioBar()
-            ratio = QLabel()
-            ratio.setObjectName(f"ratio_{check.id}")
+            statement = _Elided()
+            statement.setObjectName(f"ratio_{check.id}")
+            # as wide as its text where there is room; elided before it could widen the window
+            statement.setSizePolicy(QSizePolicy.Policy.Preferred, QSizePolicy.Policy.Preferred)
             verdict = QLabel()
             verdict.setObjectName(f"mark_{check.id}")
-            case = QLabel()
+            case = _Elided()
             case.setObjectName(f"case_{check.id}")
             case.setStyleSheet(f"color: {MUTED};")
+            small = case.font()
+            small.setPointSizeF(small.pointSizeF() * CASE_FONT_SCALE)
+            case.setFont(small)
             # the case column takes the room that is left: it never widens the window (its tooltip has it all)
             case.setSizePolicy(QSizePolicy.Policy.Ignored, QSizePolicy.Policy.Preferred)
-            case.setMinimumWidth(60)
-            for c, widget in enumerate((name, bar, ratio, verdict, case)):
+            case.setMinimumWidth(CASE_MIN_WIDTH)
+            for c, widget in enumerate((name, statement, verdict, case)):
                 self.grid.addWidget(widget, r, c)
                 widget.setVisible(self.checked)
-            self.rows[check] = (name, bar, ratio, verdict, case)
+            self.rows[check] = (name, statement, verdict, case)
         # never squeezed below its rows (six with the concrete checks): the tabs under it give way
         layout = self.layout()
         if layout is not None:
@@ -161,7 +163,7 @@ class VerdictView(QWidget):
             self.setMinimumHeight(layout.minimumSize().height())
 
     def render_unchecked(self, wall: Wall, missing: str) -> None:
-        """The project cannot be checked (site values missing): say so, and what to enter, in place of ratios."""
+        """The project cannot be checked (site values missing): say so, and what to enter, in place of results."""
         for row in self.rows.values():
             for widget in row:
                 widget.hide()
@@ -180,37 +182,72 @@ class VerdictView(QWidget):
             self.checked = True
         self._set_checks(tuple(result.governing))
         for check, g in result.governing.items():
-            name, bar, ratio, verdict, case = self.rows[check]
-            bar.set_value(g.normalized, g.passes)
-            no_demand = math.isinf(g.ratio)
-            depth = depth_texts(g, units)
-            if depth is not None:  # a geometric check: the depths themselves, and the rule that sets the requirement
-                ratio.setText(depth[0])
-                case.setText(depth[1])
-                case.setToolTip(
-                    f"Depth of the footing's bottom below grade (soil cover + t_f) {depth[0].removeprefix('depth ')}; " + depth[1]
-                )
+            _name, statement, verdict, case = self.rows[check]
+            said = comparison_text(g, result, units)
+            statement.setText(said)
+            ratio = "no ratio" if state_words(g, result) else f"ratio {g.ratio:.2f}, {g.required:.2f} required"
+            statement.setToolTip(f"{check.title}: {said} ({ratio}; {check.ratio_words})")
+            verdict.setText(verdict_words(g, result))
+            rule = depth_rule(g)
+            if rule is not None:  # a geometric check: the rule that sets the requirement
+                case.setText(rule)
+                case.setToolTip(f"Depth of the footing's bottom below grade (soil cover + t_f): {said}; {rule}")
             else:
-                # an unstable case has no pressure to compare: the resultant falls beyond the footing's end
-                unstable = g.ratio == 0.0 and not _stable(result, g)
-                ratio.setText("no equilibrium" if unstable else ratio_text(g))
-                case.setText(case_text(g))
-                case.setToolTip(f"Governing case: {case_text(g)}" if case_text(g) else "")
-            # "no demand" is said once, by the ratio; the mark column keeps only its symbol
-            verdict.setText(mark(None).split()[0] if no_demand else mark(g.passes))
+                where = case_text(g)
+                bars = bars_words(wall, g, result, units)
+                # bars first: short, and what a designed footing's reader looks for; the case may be elided
+                case.setText(" · ".join(part for part in (bars, where) if part))
+                tip = f"Governing case: {where}" if where else ""
+                if bars:
+                    tip += ("; " if tip else "") + f"transverse bars {bars}"
+                case.setToolTip(tip)
             _set_colour(verdict, WARM if not g.passes else GRAPHITE, bold=True)
-        worst = result.worst
-        if result.passes:
-            self.headline.setText(f"Wall {wall.id}: {mark(True)} — every check meets its required ratio")
+        along = along_words(result)
+        whole = result.passes_all  # the design along the length included
+        if whole:
+            self.headline.setText(f"Wall {wall.id}: {OK_MARK} OK — every check meets its required ratio" + _least(result))
         else:
             failing = [c.title.lower() for c, g in result.governing.items() if not g.passes]
-            self.headline.setText(f"Wall {wall.id}: {mark(False)} — {_listing(failing)} below the required ratio")
-        _set_colour(self.headline, GRAPHITE if result.passes else WARM, bold=True)
-        self.hint.setText(_hint(wall, result, worst))
+            said = [f"{_listing(failing)} below the required ratio"] if failing else []
+            if not result.passes_along:
+                said.append("the footing fails along its length")
+            self.headline.setText(f"Wall {wall.id}: {NG_MARK} NG — " + "; ".join(said))
+        _set_colour(self.headline, GRAPHITE if whole else WARM, bold=True)
+        self.hint.setText(" ".join(part for part in (along, _hint(wall, result)) if part))
 
     def texts(self) -> dict[str, tuple[str, str, str]]:
-        """Shown text per check id: (ratio, mark, case)."""
-        return {c.id: (row[2].text(), row[3].text(), row[4].text()) for c, row in self.rows.items()}
+        """Shown text per check id: (demand against capacity, verdict and margin, case)."""
+        return {c.id: (row[1].text(), row[2].text(), row[3].text()) for c, row in self.rows.items()}
+
+
+def along_words(result: WallResult) -> str:
+    """The bars along the length and whether the footing carries its strength cases as a beam, from
+    the engine's design along the length ("" without a concrete design): "Along L_f: bottom 3 #5
+    (entered), top 2 #4 (designed) — carries its strength cases." or "... — fails: <the engine's words>"."""
+    along = result.along
+    if along is None:
+        return ""
+    design = along[0]
+    given = result.table.wall.footing.reinforcement
+    faces = []
+    for face, faced in (("bottom", design.bottom), ("top", design.top)):
+        if faced.bars:
+            entered = given is not None and getattr(given, face) is not None
+            faces.append(f"{face} {faced.bars} ({ENTERED if entered else 'designed'})")
+    bars = ", ".join(faces) or "no bars"
+    verdict = "carries its strength cases" if design.passes else f"fails: {design.message}"
+    return f"Along L_f: {bars} — {verdict}."
+
+
+def _least(result: WallResult) -> str:
+    """ "; least margin 14% (bearing)": the check closest to its requirement ("" when none has demand)."""
+    loaded = [g for g in result.governing.values() if not math.isinf(g.ratio)]
+    if not loaded:
+        return ""
+    least = min(loaded, key=lambda g: g.normalized)
+    return (
+        f"; least margin {max(0, math.floor(100.0 * margin(least.ratio, least.required) + 1e-9))}% ({least.check.title.lower()})"
+    )
 
 
 class _Hint(QLabel):
@@ -241,11 +278,12 @@ def _set_colour(label: QLabel, colour: str, bold: bool = False) -> None:
         label.setFont(font)
 
 
-def _hint(wall: Wall, result: WallResult, worst: Governing) -> str:
-    idle = [c.title.lower() for c, g in result.governing.items() if math.isinf(g.ratio)]
+def _hint(wall: Wall, result: WallResult) -> str:
+    # the stability checks idle for want of a lateral load (a strength check's "no demand" has other causes)
+    idle = [c.title.lower() for c, g in result.governing.items() if math.isinf(g.ratio) and c.family is Family.SERVICE]
     if idle and not any(isinstance(ld, LateralLoad) for ld in wall.loads):
         verb = "has" if len(idle) == 1 else "have"
         return f"No lateral load on this wall: {_listing(idle)} {verb} no demand. Add a W or E lateral load to check them."
-    if not result.passes:
+    if not result.passes_all:
         return "Size this footing (Ctrl+M): the smallest size that passes, and the check that limits it."
     return ""

@@ -1,4 +1,10 @@
-"""The project's walls: id, footing size and the worst ratio with a pass/fail mark (text, not colour).
+"""The project's walls: id, footing size, and the check closest to failing with its margin in words.
+
+The last column reads "✓ 24% margin", "✗ 74% short", "✗ no equilibrium" or "✓ no demand": a pass/fail
+symbol and the margin (or shortfall) of the check that governs, the one closest to its limit in the
+engine's results (engine.summary). Its tooltip names that check and says its demand against its
+capacity and its governing case. A wall whose sizing found no passing size says so in its tooltip
+("outside the sizing bounds").
 
 Add, duplicate, rename (F2 or double-click the id), delete and reorder; each is one undoable command.
 """
@@ -7,7 +13,8 @@ from __future__ import annotations
 
 import math
 
-from kernline.engine.results import Governing
+from kernline.engine.results import Governing, WallResult
+from kernline.engine.summary import OUTSIDE_BOUNDS, case_text, comparison_text, margin_text, state_words
 from kernline.engine.units import format_length
 from PySide6.QtCore import Qt, QTimer
 from PySide6.QtGui import QColor
@@ -27,15 +34,31 @@ from .. import commands
 from ..document import ProjectDocument
 from ..style import GRAPHITE, MUTED, NG_MARK, OK_MARK, WARM
 
-COLUMNS = ("Wall", "Footing B × t_f", "Worst")
+COLUMNS = ("Wall", "B × t_f", "Least margin")
 
 
-def _worst_tip(worst: Governing) -> str:
-    """Which check is worst, and where (a geometric check has no case)."""
-    where = ""
-    if worst.case_index is not None and not math.isinf(worst.ratio):
-        where = f" in {worst.combination}" + ("" if worst.direction == "none" else f" ({worst.direction})")
-    return f"worst: {worst.check.title.lower()}, ratio {worst.ratio:.2f} vs required {worst.required:.2f}{where}"
+def margin_cell(result: WallResult) -> str:
+    """ "✓ 24% margin", "✗ 74% short", "✗ no equilibrium", "✓ no demand" (no check has any demand), or
+    "✗ fails along L_f" when every check passes but the design along the length does not."""
+    worst = result.worst
+    if result.passes and not result.passes_along:
+        return f"{NG_MARK} fails along L_f"
+    mark = OK_MARK if result.passes_all else NG_MARK
+    words = state_words(worst, result)
+    return f"{mark} {words or margin_text(worst.ratio, worst.required, worst.passes)}"
+
+
+def margin_tip(result: WallResult, units: str) -> str:
+    """The governing check's demand against its capacity, its ratio and its case."""
+    worst: Governing = result.worst
+    said = comparison_text(worst, result, units)
+    where = case_text(worst)
+    ratio = (
+        ""
+        if math.isinf(worst.ratio) or state_words(worst, result)
+        else f" (ratio {worst.ratio:.2f}, {worst.required:.2f} required)"
+    )
+    return f"Least margin: {worst.check.title.lower()}, {said}{ratio}" + (f" in {where}" if where else "")
 
 
 class WallsView(QWidget):
@@ -51,14 +74,17 @@ class WallsView(QWidget):
         self.tree.setColumnCount(len(COLUMNS))
         self.tree.setHeaderLabels(COLUMNS)
         self.tree.setRootIsDecorated(False)
+        self.tree.setIndentation(0)  # a flat list: no room kept for branches
         self.tree.setUniformRowHeights(True)
         self.tree.setSelectionMode(QAbstractItemView.SelectionMode.SingleSelection)
         self.tree.setEditTriggers(QAbstractItemView.EditTrigger.EditKeyPressed | QAbstractItemView.EditTrigger.DoubleClicked)
         self.tree.header().setSectionResizeMode(QHeaderView.ResizeMode.ResizeToContents)
         self.tree.header().setStretchLastSection(True)
-        self.tree.headerItem().setToolTip(1, "Footing width B × thickness t_f")
-        self.tree.headerItem().setToolTip(2, "The lowest ratio / required of every check, with ✓ OK or ✗ NG")
-        self.tree.setToolTip("The project's walls. F2 or double-click renames; the mark reads ✓ OK or ✗ NG.")
+        self.tree.headerItem().setToolTip(1, "The footing: width B × thickness t_f")
+        self.tree.headerItem().setToolTip(
+            2, "The check closest to its limit: ✓ with the margin it leaves, or ✗ with how far it falls short"
+        )
+        self.tree.setToolTip("The project's walls. F2 or double-click renames; ✓ passes every check, ✗ fails one.")
         self.buttons: dict[str, QPushButton] = {}
         grid = QHBoxLayout()
         grid.setSpacing(3)
@@ -102,6 +128,7 @@ class WallsView(QWidget):
         self.buttons["up"].clicked.connect(lambda: self.move(-1))
         self.buttons["down"].clicked.connect(lambda: self.move(1))
         self.tree.currentItemChanged.connect(self._on_current_item_changed)
+        document.sizing_changed.connect(self._on_sizing_changed)
         self.tree.itemChanged.connect(self._on_item_changed)
 
     # ---- rendering -----------------------------------------------------------------------------
@@ -125,22 +152,19 @@ class WallsView(QWidget):
                 if result is None:  # site values missing: nothing is checked
                     self._show_unchecked(item, wall.id, size, wall.label)
                     continue
-                worst = result.worst
-                if math.isinf(worst.ratio):
-                    worst_text = "no demand"
-                else:
-                    worst_text = (
-                        f"{OK_MARK if result.passes else NG_MARK} {worst.normalized:.2f} {'OK' if result.passes else 'NG'}"
-                    )
-                for col, text in enumerate((wall.id, size, worst_text)):
+                for col, text in enumerate((wall.id, size, margin_cell(result))):
                     if item.text(col) != text:
                         item.setText(col, text)
-                tone = QColor(GRAPHITE if result.passes else WARM)
+                tone = QColor(GRAPHITE if result.passes_all else WARM)
                 if item.foreground(2).color() != tone:
                     item.setForeground(2, tone)
+                said = margin_tip(result, units)
+                entry, fresh = doc.sizing_for(wall)
+                if entry is not None and fresh and not entry.result.feasible:
+                    said += f"\nSizing: no passing size; it is {OUTSIDE_BOUNDS} (widen them in Sizing range)"
                 for col, tip in (
                     (0, wall.label or wall.id),
-                    (2, _worst_tip(worst)),
+                    (2, said),
                 ):
                     if item.toolTip(col) != tip:
                         item.setToolTip(col, tip)
@@ -149,6 +173,9 @@ class WallsView(QWidget):
                 self.tree.setCurrentItem(current)
         finally:
             self._refreshing = False
+
+    def _on_sizing_changed(self, _wall_id: str) -> None:
+        self.refresh()  # a wall's tooltip says when sizing found no passing size
 
     @staticmethod
     def _show_unchecked(item: QTreeWidgetItem, wall_id: str, size: str, label: str) -> None:

@@ -78,12 +78,12 @@ def test_a_registered_check_shows_in_the_verdict_walls_and_map(qtbot, clearance,
         c.id for c in reported_checks(window.document.project)
     ]  # the registry's order: clearance after bearing
     assert list(texts).index("test-clearance") == list(texts).index("bearing") + 1
-    assert texts["test-clearance"] == ("0.50 < 1.00", "✗ NG", "")
+    assert texts["test-clearance"] == ("ratio 0.50 of 1.00 required", "✗ 50% short", "")
     names = [row[0].text() for row in window.verdict.rows.values()]
     assert "Clearance" in names and "Embedment" in names
     assert "clearance below the required ratio" in window.verdict.headline.text()
     item = window.walls_view.tree.topLevelItem(0)
-    assert item.text(2) == "✗ 0.50 NG" and "clearance" in item.toolTip(2)
+    assert item.text(2) == "✗ 50% short" and "clearance" in item.toolTip(2)
     window.size_current()
     dm = window.design_map
     qtbot.waitUntil(lambda: dm.entry is not None and dm.fresh, timeout=20000)
@@ -118,7 +118,7 @@ def _shown_words(window) -> list[str]:
 
 def test_the_footing_is_named_t_f_l_f_and_w_f(qtbot, window):
     assert window.wall_form.group.labels[id(field(window, "footing", "thickness"))].text() == "Footing thickness t_f (in)"
-    assert window.walls_view.tree.headerItem().text(1) == "Footing B × t_f"
+    assert window.walls_view.tree.headerItem().text(1) == "B × t_f"
     window.tabs.setCurrentWidget(window.design_map)
     assert "t_f" in window.design_map.plot.getPlotItem().getAxis("left").labelText
     caption = window.drawings.elevation_caption.text()

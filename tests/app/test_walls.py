@@ -1,8 +1,9 @@
 """The walls list: add, duplicate, rename, delete and reorder, each one undoable command, and a
-pass/fail mark that reads without colour."""
+pass/fail mark with the governing check's margin in words that reads without colour."""
 
 from __future__ import annotations
 
+from kernline.engine.summary import margin_text, state_words
 from window_helpers import demo_raw, select_wall
 
 
@@ -16,58 +17,68 @@ def _row_texts(window, row: int) -> list[str]:
 
 
 def test_the_list_shows_size_and_a_textual_mark(window):
-    """C3 fails bearing in the demo: its row says ✗ ... NG; N1 passes: ✓ ... OK (engine verdicts)."""
+    """Each row: ✓ and the margin of the check closest to its limit, or ✗ and how far it falls short;
+    the tooltip names that check (engine verdicts and margins)."""
     ids = _ids(window)
     for row, wall_id in enumerate(ids):
         texts = _row_texts(window, row)
         assert texts[0] == wall_id
         result = window.document.results[wall_id]
-        assert texts[2].endswith("OK" if result.passes else "NG")
-        assert texts[2].startswith("✓" if result.passes else "✗")
-    assert _row_texts(window, ids.index("C3"))[2] == f"✗ {window.document.results['C3'].worst.normalized:.2f} NG"
+        worst = result.worst
+        words = state_words(worst, result) or margin_text(worst.ratio, worst.required, worst.passes)
+        if not result.passes:
+            assert texts[2] == "✗ " + words
+        elif result.passes_along:
+            assert texts[2] == "✓ " + words
+        else:  # every check passes; the design along the length does not
+            assert texts[2] == "✗ fails along L_f"
+        assert worst.check.title.lower() in window.walls_view.tree.topLevelItem(row).toolTip(2)
     assert _row_texts(window, 0)[1] == "1'-6\" × 1'-0\""
+    assert window.walls_view.tree.headerItem().text(2) == "Least margin"
 
 
 def test_add_duplicate_rename_delete_reorder_and_undo_each(qtbot, window):
     doc = window.document
+    start = _ids(window)
+    assert start[:4] == ["N1", "S2", "C3", "E4"]
     window.walls_view.add()
-    assert _ids(window) == ["N1", "S2", "C3", "E4", "W1"]
+    assert _ids(window) == [*start, "W1"]
     assert doc.current_wall.id == "W1"
     assert window.wall_form.title.text().startswith("Wall W1")
 
     select_wall(window, "C3")
     window.walls_view.duplicate()
-    assert _ids(window) == ["N1", "S2", "C3", "C3-2", "E4", "W1"]
+    assert _ids(window) == ["N1", "S2", "C3", "C3-2", *start[3:], "W1"]
     assert doc.current_wall.loads == doc.project.walls[2].loads
 
     item = window.walls_view.tree.topLevelItem(3)
     item.setText(0, "C5")  # the inline edit of the id column
-    assert _ids(window) == ["N1", "S2", "C3", "C5", "E4", "W1"]
+    assert _ids(window) == ["N1", "S2", "C3", "C5", *start[3:], "W1"]
 
     assert window.walls_view.rename(3, "N1") is not None  # a used id is refused
     assert "used by another wall" in window.walls_view.message.text()
     assert _ids(window)[3] == "C5"
 
     window.walls_view.move(-1)
-    assert _ids(window) == ["N1", "S2", "C5", "C3", "E4", "W1"]
+    assert _ids(window) == ["N1", "S2", "C5", "C3", *start[3:], "W1"]
     assert doc.current_wall.id == "C5"
 
     window.walls_view.delete()
-    assert _ids(window) == ["N1", "S2", "C3", "E4", "W1"]
+    assert _ids(window) == [*start, "W1"]
 
     assert doc.undo_stack.count() == 5
     for _ in range(5):
         doc.undo_stack.undo()
     assert doc.raw == demo_raw()
-    assert window.walls_view.tree.topLevelItemCount() == 4
+    assert window.walls_view.tree.topLevelItemCount() == len(start)
     for _ in range(5):
         doc.undo_stack.redo()
-    assert _ids(window) == ["N1", "S2", "C3", "E4", "W1"]
+    assert _ids(window) == [*start, "W1"]
 
 
 def test_the_last_wall_cannot_be_deleted(window):
     doc = window.document
-    for _ in range(3):
+    for _ in range(len(doc.project.walls) - 1):
         window.walls_view.delete()
     assert len(doc.project.walls) == 1
     window.walls_view.delete()

@@ -159,5 +159,5 @@ def test_comparisons_are_the_records_numbers():
     assert comparison_text(g, result, "US") == f"{q} of {a} allowable"
     o = next(g for c, g in result.governing.items() if c.id == "overturning")
     text = comparison_text(o, result, "SI")
-    shown = format_quantity(result.cases[o.case_index].overturning.moment, Kind.MOMENT, "SI").removesuffix(" kN·m")
+    shown = format_quantity(result.cases[o.case_index].overturning.moment, Kind.MOMENT, "SI", 1).removesuffix(" kN·m")
     assert text.startswith(f"{shown} against ") and text.endswith(" kN·m resisting")
