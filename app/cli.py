@@ -67,6 +67,11 @@ def _parser() -> argparse.ArgumentParser:
     p.add_argument("file")
     p.add_argument("-o", "--output", required=True, metavar="OUT.pdf")
     p.add_argument("--walls", metavar="A1,B2", help="only these walls (comma-separated ids)")
+    p.add_argument(
+        "--seal-every-sheet",
+        action="store_true",
+        help="a small seal box in every sheet's title strip (the cover always has the 3 in seal square)",
+    )
 
     p = sub.add_parser("schedule", help="write the footing schedule (CSV)")
     p.add_argument("file")
@@ -141,7 +146,7 @@ def _dispatch(args: argparse.Namespace) -> int:
     if command == "size":
         return _size(args.file, as_json=args.json, write=args.write)
     if command == "report":
-        return _report(args.file, args.output, args.walls)
+        return _report(args.file, args.output, args.walls, args.seal_every_sheet)
     if command == "schedule":
         return _schedule(args.file, args.output)
     raise AssertionError(command)  # pragma: no cover - argparse refuses others
@@ -260,7 +265,7 @@ def _size(path: str, as_json: bool, write: bool) -> int:
     return EXIT_OK if all(s.feasible for s in sized) else EXIT_FAIL
 
 
-def _report(path: str, output: str, walls: str | None) -> int:
+def _report(path: str, output: str, walls: str | None, seal_every_sheet: bool = False) -> int:
     try:
         from kernline.engine import write_report
     except ImportError:
@@ -272,7 +277,7 @@ def _report(path: str, output: str, walls: str | None) -> int:
     check_output_path(output, inputs=[path])
     doc = load_project(path)
     ids = [w.strip() for w in walls.split(",")] if walls else None
-    write_report(doc, output, wall_ids=ids)
+    write_report(doc, output, wall_ids=ids, seal_every_sheet=seal_every_sheet)
     print(f"wrote {output}")
     return EXIT_OK
 

@@ -212,3 +212,24 @@ def test_us_package_is_letter_size(demo: RenderedPackage) -> None:
 
     box = PdfReader(io.BytesIO(demo.pdf)).pages[0].mediabox
     assert (float(box.width), float(box.height)) == pytest.approx((612.0, 792.0))
+
+
+def test_command_line_seal_every_sheet(tmp_path) -> None:
+    """kernline report --seal-every-sheet puts the small seal box in every strip; without it, only the cover has a seal."""
+    import os
+    import subprocess
+    import sys
+
+    from kernline.engine.resources import resource_path
+    from report_helpers import page_texts
+
+    env = dict(os.environ, QT_QPA_PLATFORM="offscreen")
+    texts = {}
+    for flag in ((), ("--seal-every-sheet",)):
+        out = tmp_path / f"p{len(flag)}.pdf"
+        command = [sys.executable, "-m", "kernline.app.cli", "report", str(resource_path("demo.kernline")), "-o", str(out)]
+        done = subprocess.run([*command, "--walls", "N1", *flag], capture_output=True, text=True, env=env)
+        assert done.returncode == 0, done.stderr
+        texts[bool(flag)] = page_texts(out.read_bytes())
+    assert all(re.search(r"\bseal\b", p) for p in texts[True])
+    assert not any(re.search(r"\bseal\b", p) for p in texts[False][1:])
