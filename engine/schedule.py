@@ -76,7 +76,7 @@ class FootingBars:
 
     ``transverse``: across the width ("#5 @ 12 in", "No. 16 @ 305 mm", "plain", or the engine's
     words when no bars pass); ``bottom``, ``top``: along the length ("3 #5", "none needed"; ", fails"
-    added where the engine's design along the length does not pass with them); each ``*_from`` is
+    added where the engine's design along the length does not pass and this face is why); each ``*_from`` is
     :data:`ENTERED` (given in the project) or :data:`DESIGNED`.
     """
 
@@ -129,7 +129,9 @@ def footing_bars(project: Project, wall: Wall, result: WallResult) -> FootingBar
         design = result.along[0]
         for k, face in enumerate((design.bottom, design.top)):
             shown = counted_text(face.count, face.bar, units) if face.bar is not None and face.count else NOT_NEEDED
-            faces[k] = shown if face.passes else f"{shown}, fails"
+            # a face fails only where the design along the length fails (a plain footing whose plain
+            # section carries every case passes with bars that would not carry it alone)
+            faces[k] = shown if face.passes or design.passes else f"{shown}, fails"
     return FootingBars(
         transverse=transverse,
         transverse_from=ENTERED if transverse_entered(wall) else DESIGNED,

@@ -55,7 +55,7 @@ def engine_faces(result) -> tuple[str, str]:
     shown = []
     for face in (design.bottom, design.top):
         text = counted_text(face.count, face.bar) if face.bar is not None and face.count else NOT_NEEDED
-        shown.append(text if face.passes else f"{text}, fails")
+        shown.append(text if face.passes or design.passes else f"{text}, fails")
     return shown[0], shown[1]
 
 
@@ -146,3 +146,26 @@ def test_csv_with_bars_stays_guarded(label: str):
     for row in rows:
         for cell in row:
             assert not cell.startswith(("=", "+", "@", "\t", "\r")), cell
+
+
+def test_a_face_marked_failing_means_the_wall_fails():
+    """ ", fails" beside bars only where the engine's design along the length fails, so never on a PASS
+    row; the demo's walls and a short wall under a large shear (our own) whose bars cannot pass."""
+    raw = demo()
+    short = json.loads(json.dumps(next(w for w in raw["walls"] if w["id"] == "C3")))
+    short.update(id="T1", length="3 ft")
+    short["footing"].update(width="12 in", thickness="12 in")
+    short["loads"] = [
+        {"type": "line", "case": "D", "value": "100 plf"},
+        {"type": "lateral", "case": "W", "value": "10 kip", "height": "10 ft"},
+    ]
+    raw["walls"].append(short)
+    project = parse_project(raw)
+    results = check_project(project)
+    heads = schedule_headers(project.units, project)
+    marked = 0
+    for row, result in zip(schedule_rows(project, results), results, strict=True):
+        fails = any(row[heads.index(h)].endswith(", fails") for h in ("Bottom bars", "Top bars"))
+        marked += fails
+        assert not fails or (row[-1] == "FAIL" and not result.passes_along)
+    assert marked  # the short wall's bars along its length fail
