@@ -109,6 +109,7 @@ def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[Longitudinal
     thickness = float(np.asarray(evaluation.statics.thickness))
     materials = Materials(fc=concrete.fc, fy=concrete.fy, lam=concrete.lam, cover=concrete.cover)
     given = wall.footing.reinforcement
+    layer = _transverse_layer(evaluation)
     diagrams = [case_diagram(table, evaluation, i) for i in range(len(table.cases))]
     if not diagrams:
         raise ValueError("no strength case")
@@ -117,10 +118,10 @@ def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[Longitudinal
     bottom = given.bottom if given is not None and given.bottom is not None else None
     top = given.top if given is not None and given.top is not None else None
     if bottom is None:
-        chosen = design_longitudinal(diagrams[sag], thickness=thickness, materials=materials, top=top)
+        chosen = design_longitudinal(diagrams[sag], thickness=thickness, materials=materials, top=top, layer_below=layer)
         bottom = (chosen.bottom.count, chosen.bottom.bar) if chosen.bottom.bar is not None else None
     if top is None:
-        chosen = design_longitudinal(diagrams[hog], thickness=thickness, materials=materials, bottom=bottom)
+        chosen = design_longitudinal(diagrams[hog], thickness=thickness, materials=materials, bottom=bottom, layer_below=layer)
         top = (chosen.top.count, chosen.top.bar) if chosen.top.bar is not None else None
     largest = sag if diagrams[sag].max_moment >= -diagrams[hog].min_moment else hog
     plain = given is not None and given.plain
@@ -128,14 +129,33 @@ def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[Longitudinal
         width = float(np.asarray(evaluation.statics.width))
         phi_mn, phi_vn = _plain_capacities(width, thickness, concrete.fc, concrete.lam)
         if all(_plain_carries(d, phi_mn, phi_vn) for d in diagrams):
-            one = design_longitudinal(diagrams[largest], thickness=thickness, materials=materials, bottom=bottom, top=top)
+            one = design_longitudinal(
+                diagrams[largest], thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer
+            )
             return _plain_along([one], width, thickness, concrete.fc, concrete.lam)[0], largest, diagrams[largest]
-    designs = [design_longitudinal(d, thickness=thickness, materials=materials, bottom=bottom, top=top) for d in diagrams]
+    designs = [
+        design_longitudinal(d, thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer)
+        for d in diagrams
+    ]
     if plain:
         designs = _plain_along(designs, float(np.asarray(evaluation.statics.width)), thickness, concrete.fc, concrete.lam)
     failing = [i for i, d in enumerate(designs) if not d.passes]
     index = failing[0] if failing else largest
     return designs[index], index, diagrams[index]
+
+
+def _transverse_layer(evaluation: Evaluation) -> float:
+    """The diameter of the transverse bars under the bottom longitudinal bars (m): the bars given or
+    chosen across the width; 0 for a plain footing (common practice: the longitudinal bars sit on the
+    transverse layer, so their d is one transverse bar less)."""
+    from ..checks._strength import strength_grid
+    from .bars import bar
+
+    grid = strength_grid(evaluation.statics)
+    if grid.plain:
+        return 0.0
+    size = int(np.asarray(grid.design.size))
+    return bar(size).diameter if size > 0 else 0.0
 
 
 def _plain_capacities(width: float, thickness: float, fc: float, lam: float) -> tuple[float, float]:
