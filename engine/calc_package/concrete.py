@@ -536,6 +536,9 @@ def _along(
         if wall.construction is WallConstruction.LIGHT_FRAME
         else "the overturning as the linear pressure of a rigid wall"
     )
+    plain_mn = getattr(design, "plain_moment_capacity", None)
+    plain_vn = getattr(design, "plain_shear_capacity", None)
+    plain_carries = plain_mn is not None and design.passes
     rows: list[tuple[Cell, ...]] = []
     fails = []
     for k, face in enumerate((design.bottom, design.top)):
@@ -552,10 +555,10 @@ def _along(
                 f"{face.bars or '—'} ({u.total_area(face.steel_provided)})",
                 u.beam_moment(face.moment_capacity),
                 f"{u.force(face.shear)} / {u.force(face.shear_capacity)}",
-                "passes" if face.passes else "FAILS",
+                "passes" if face.passes else ("not needed: plain carries" if plain_carries else "FAILS"),
             )
         )
-        if not face.passes:
+        if not face.passes and not plain_carries:
             fails.append(k)
     blocks: list[Block] = [
         Heading("Along the length: the footing as a beam", 2),
@@ -568,6 +571,20 @@ def _along(
             "small",
         ),
         beam_drawing(diagram, fmt, CONTENT_WIDTH, 96.0, f"{case.combination.name}{direction}"),
+        *(
+            [
+                Para(
+                    formula(
+                        f"Plain section along the length: φM_{{n}} = {u.beam_moment(plain_mn)} (14.5.2.1) and φV_{{n}} = "
+                        f"{u.force(plain_vn or 0.0)} (14.5.5.1) of the whole section B × (h − 2 in) against |M| and |V| above"
+                        + ("; it carries them, so the bars below are not needed for strength." if plain_carries else ".")
+                    ),
+                    "small",
+                )
+            ]
+            if plain_mn is not None
+            else []
+        ),
         Group(
             (
                 Table(

@@ -1,7 +1,7 @@
 """Render sheets of the demo project's calculation package to PNG (a script, not a test).
 
-By default writes two images for the README into ``resources/report/``: the cover sheet and the
-first sheet of one wall. ``--all DIR`` renders every sheet into DIR instead, for looking the whole
+By default writes images for the README into ``resources/report/``: the cover sheet, the first
+stability sheet of one wall and that wall's concrete design sheet. ``--all DIR`` renders every sheet into DIR instead, for looking the whole
 package over. Needs ``pdftoppm`` (Debian package poppler-utils).
 
 Run: python tests/benchmarks/render_report_pages.py [--wall S2] [--dpi 80] [--all /tmp/sheets]
@@ -27,13 +27,13 @@ OUT = ROOT / "resources" / "report"
 
 
 def subjects(pdf: bytes) -> list[str]:
-    """The sheet subject in each page's title block."""
+    """The sheet subject in each page's title strip (the strip is drawn last: its subject ends the text)."""
     from pypdf import PdfReader
 
     out = []
     for page in PdfReader(io.BytesIO(pdf)).pages:
         text = re.sub(r"\s+", " ", page.extract_text() or "")
-        m = re.search(r"Sheet subject (.*?) Sheet Sheet \d+ of \d+", text)
+        m = re.search(r"Sheet \d+ of \d+ (.*?)\s*$", text)
         out.append(m.group(1) if m else "")
     return out
 
@@ -70,12 +70,15 @@ def main() -> int:
                 render_page(pdf_path, n, target / f"sheet-{n:02d}.png", args.dpi)
             print(f"wrote {len(names)} sheets to {target}")
             return 0
-        subject = f"Wall {args.wall}"
+        subject = f"Wall {args.wall}: stability"
         if subject not in names:
             print(f"the demo project has no wall {args.wall}", file=sys.stderr)
             return 1
         OUT.mkdir(parents=True, exist_ok=True)
         pages = {"package-cover.png": 1, "package-wall-sheet.png": names.index(subject) + 1}
+        concrete = f"Wall {args.wall}: concrete"
+        if concrete in names:
+            pages["package-concrete-sheet.png"] = names.index(concrete) + 1
         for name, page in pages.items():
             render_page(pdf_path, page, OUT / name, args.dpi)
             print(f"wrote {OUT / name} (sheet {page} of {len(names)}, {(OUT / name).stat().st_size / 1024:.0f} KiB)")
