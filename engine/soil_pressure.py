@@ -54,6 +54,21 @@ def resultant_eccentricity(moment_about_centre: ArrayLike, vertical: ArrayLike) 
     return e
 
 
+KERN_FRACTION = 1.0 / 6.0  # e <= L/6 keeps the whole footing in contact (Bowles, 5th ed., 4-8; Das)
+
+
+def kern_eccentricity(length: float) -> float:
+    """The largest eccentricity with the whole footing in contact, e_k = L/6 (m).
+
+    Source: Bowles, *Foundation Analysis and Design*, 5th ed., section 4-8 (the kern, the middle
+    third of a rectangular footing); Das, *Principles of Foundation Engineering*.
+
+    Args:
+        length: L, the footing's length along the eccentricity (m).
+    """
+    return KERN_FRACTION * float(length)
+
+
 def pressure_distribution(vertical: ArrayLike, eccentricity: ArrayLike, width: ArrayLike, length: float) -> PressureDistribution:
     """Soil pressure under a rigid footing of width B and length L, no tension.
 

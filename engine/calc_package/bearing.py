@@ -101,7 +101,7 @@ def bearing_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
     e_abs = fmt.decimal(abs(br.eccentricity))
     beyond = br.contact_length < result.length * (1.0 - 1e-9)
     diagram = pressure_diagram(case.vertical, br.eccentricity, result.width, result.length)
-    kern_half = (diagram.kern[1] - diagram.kern[0]) / 2.0  # L/6: half the middle third (display only)
+    kern_half = br.kern_eccentricity  # L_f/6, from the engine
     blocks.append(Equation(formula("e"), formula("M / N"), f"{M} / {N}", formula(fmt.signed_length(br.eccentricity))))
     if not beyond:
         blocks += [

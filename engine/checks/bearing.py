@@ -14,6 +14,7 @@ import numpy as np
 from .. import bearing
 from ..registry import Check, CheckArrays, Family, register_check
 from ..registry import json_number as _num
+from ..soil_pressure import kern_eccentricity
 
 if TYPE_CHECKING:  # pragma: no cover
     from ..stability import Statics
@@ -33,6 +34,7 @@ class BearingResult:
     ratio: float
     required: float
     passes: bool
+    kern_eccentricity: float = 0.0  # L_f/6, the edge of the kern (soil_pressure.kern_eccentricity)
 
 
 @dataclass(frozen=True, eq=False, repr=False)
@@ -73,6 +75,7 @@ class BearingCheck(Check):
             ratio=ratio,
             required=required,
             passes=meets(ratio, required),
+            kern_eccentricity=kern_eccentricity(state.table.length),
         )
 
     def record_json(self, record: Any) -> dict[str, Any]:
