@@ -127,7 +127,11 @@ def concrete_blocks(project: Project, report: WallReport, fmt: Formatter) -> lis
     u = MemberUnits(fmt)
     wall = report.wall
     grid = strength_grid(evaluation.statics)
-    along: tuple[LongitudinalDesign, int, BeamDiagram] | None = design_along(table, evaluation) if table.cases else None
+    # the engine's design along the length, kept on the result (computed once for the window, sizing and here)
+    memo = getattr(result, "along", None) if hasattr(type(result), "along") else None
+    along: tuple[LongitudinalDesign, int, BeamDiagram] | None = (
+        memo if memo is not None else (design_along(table, evaluation) if table.cases else None)
+    )
     passes_across = flexure.passes and shear.passes
     passes_along = along is None or along[0].passes
     title = f"Wall {wall.id}: concrete design of the footing (ACI 318-19)"
