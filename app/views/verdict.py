@@ -11,6 +11,11 @@ case (engine.summary.margin_text); the last column names the governing case (a g
 embedment names the rule that sets its requirement instead) and, for the footing's strength checks,
 the transverse bars and whether they were entered or designed by Kernline. A check with nothing to
 resist says "no demand"; a case whose resultant leaves the footing says "no equilibrium".
+
+With a concrete design the headline and hint also give the design along the length (the footing as a
+beam, ``WallResult.along``). It costs tens of milliseconds, too much for every keystroke, so a render
+whose result has not designed it yet says so ("the design along the length follows") and designs it a
+moment after the typing stops, then renders again.
 """
 
 from __future__ import annotations
@@ -32,14 +37,15 @@ from kernline.engine.summary import (
     margin_text,
     state_words,
 )
-from PySide6.QtCore import QSize, Qt
+from PySide6.QtCore import QSize, Qt, QTimer
 from PySide6.QtGui import QColor, QPainter, QPalette
 from PySide6.QtWidgets import QGridLayout, QLabel, QSizePolicy, QVBoxLayout, QWidget
 
 from ..style import GRAPHITE, MUTED, NG_MARK, NO_DEMAND_MARK, OK_MARK, WARM
 
 CASE_FONT_SCALE = 0.92  # the case column is secondary: a little smaller, and muted
-CASE_MIN_WIDTH = 150  # px: a long demand-against-capacity text is elided before the case column is
+CASE_MIN_WIDTH = 150
+ALONG_DELAY_MS = 150  # idle time after a render before the design along the length is worked out  # px: a long demand-against-capacity text is elided before the case column is
 
 
 def verdict_words(g: Governing, result: WallResult) -> str:
@@ -123,6 +129,11 @@ class VerdictView(QWidget):
         layout.addLayout(self.grid)
         layout.addWidget(self.hint)
         self._set_checks(table_checks())  # the rows are there from the start: a first result does not relayout
+        self._pending: tuple[Wall, WallResult, str] | None = None  # waits for its design along the length
+        self._along_timer = QTimer(self)
+        self._along_timer.setSingleShot(True)
+        self._along_timer.setInterval(ALONG_DELAY_MS)
+        self._along_timer.timeout.connect(self._on_along_due)
 
     def _set_checks(self, checks: tuple[Check, ...]) -> None:
         """One row per check, in the order given (the engine's results follow the registry)."""
@@ -202,22 +213,45 @@ class VerdictView(QWidget):
                     tip += ("; " if tip else "") + f"transverse bars {bars}"
                 case.setToolTip(tip)
             _set_colour(verdict, WARM if not g.passes else GRAPHITE, bold=True)
-        along = along_words(result)
-        whole = result.passes_all  # the design along the length included
+        ready = along_ready(result)
+        along = along_words(result) if ready else ""
+        whole = result.passes_all if ready else result.passes
         if whole:
-            self.headline.setText(f"Wall {wall.id}: {OK_MARK} OK — every check meets its required ratio" + _least(result))
+            follows = "" if ready else "; the design along the length follows"
+            self.headline.setText(
+                f"Wall {wall.id}: {OK_MARK} OK — every check meets its required ratio" + _least(result) + follows
+            )
         else:
             failing = [c.title.lower() for c, g in result.governing.items() if not g.passes]
             said = [f"{_listing(failing)} below the required ratio"] if failing else []
-            if not result.passes_along:
+            if ready and not result.passes_along:
                 said.append("the footing fails along its length")
             self.headline.setText(f"Wall {wall.id}: {NG_MARK} NG — " + "; ".join(said))
         _set_colour(self.headline, GRAPHITE if whole else WARM, bold=True)
-        self.hint.setText(" ".join(part for part in (along, _hint(wall, result)) if part))
+        self.hint.setText(" ".join(part for part in (along, _hint(wall, result, whole)) if part))
+        self._pending = None if ready else (wall, result, units)
+        if ready:
+            self._along_timer.stop()
+        else:
+            self._along_timer.start()  # restarted by each render: it runs once the typing stops
+
+    def _on_along_due(self) -> None:
+        """Work out the pending result's design along the length (kept by the result) and show it."""
+        if self._pending is None or not self.checked:
+            return
+        wall, result, units = self._pending
+        _ = result.along  # the engine designs it once; the result keeps it
+        self.render(wall, result, units)
 
     def texts(self) -> dict[str, tuple[str, str, str]]:
         """Shown text per check id: (demand against capacity, verdict and margin, case)."""
         return {c.id: (row[1].text(), row[2].text(), row[3].text()) for c, row in self.rows.items()}
+
+
+def along_ready(result: WallResult) -> bool:
+    """Whether ``result`` needs no design along the length, or has worked it out already (cheap to ask)."""
+    table = result.strength_table
+    return table is None or table.concrete is None or "along" in result.memo
 
 
 def along_words(result: WallResult) -> str:
@@ -278,12 +312,13 @@ def _set_colour(label: QLabel, colour: str, bold: bool = False) -> None:
         label.setFont(font)
 
 
-def _hint(wall: Wall, result: WallResult) -> str:
+def _hint(wall: Wall, result: WallResult, whole: bool) -> str:
+    """What to do next; ``whole``: the wall's verdict as far as it is known (see :func:`along_ready`)."""
     # the stability checks idle for want of a lateral load (a strength check's "no demand" has other causes)
     idle = [c.title.lower() for c, g in result.governing.items() if math.isinf(g.ratio) and c.family is Family.SERVICE]
     if idle and not any(isinstance(ld, LateralLoad) for ld in wall.loads):
         verb = "has" if len(idle) == 1 else "have"
         return f"No lateral load on this wall: {_listing(idle)} {verb} no demand. Add a W or E lateral load to check them."
-    if not result.passes_all:
+    if not whole:
         return "Size this footing (Ctrl+M): the smallest size that passes, and the check that limits it."
     return ""

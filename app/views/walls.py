@@ -4,7 +4,9 @@ The last column reads "✓ 24% margin", "✗ 74% short", "✗ no equilibrium" or
 symbol and the margin (or shortfall) of the check that governs, the one closest to its limit in the
 engine's results (engine.summary). Its tooltip names that check and says its demand against its
 capacity and its governing case. A wall whose sizing found no passing size says so in its tooltip
-("outside the sizing bounds").
+("outside the sizing bounds"). With a concrete design the mark also takes in the design along the
+length (``WallResult.along``, tens of milliseconds a wall): until a result has worked it out the mark
+reads its checks alone, and the list designs the missing ones a moment after the typing stops.
 
 Add, duplicate, rename (F2 or double-click the id), delete and reorder; each is one undoable command.
 """
@@ -35,15 +37,24 @@ from ..document import ProjectDocument
 from ..style import GRAPHITE, MUTED, NG_MARK, OK_MARK, WARM
 
 COLUMNS = ("Wall", "B × t_f", "Least margin")
+ALONG_DELAY_MS = 150  # idle time after a refresh before the designs along the length are worked out
+
+
+def along_ready(result: WallResult) -> bool:
+    """Whether ``result`` needs no design along the length, or has worked it out already (cheap to ask)."""
+    table = result.strength_table
+    return table is None or table.concrete is None or "along" in result.memo
 
 
 def margin_cell(result: WallResult) -> str:
     """ "✓ 24% margin", "✗ 74% short", "✗ no equilibrium", "✓ no demand" (no check has any demand), or
-    "✗ fails along L_f" when every check passes but the design along the length does not."""
+    "✗ fails along L_f" when every check passes but the design along the length does not (once the
+    result has worked it out)."""
     worst = result.worst
-    if result.passes and not result.passes_along:
+    ready = along_ready(result)
+    if result.passes and ready and not result.passes_along:
         return f"{NG_MARK} fails along L_f"
-    mark = OK_MARK if result.passes_all else NG_MARK
+    mark = OK_MARK if (result.passes_all if ready else result.passes) else NG_MARK
     words = state_words(worst, result)
     return f"{mark} {words or margin_text(worst.ratio, worst.required, worst.passes)}"
 
@@ -129,6 +140,10 @@ class WallsView(QWidget):
         self.buttons["down"].clicked.connect(lambda: self.move(1))
         self.tree.currentItemChanged.connect(self._on_current_item_changed)
         document.sizing_changed.connect(self._on_sizing_changed)
+        self._along_timer = QTimer(self)
+        self._along_timer.setSingleShot(True)
+        self._along_timer.setInterval(ALONG_DELAY_MS)
+        self._along_timer.timeout.connect(self._on_along_due)
         self.tree.itemChanged.connect(self._on_item_changed)
 
     # ---- rendering -----------------------------------------------------------------------------
@@ -138,6 +153,7 @@ class WallsView(QWidget):
         walls = doc.project.walls
         units = doc.units
         self._refreshing = True
+        pending = False  # a wall whose design along the length is still to be worked out
         try:
             while self.tree.topLevelItemCount() > len(walls):
                 self.tree.takeTopLevelItem(self.tree.topLevelItemCount() - 1)
@@ -155,7 +171,9 @@ class WallsView(QWidget):
                 for col, text in enumerate((wall.id, size, margin_cell(result))):
                     if item.text(col) != text:
                         item.setText(col, text)
-                tone = QColor(GRAPHITE if result.passes_all else WARM)
+                ready = along_ready(result)
+                pending = pending or not ready
+                tone = QColor(GRAPHITE if (result.passes_all if ready else result.passes) else WARM)
                 if item.foreground(2).color() != tone:
                     item.setForeground(2, tone)
                 said = margin_tip(result, units)
@@ -173,6 +191,20 @@ class WallsView(QWidget):
                 self.tree.setCurrentItem(current)
         finally:
             self._refreshing = False
+        if pending:
+            self._along_timer.start()  # restarted by each refresh: it runs once the typing stops
+
+    def _on_along_due(self) -> None:
+        """Work out the design along the length of every wall still without it (each result keeps
+        its own), then show the marks again."""
+        doc = self.document
+        if not doc.checkable:
+            return
+        for wall in doc.project.walls:
+            result = doc.result_of(wall)
+            if result is not None and not along_ready(result):
+                _ = result.along
+        self.refresh()
 
     def _on_sizing_changed(self, _wall_id: str) -> None:
         self.refresh()  # a wall's tooltip says when sizing found no passing size

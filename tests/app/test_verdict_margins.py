@@ -69,7 +69,7 @@ def test_a_failing_check_says_how_short(qtbot, window):
     assert rule == "below frost (IBC 2021 1809.5)"
 
 
-def test_strength_rows_name_their_combination_and_bars(make_window, tmp_path):
+def test_strength_rows_name_their_combination_and_bars(qtbot, make_window, tmp_path):
     """Designed bars are named "(designed)", bars given "(entered)"; the strength combination follows."""
     window = concrete_window(make_window, tmp_path, bars={"transverse": "#5 @ 12 in"})
     doc = window.document
@@ -84,7 +84,11 @@ def test_strength_rows_name_their_combination_and_bars(make_window, tmp_path):
         shown = window.verdict.texts()["one_way_shear"][2]
         # the same bars on the shear row where it has demand; a row with none names nothing
         assert shown.startswith(f"{flexure.record.bars} {source}") if not state_words(shear, result) else shown == ""
-    assert "Along L_f:" in window.verdict.hint.text()
+    # the design along the length follows a moment after the render, then the hint gives its bars
+    qtbot.waitUntil(lambda: "Along L_f:" in window.verdict.hint.text(), timeout=5000)
+    along = doc.results["C3"].along[0]
+    assert f"bottom {along.bottom.bars} (designed)" in window.verdict.hint.text()
+    assert "follows" not in window.verdict.headline.text()
 
 
 def test_rows_stay_readable_at_1280_by_800(qtbot, make_window, tmp_path):

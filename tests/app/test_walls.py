@@ -16,9 +16,15 @@ def _row_texts(window, row: int) -> list[str]:
     return [item.text(c) for c in range(3)]
 
 
-def test_the_list_shows_size_and_a_textual_mark(window):
+def test_the_list_shows_size_and_a_textual_mark(qtbot, window):
     """Each row: ✓ and the margin of the check closest to its limit, or ✗ and how far it falls short;
-    the tooltip names that check (engine verdicts and margins)."""
+    the tooltip names that check (engine verdicts and margins); the design along the length joins the
+    mark a moment after the list is drawn."""
+    from kernline.app.views.walls import along_ready
+
+    results = window.document.results
+    qtbot.waitUntil(lambda: all(along_ready(r) for r in results.values()), timeout=10000)
+    window.walls_view.refresh()
     ids = _ids(window)
     for row, wall_id in enumerate(ids):
         texts = _row_texts(window, row)
