@@ -228,7 +228,9 @@ class VerdictView(QWidget):
                 said.append("the footing fails along its length")
             self.headline.setText(f"Wall {wall.id}: {NG_MARK} NG — " + "; ".join(said))
         _set_colour(self.headline, GRAPHITE if whole else WARM, bold=True)
-        self.hint.setText(" ".join(part for part in (along, _hint(wall, result, whole)) if part))
+        self.hint.setText(" ".join(part for part in (along, _hint(wall, result, whole, bool(along))) if part))
+        reason = along_reason(result)
+        self.hint.setToolTip(f"Along L_f: {reason}" if reason else "")
         self._pending = None if ready else (wall, result, units)
         if ready:
             self._along_timer.stop()
@@ -256,21 +258,30 @@ def along_ready(result: WallResult) -> bool:
 
 def along_words(result: WallResult) -> str:
     """The bars along the length and whether the footing carries its strength cases as a beam, from
-    the engine's design along the length ("" without a concrete design): "Along L_f: bottom 3 #5
-    (entered), top 2 #4 (designed) — carries its strength cases." or "... — fails: <the engine's words>"."""
+    the engine's design along the length, in one short sentence ("" without a concrete design):
+    "Along L_f: bottom 3 #5, top 2 #4 (entered) — carries its strength cases." or "... — fails."
+    (the engine's words on why: :func:`along_reason`)."""
     along = result.along
     if along is None:
         return ""
     design = along[0]
     given = result.table.wall.footing.reinforcement
-    faces = []
+    faces, sources = [], []
     for face, faced in (("bottom", design.bottom), ("top", design.top)):
         if faced.bars:
-            entered = given is not None and getattr(given, face) is not None
-            faces.append(f"{face} {faced.bars} ({ENTERED if entered else 'designed'})")
-    bars = ", ".join(faces) or "no bars"
-    verdict = "carries its strength cases" if design.passes else f"fails: {design.message}"
-    return f"Along L_f: {bars} — {verdict}."
+            faces.append(f"{face} {faced.bars}")
+            sources.append(ENTERED if given is not None and getattr(given, face) is not None else "designed")
+    if len(set(sources)) == 1:
+        bars = ", ".join(faces) + f" ({sources[0]})"
+    else:
+        bars = ", ".join(f"{f} ({s})" for f, s in zip(faces, sources, strict=True)) or "no bars"
+    return f"Along L_f: {bars} — " + ("carries its strength cases." if design.passes else "fails.")
+
+
+def along_reason(result: WallResult) -> str:
+    """The engine's words on why the design along the length fails ("" when it passes or is not made)."""
+    along = result.memo.get("along")
+    return "" if along is None or along[0].passes else along[0].message
 
 
 def _least(result: WallResult) -> str:
@@ -312,13 +323,16 @@ def _set_colour(label: QLabel, colour: str, bold: bool = False) -> None:
         label.setFont(font)
 
 
-def _hint(wall: Wall, result: WallResult, whole: bool) -> str:
-    """What to do next; ``whole``: the wall's verdict as far as it is known (see :func:`along_ready`)."""
+def _hint(wall: Wall, result: WallResult, whole: bool, short: bool = False) -> str:
+    """What to do next; ``whole``: the wall's verdict as far as it is known (see :func:`along_ready`);
+    ``short``: one short sentence, after the line on the design along the length."""
     # the stability checks idle for want of a lateral load (a strength check's "no demand" has other causes)
     idle = [c.title.lower() for c, g in result.governing.items() if math.isinf(g.ratio) and c.family is Family.SERVICE]
     if idle and not any(isinstance(ld, LateralLoad) for ld in wall.loads):
         verb = "has" if len(idle) == 1 else "have"
         return f"No lateral load on this wall: {_listing(idle)} {verb} no demand. Add a W or E lateral load to check them."
     if not whole:
+        if short:
+            return "Size this footing (Ctrl+M)."
         return "Size this footing (Ctrl+M): the smallest size that passes, and the check that limits it."
     return ""
