@@ -28,6 +28,9 @@ CONCRETE = {"fc": "3000 psi", "fy": "60 ksi", "cover": "3 in", "lambda": 1.0, "s
 
 def project_of(count: int, concrete: bool):
     raw = json.loads(resource_path("demo.kernline").read_text(encoding="utf-8"))
+    raw.pop("concrete", None)  # our own concrete section below (or none), and no bars given
+    for wall in raw["walls"]:
+        wall["footing"].pop("reinforcement", None)
     walls = raw["walls"]
     raw["walls"] = []
     for k in range(count):
