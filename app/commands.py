@@ -389,8 +389,8 @@ def adopt_size(
     )
 
 
-def adopt_sizes(document: ProjectDocument, sizes: dict[str, FootingValues]) -> RawEdit:
-    """Adopt the chosen sizes of several walls (by id) as one undo step."""
+def adopt_sizes(document: ProjectDocument, sizes: dict[str, FootingValues], text: str | None = None) -> RawEdit:
+    """Adopt the chosen sizes of several walls (by id) as one undo step (``text`` names it in Edit > Undo)."""
     units = document.units
     changes: list[Change] = []
     count = 0
@@ -399,7 +399,8 @@ def adopt_sizes(document: ProjectDocument, sizes: dict[str, FootingValues]) -> R
             count += 1
             for key, value in _footing_values(sizes[wall["id"]]).items():
                 changes.append(SetValue(("walls", i, "footing", key), length_text(value, units)))
-    return RawEdit(document, f"Adopt sized footings ({count} walls)", changes, focus_path=("walls",))
+    words = text or f"Adopt sized footings ({count} wall{'' if count == 1 else 's'})"
+    return RawEdit(document, words, changes, focus_path=("walls",))
 
 
 def set_units(document: ProjectDocument, units: str) -> RawEdit:

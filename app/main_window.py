@@ -14,7 +14,7 @@ from __future__ import annotations
 import os
 import re
 import sys
-from collections.abc import Mapping
+from collections.abc import Callable, Mapping
 from pathlib import Path
 from typing import Any
 
@@ -24,19 +24,26 @@ from kernline.engine.project_file import EXTENSION
 from kernline.engine.registry import Family, checks, codes
 from kernline.engine.schedule import write_schedule
 from kernline.engine.units import format_length
-from PySide6.QtCore import QSettings, QStandardPaths, Qt, QTimer
+from PySide6.QtCore import QEvent, QSettings, QSize, QStandardPaths, Qt, QTimer
 from PySide6.QtGui import QAction, QActionGroup, QCloseEvent, QKeySequence
 from PySide6.QtWidgets import (
+    QAbstractButton,
+    QAbstractItemView,
     QApplication,
+    QBoxLayout,
     QFileDialog,
+    QFrame,
     QLabel,
+    QListWidget,
     QMainWindow,
     QMessageBox,
     QProgressBar,
     QScrollArea,
+    QSizePolicy,
     QSplitter,
     QStackedWidget,
     QTabWidget,
+    QToolBar,
     QVBoxLayout,
     QWidget,
 )
@@ -51,6 +58,7 @@ from .views.design_map import DesignMapView
 from .views.drawings import DrawingsPanel
 from .views.fields import guard_wheel
 from .views.forms import ProjectForm, WallForm
+from .views.help import PANE_TOPICS, HelpWindow, anchor_for
 from .views.notes import AssumptionsView, WarningsView
 from .views.recovery_dialog import RecoveryDialog
 from .views.schedule import ScheduleView
@@ -63,6 +71,14 @@ RECENT_LIMIT = 8
 FILE_FILTER = f"Kernline projects (*{EXTENSION});;All files (*)"
 PDF_FILTER = "PDF (*.pdf);;All files (*)"
 EXIT_AFTER_VARIABLE = "KERNLINE_EXIT_AFTER_MS"  # the frozen build's smoke check: quit this many ms after showing
+# The frame's layout (ours). Widths and heights in pixels; shares of the space the panes split.
+WALLS_WIDTH = 250  # the walls list: id, footing and worst ratio
+FORMS_WIDTH = (410, 470)  # the inputs column: never narrower (its fields fit), never wider (more width goes right)
+FORMS_SHARE = 0.28  # of the window's width, within FORMS_WIDTH
+DRAWINGS_SHARE = 0.5  # of the right column's height: elevation and pressure; the verdict and tabs take the rest
+VERDICT_SPARE_LINES = 2  # lines of text the verdict's headline and hint may take beyond one each
+DRAWINGS_CAPTIONS = 1  # lines of room for the drawings' captions to wrap without moving the panes
+WIDE_COLUMN = 780  # a right column this wide puts the warnings beside the verdict instead of under it
 REFERENCES = (
     "ASCE 7-16 and ASCE 7-22 (load combinations, section 2.4); IBC 2021 (sections 1605, 1806 and 1809); "
     "Das and Bowles (soil pressure under eccentric load)"
@@ -78,10 +94,24 @@ def exit_after_ms(environ: Mapping[str, str] | None = None) -> int | None:
     return value if value > 0 else None
 
 
+# What the window writes besides the project: (ending after the project's name, suffix, name without a project name)
+EXPORTS = {"package": ("", ".pdf", "calculation-package"), "schedule": ("-schedule", ".csv", "schedule")}
+
+
+def export_file_name(project_name: str, kind: str) -> str:
+    """The suggested file name of an export ("package" PDF or "schedule" CSV), both from the project's name.
+
+    Characters file systems refuse become "-"; a project without a name gives the export's own name.
+    "Cedar Hollow Clinic" → "Cedar Hollow Clinic.pdf" and "Cedar Hollow Clinic-schedule.csv".
+    """
+    ending, suffix, fallback = EXPORTS[kind]
+    stem = re.sub(r'[\\/:*?"<>|\x00-\x1f]+', "-", project_name).strip(" .-")
+    return (stem + ending if stem else fallback) + suffix
+
+
 def package_file_name(project_name: str) -> str:
-    """A file name for the PDF from the project's name: characters file systems refuse become "-"."""
-    stem = re.sub(r'[\\/:*?"<>|\x00-\x1f]+', "-", project_name).strip(" .-") or "calculation-package"
-    return stem + ".pdf"
+    """The PDF's suggested file name (see :func:`export_file_name`)."""
+    return export_file_name(project_name, "package")
 
 
 def default_recovery_dir() -> Path:
@@ -92,6 +122,48 @@ def default_recovery_dir() -> Path:
     """
     base = QStandardPaths.writableLocation(QStandardPaths.StandardLocation.GenericDataLocation) or str(Path.home())
     return Path(base) / "Kernline" / "recovery"
+
+
+class ResultsPane(QWidget):
+    """The verdict-and-warnings strip at its own height, and the tabs in all the height left under it.
+
+    Placed by hand rather than by a box layout: a tab page whose text wraps (height for width) would make a
+    box layout squeeze the strip or move the tabs when that page is shown; here the tabs simply get what
+    is left, whichever page is shown.
+    """
+
+    GAP = 2
+
+    def __init__(self, notes: QWidget, tabs: QWidget, least_strip: Callable[[], int]) -> None:
+        super().__init__()
+        self.setObjectName("resultsPane")
+        self.notes, self.tabs = notes, tabs
+        self.least_strip = least_strip  # the strip's height without its spare lines: what the window must fit
+        notes.setParent(self)
+        tabs.setParent(self)
+
+    def minimumSizeHint(self) -> QSize:  # noqa: N802 - Qt's name
+        tabs = self.tabs.minimumSizeHint()
+        return QSize(max(self.notes.minimumSizeHint().width(), tabs.width()), self.least_strip() + self.GAP + tabs.height())
+
+    def sizeHint(self) -> QSize:  # noqa: N802 - Qt's name
+        return self.minimumSizeHint()
+
+    def resizeEvent(self, event) -> None:  # noqa: N802 - Qt's name
+        super().resizeEvent(event)
+        self.place()
+
+    def place(self) -> None:
+        width = self.width()
+        strip = max(self.notes.minimumHeight(), self.notes.sizeHint().height())
+        self.notes.setGeometry(0, 0, width, strip)
+        top = strip + self.GAP
+        self.tabs.setGeometry(0, top, width, max(0, self.height() - top))
+
+    def event(self, event) -> bool:
+        if event.type() == QEvent.Type.LayoutRequest:  # the strip's height changed: place again
+            self.place()
+        return super().event(event)
 
 
 # windows opened by another window (restored documents) are kept here so they outlive the call that made them
@@ -149,45 +221,95 @@ class MainWindow(QMainWindow):
         self.forms_scroll.setWidgetResizable(True)
         self.forms_scroll.setMinimumWidth(400)
         self.forms_scroll.setHorizontalScrollBarPolicy(Qt.ScrollBarPolicy.ScrollBarAlwaysOff)
+        self.forms_scroll.setFocusPolicy(Qt.FocusPolicy.NoFocus)  # Tab goes to the inputs, which scroll into view
 
         self.drawings = DrawingsPanel(doc)
         self.verdict = VerdictView()
         self.cases_table = CasesTable()
         self.design_map = DesignMapView(doc)
+        self._map_readout = self.design_map.readout.text()  # the map's hint, put back when another project opens
         self.schedule = ScheduleView(doc)
+        # read-only tables: Tab leaves them (it would go round their cells for ever); arrows move inside
+        for table in (self.cases_table, getattr(self.schedule, "table", None)):
+            if isinstance(table, QAbstractItemView):
+                table.setTabKeyNavigation(False)
         self.tabs = QTabWidget()
         self.tabs.setObjectName("resultTabs")
+        # one stop for Tab, the tab bar: the tab widget itself takes no focus (as its bar's proxy it would send
+        # Tab back to the bar from wherever the focus chain left it)
+        self.tabs.setFocusProxy(None)
+        self.tabs.setFocusPolicy(Qt.FocusPolicy.NoFocus)
+        self.tabs.tabBar().setFocusPolicy(Qt.FocusPolicy.TabFocus)
         self.tabs.addTab(self.cases_table, "All cases")
         self.tabs.addTab(self.design_map, "Design map")
         self.tabs.addTab(self.schedule, "Schedule")
         self.assumptions_view = AssumptionsView(doc)
         self.tabs.addTab(self.assumptions_view, "Assumed values")
         self.warnings_view = WarningsView(doc)
-        lower = QWidget()
-        lower_layout = QVBoxLayout(lower)
-        lower_layout.setContentsMargins(0, 0, 0, 0)
-        lower_layout.setSpacing(2)
-        lower_layout.addWidget(self.verdict)
-        lower_layout.addWidget(self.warnings_view)  # right under the verdict's rows, the column's full width
-        lower_layout.addWidget(self.tabs, 1)
+        # the warnings take a slot of their own with its height reserved, so that warnings coming
+        # and going never move the tabs; when there are none the slot says so
+        self.no_warnings = QLabel("Look again: nothing — no input looks like a common mistake.")
+        self.no_warnings.setObjectName("hint")
+        self.no_warnings.setContentsMargins(6, 0, 6, 0)
+        self.warnings_slot = QWidget()
+        self.warnings_slot.setObjectName("warningsSlot")
+        slot_layout = QVBoxLayout(self.warnings_slot)
+        slot_layout.setContentsMargins(0, 0, 0, 0)
+        slot_layout.setSpacing(0)
+        slot_layout.addWidget(self.warnings_view)
+        slot_layout.addWidget(self.no_warnings)
+        slot_layout.addStretch(1)
+        self.warnings_slot.setFixedHeight(self._warnings_height())
+        # verdict and warnings: one above the other in a narrow column, side by side in a wide one
+        # (side by side they split the width 2 : 1 whatever they hold; their height is what they need, so
+        # the tabs below never move when a tab's page changes)
+        # the verdict's height is reserved (its rows and two spare lines of text); a longer verdict scrolls
+        verdict_box = QScrollArea()
+        verdict_box.setObjectName("verdictBox")
+        verdict_box.setWidget(self.verdict)
+        verdict_box.setWidgetResizable(True)
+        verdict_box.setFrameShape(QFrame.Shape.NoFrame)
+        verdict_box.setHorizontalScrollBarPolicy(Qt.ScrollBarPolicy.ScrollBarAlwaysOff)
+        verdict_box.setSizePolicy(QSizePolicy.Policy.Ignored, QSizePolicy.Policy.Fixed)
+        verdict_box.viewport().setAutoFillBackground(False)  # the window's paper shows through
+        self.verdict_box = verdict_box
+        self.warnings_slot.setSizePolicy(QSizePolicy.Policy.Ignored, QSizePolicy.Policy.Fixed)
+        self.notes = QWidget()
+        self.notes.setObjectName("verdictAndWarnings")
+        self.notes.setSizePolicy(QSizePolicy.Policy.Preferred, QSizePolicy.Policy.Fixed)
+        self.notes_row = QBoxLayout(QBoxLayout.Direction.TopToBottom, self.notes)
+        self.notes_row.setContentsMargins(0, 0, 0, 0)
+        self.notes_row.setSpacing(2)
+        self.notes_row.addWidget(verdict_box, 2)
+        self.notes_row.addWidget(self.warnings_slot, 1, Qt.AlignmentFlag.AlignTop)
+        lower = ResultsPane(self.notes, self.tabs, self._least_notes_height)
+        self.results_pane = lower
         right = QSplitter(Qt.Orientation.Vertical)
+        right.setObjectName("resultsColumn")
         right.addWidget(self.drawings)
         right.addWidget(lower)
-        right.setStretchFactor(0, 5)
-        right.setStretchFactor(1, 4)
+        # proportional growth: with the sizes in these proportions a resize keeps the share
+        right.setStretchFactor(0, round(100 * DRAWINGS_SHARE))
+        right.setStretchFactor(1, 100 - round(100 * DRAWINGS_SHARE))
         right.setChildrenCollapsible(False)
         self.right_splitter = right
 
-        self.walls_view.setMinimumWidth(250)
+        self.walls_view.setMinimumWidth(WALLS_WIDTH)
         main = QSplitter(Qt.Orientation.Horizontal)
+        main.setObjectName("mainColumns")
         main.addWidget(self.walls_view)
         main.addWidget(self.forms_scroll)
         main.addWidget(right)
         main.setStretchFactor(0, 0)
         main.setStretchFactor(1, 0)
         main.setStretchFactor(2, 1)
-        main.setSizes([250, 450, 780])
+        main.setChildrenCollapsible(False)
         self.main_splitter = main
+        # the panes keep the share below until the user drags a handle; then they keep the user's
+        self._user_split = {main: False, right: False}
+        for splitter in (main, right):
+            splitter.splitterMoved.connect(lambda _pos, _index, s=splitter: self._user_split.__setitem__(s, True))
+            splitter.installEventFilter(self)
 
         self.caution = QLabel(CAUTION)
         self.caution.setObjectName("caution")
@@ -227,12 +349,13 @@ class MainWindow(QMainWindow):
         return action
 
     def _build_actions(self) -> None:
-        Std = QKeySequence.StandardKey
-        self.new_action = self._action("&New", self.new_project, Std.New, "Start a new project")
-        self.open_action = self._action("&Open…", self.open_dialog, Std.Open, "Open a Kernline project file")
+        # the keys are spelt out (not the platform's standard keys, which differ between desktops) so that
+        # the guide's table of shortcuts holds everywhere; on macOS Qt reads Ctrl as Command
+        self.new_action = self._action("&New", self.new_project, "Ctrl+N", "Start a new project")
+        self.open_action = self._action("&Open…", self.open_dialog, "Ctrl+O", "Open a Kernline project file")
         self.demo_action = self._action("Open the &demo project", self.open_demo, None, "Open the built-in demo project")
-        self.save_action = self._action("&Save", self.save, Std.Save, "Save the project")
-        self.save_as_action = self._action("Save &As…", self.save_as, Std.SaveAs, "Save the project under a new name")
+        self.save_action = self._action("&Save", self.save, "Ctrl+S", "Save the project")
+        self.save_as_action = self._action("Save &As…", self.save_as, "Ctrl+Shift+S", "Save the project under a new name")
         self.export_action = self._action(
             "Export &schedule (CSV)…", self.export_schedule, None, "Write the footing schedule as CSV"
         )
@@ -248,11 +371,11 @@ class MainWindow(QMainWindow):
             "Ctrl+I",
             "Edit the project's name, number, client, address, engineer, checker, revision and notes (the title block)",
         )
-        self.quit_action = self._action("&Quit", self.close, Std.Quit, "Close Kernline")
+        self.quit_action = self._action("&Quit", self.close, "Ctrl+Q", "Close Kernline")
         self.undo_action = self.document.undo_stack.createUndoAction(self, "&Undo")
-        self.undo_action.setShortcut(QKeySequence(Std.Undo))
+        self.undo_action.setShortcut(QKeySequence("Ctrl+Z"))
         self.redo_action = self.document.undo_stack.createRedoAction(self, "&Redo")
-        self.redo_action.setShortcuts([QKeySequence(Std.Redo), QKeySequence("Ctrl+Y")])
+        self.redo_action.setShortcuts([QKeySequence("Ctrl+Shift+Z"), QKeySequence("Ctrl+Y")])
         self.size_action = self._action(
             "Size this &footing", self.size_current, "Ctrl+M", "Find the smallest passing footing of the selected wall"
         )
@@ -265,8 +388,14 @@ class MainWindow(QMainWindow):
         )
         self.rename_action = self._action("&Rename wall", self.walls_view.start_rename, "F2", "Rename the selected wall")
         self.delete_wall_action = self._action("D&elete wall", self.walls_view.delete, None, "Delete the selected wall")
+        self.guide_action = self._action(
+            "&User guide", self.show_help, "F1", "The user guide, at the section about the input or pane you are in"
+        )
+        self.shortcuts_action = self._action(
+            "&Keyboard shortcuts", lambda: self.open_guide("keyboard-shortcuts"), None, "Every key of the window"
+        )
         self.about_action = self._action(
-            "&About Kernline", self.about, Std.HelpContents, "What Kernline is, and the caution that goes with it"
+            "&About Kernline", self.about, None, "What Kernline is, and the caution that goes with it"
         )
 
         self.units_group = QActionGroup(self)
@@ -308,11 +437,16 @@ class MainWindow(QMainWindow):
         view_menu.addAction(self.us_action)
         view_menu.addAction(self.si_action)
         help_menu = bar.addMenu("&Help")
+        help_menu.addAction(self.guide_action)
+        help_menu.addAction(self.shortcuts_action)
+        help_menu.addSeparator()
         help_menu.addAction(self.about_action)
 
-        tools = self.toolbar = self.addToolBar("Main")
+        # the toolbar shares the menu bar's row (at its right), so the panes get that height
+        tools = self.toolbar = QToolBar("Main")
         tools.setObjectName("mainToolbar")
         tools.setMovable(False)
+        bar.setCornerWidget(tools, Qt.Corner.TopRightCorner)
         tools.setToolButtonStyle(Qt.ToolButtonStyle.ToolButtonTextOnly)
         for a in (self.new_action, self.open_action, self.save_action):
             tools.addAction(a)
@@ -359,6 +493,15 @@ class MainWindow(QMainWindow):
         self.tabs.currentChanged.connect(self._on_tab_changed)
         self.design_map.size_requested.connect(self.size_current)
         self.design_map.size_all_requested.connect(self.size_all)
+        # "Adopt all chosen sizes" changes the failing walls only; passing walls only after asking
+        adopt_all = self.design_map.adopt_all_button
+        adopt_all.clicked.disconnect()
+        adopt_all.clicked.connect(self.adopt_all_sizes)
+        adopt_all.setToolTip(
+            "Make each failing wall's chosen size its footing, in one undoable step; walls that pass keep theirs. "
+            "Pressed when no wall fails, it offers to bring the passing walls to their smallest passing sizes, "
+            "listing every change and asking first."
+        )
         self.warnings_view.field_requested.connect(self.show_field)
         self.assumptions_view.field_requested.connect(self.show_field)
         self.schedule.export_requested.connect(self.export_schedule)
@@ -368,14 +511,61 @@ class MainWindow(QMainWindow):
         self.welcome.open_requested.connect(self.open_dialog)
         self.welcome.recent_requested.connect(self._open_recent)
 
-    def _set_tab_order(self) -> None:
-        chain: list[QWidget] = [
-            self.walls_view.tree,
-            *self.wall_form.focus_order(),
-            *self.project_form.focus_order(),
-            self.drawings.picker,
-            self.tabs,
+    def frame_panes(self) -> list[tuple[str, QWidget]]:
+        """The panes in the order Tab visits them: walls, inputs, drawings, verdict, warnings, tabs."""
+        return [
+            ("walls", self.walls_view),
+            ("inputs", self.forms_scroll),
+            ("drawings", self.drawings),
+            ("verdict", self.verdict_box),
+            ("warnings", self.warnings_slot),
+            ("tabs", self.tabs),
         ]
+
+    def _focus_ring(self) -> list[QWidget]:
+        """Every widget of this window that Tab can reach, in the focus chain's present order."""
+        ring: list[QWidget] = []
+        start = self
+        w = start.nextInFocusChain()
+        while w is not start and w is not None and len(ring) < 10_000:
+            if (
+                w.window() is self
+                and (w.focusPolicy() & Qt.FocusPolicy.TabFocus) == Qt.FocusPolicy.TabFocus
+                and w.focusProxy() is None
+            ):
+                ring.append(w)
+            w = w.nextInFocusChain()
+        return ring
+
+    def tab_chain(self) -> list[QWidget]:
+        """The order Tab follows, pane by pane (see :meth:`frame_panes`).
+
+        Inside the inputs the forms' own order holds (their ``focus_order``), with each table's buttons
+        right after the table; inside every other pane, the order its widgets already have.
+        """
+        ring = self._focus_ring()
+        panes = self.frame_panes()
+        chain: list[QWidget] = []
+        for name, pane in panes:
+            mine = [w for w in ring if w is pane or pane.isAncestorOf(w)]
+            if name == "walls":
+                tree = self.walls_view.tree
+                mine = [tree] + [w for w in mine if w is not tree]
+            elif name == "inputs":
+                ordered: list[QWidget] = []
+                for w in (*self.wall_form.focus_order(), *self.project_form.focus_order()):
+                    ordered.append(w)
+                    editor = w.parentWidget()
+                    if isinstance(w, QAbstractItemView) and editor is not None:
+                        ordered += [
+                            b for b in mine if isinstance(b, QAbstractButton) and editor.isAncestorOf(b) and b not in ordered
+                        ]
+                mine = ordered + [w for w in mine if w not in ordered]
+            chain += [w for w in mine if w not in chain]
+        return chain
+
+    def _set_tab_order(self) -> None:
+        chain = self.tab_chain()
         for a, b in zip(chain, chain[1:], strict=False):
             QWidget.setTabOrder(a, b)
 
@@ -383,6 +573,7 @@ class MainWindow(QMainWindow):
 
     def _on_document_replaced(self) -> None:
         self._rendered_index = -1
+        self._forget_adoptions()
         self._sync_recovery_slot()
         self.show_editor()
         self.wall_form.refresh(force=True)
@@ -431,6 +622,7 @@ class MainWindow(QMainWindow):
     def _on_current_wall_changed(self, index: int) -> None:
         if index == self._rendered_index:
             return
+        self._forget_adoptions(status=False)
         dropped = self.wall_form.refresh(force=True)
         if dropped:
             self._show_notice("Discarded " + "; ".join(dropped) + " — not a valid entry, so the last valid value stays in force.")
@@ -451,6 +643,8 @@ class MainWindow(QMainWindow):
         else:
             self.verdict.render(doc.current_wall, result, doc.units)
         self.warnings_view.refresh()
+        self._fit_verdict()
+        self._fit_warnings_slot()
         self.assumptions_view.refresh()
         count = self.assumptions_view.count
         self.tabs.setTabText(self.tabs.indexOf(self.assumptions_view), f"Assumed values ({count})" if count else "Assumed values")
@@ -472,6 +666,7 @@ class MainWindow(QMainWindow):
         self.design_map.render()
 
     def _on_tab_changed(self, _index: int) -> None:
+        """Render the tab that came into view; no pane moves (the tabs always have their share)."""
         doc = self.document
         current = self.tabs.currentWidget()
         if current is self.cases_table:
@@ -479,23 +674,129 @@ class MainWindow(QMainWindow):
         elif current is self.schedule:
             self.schedule.refresh()
         elif current is self.design_map:
-            self._give_map_room()
             self._render_map(auto_size=True)
-        self.warnings_view.set_folded(current is self.design_map)  # the map needs the height
-        if current is not self.design_map and self._sizes_before_map is not None:
-            self.right_splitter.setSizes(self._sizes_before_map)
-            self._sizes_before_map = None
 
-    _sizes_before_map: list[int] | None = None
+    # ---- layout --------------------------------------------------------------------------------
 
-    def _give_map_room(self) -> None:
-        """The design map needs height: move the splitter so the tabs get nearly half the column
-        (put back when another tab is chosen)."""
-        sizes = self.right_splitter.sizes()
-        total = sum(sizes)
-        if total and sizes[1] < 0.46 * total:
-            self._sizes_before_map = sizes
-            self.right_splitter.setSizes([int(0.54 * total), total - int(0.54 * total)])
+    def _warnings_height(self) -> int:
+        """The warnings slot's reserved height: the warnings view with :attr:`WarningsView.VISIBLE_ROWS` rows.
+
+        A row's height is measured on a list of the same kind holding a warning's glyph, so the slot is
+        right before the first warning appears.
+        """
+        view = self.warnings_view
+        rows = getattr(view, "VISIBLE_ROWS", 3)
+        probe = QListWidget()
+        probe.setObjectName(view.list.objectName())
+        probe.setFont(view.list.font())
+        probe.addItem("⚠ Wg")
+        row = probe.sizeHintForRow(0)
+        frame = probe.frameWidth()
+        probe.deleteLater()
+        layout = view.layout()
+        margins = layout.contentsMargins() if layout is not None else None
+        outer = (margins.top() + margins.bottom() + layout.spacing()) if margins is not None else 0
+        # as WarningsView.refresh sizes its list: rows, the frame and 2 px; then its title and margins
+        return view.title.sizeHint().height() + outer + rows * row + 2 * frame + 2
+
+    def _fit_verdict(self, resized: bool = False) -> None:
+        """Reserve the verdict's height: its rows, with room for the headline and the hint to wrap.
+
+        The reserve depends only on the checks shown, the font and the window's size, never on a wall's
+        words, so a wall that fails, with its longer headline and hint, does not move the tabs below; a
+        verdict longer still scrolls in its slot. It is worked out again only when the window is resized
+        or the verdict's rows change.
+        """
+        verdict = self.verdict
+        base = verdict.minimumHeight() or verdict.minimumSizeHint().height()  # its rows, a line each of headline and hint
+        if not resized and base == self._verdict_base:
+            return
+        self._verdict_base = base
+        line = verdict.fontMetrics().lineSpacing()
+        spare = VERDICT_SPARE_LINES * line
+        right = self.right_splitter
+        column = right.height() - right.handleWidth()
+        if column > 0:
+            # the spare lines only from height nothing else needs: the drawings' least height (with its
+            # captions' room), the tabs' least height, and the warnings' slot when it sits under the verdict
+            others = self._drawings_least() + ResultsPane.GAP + self.tabs.minimumSizeHint().height()
+            if self.notes_row.direction() == QBoxLayout.Direction.TopToBottom:
+                others += self.warnings_slot.height() + self.notes_row.spacing()
+            spare = max(0, min(spare, column - others - base))
+        height = base + spare
+        if self.verdict_box.minimumHeight() != height or self.verdict_box.maximumHeight() != height:
+            self.verdict_box.setFixedHeight(height)
+        self._fit_notes()
+
+    _verdict_base = -1
+
+    def _drawings_least(self) -> int:
+        """The drawings' least height with room for a caption to wrap to another line without moving the panes."""
+        return self.drawings.minimumSizeHint().height() + DRAWINGS_CAPTIONS * self.drawings.fontMetrics().lineSpacing()
+
+    def _least_notes_height(self) -> int:
+        """The verdict-and-warnings strip without the verdict's spare lines (the least the window must give it)."""
+        base = self.verdict.minimumHeight() or self.verdict.minimumSizeHint().height()
+        if self.notes_row.direction() == QBoxLayout.Direction.TopToBottom:
+            return base + self.notes_row.spacing() + self.warnings_slot.height()
+        return max(base, self.warnings_slot.height())
+
+    def _fit_notes(self) -> None:
+        """Pin the verdict-and-warnings strip at the height its reserved slots take, so the tabs under it never
+        lend it height or borrow from it."""
+        layout = self.notes_row
+        layout.invalidate()
+        height = layout.sizeHint().height()
+        if self.notes.minimumHeight() != height or self.notes.maximumHeight() != height:
+            self.notes.setFixedHeight(height)
+            self.results_pane.updateGeometry()
+            self.results_pane.place()
+
+    def _fit_warnings_slot(self) -> None:
+        """Show the "nothing" line when there are no warnings; grow the slot only if the list ever outgrows it."""
+        shown = not self.warnings_view.isHidden()
+        self.no_warnings.setVisible(not shown)
+        need = self.warnings_view.sizeHint().height() if shown else 0
+        if need > self.warnings_slot.height() and need > self.warnings_slot.minimumHeight():
+            self.warnings_slot.setFixedHeight(need)
+            self._fit_notes()
+
+    def eventFilter(self, watched, event) -> bool:  # noqa: N802 - Qt's name
+        if event.type() == QEvent.Type.Resize:
+            if watched is self.main_splitter:
+                self._share_columns()
+            elif watched is self.right_splitter:
+                self._share_results()
+        return super().eventFilter(watched, event)
+
+    def _share_columns(self) -> None:
+        """Walls list and inputs keep their widths; every further pixel of width goes to the drawings and tables."""
+        main = self.main_splitter
+        width = main.width() - 2 * main.handleWidth()
+        if self._user_split[main] or width <= 0:
+            return
+        forms = max(FORMS_WIDTH[0], min(FORMS_WIDTH[1], round(FORMS_SHARE * width)))
+        main.setSizes([WALLS_WIDTH, forms, width - WALLS_WIDTH - forms])
+
+    def _share_results(self) -> None:
+        """Drawings above, verdict and tabs below, in fixed shares of the column's height; verdict and warnings
+        side by side once the column is wide enough."""
+        right = self.right_splitter
+        wide = right.width() >= WIDE_COLUMN
+        direction = QBoxLayout.Direction.LeftToRight if wide else QBoxLayout.Direction.TopToBottom
+        if self.notes_row.direction() != direction:
+            self.notes_row.setDirection(direction)
+        self._fit_verdict(resized=True)
+        height = right.height() - right.handleWidth()
+        if self._user_split[right] or height <= 0:
+            return
+        # at least the drawings' least height with room for a caption's second line, so that a caption
+        # wrapping never pushes the handle down
+        top = max(round(DRAWINGS_SHARE * height), self._drawings_least())
+        # the verdict's spare lines were given from height the drawings' least height leaves: keep them
+        strip = self.notes.minimumHeight() or self.results_pane.least_strip()
+        top = min(top, height - (strip + ResultsPane.GAP + self.tabs.minimumSizeHint().height()))
+        right.setSizes([top, height - top])
 
     def show_project_information(self) -> bool:
         """Open the project information (title block), bring it into view and put the cursor in its first field."""
@@ -609,6 +910,103 @@ class MainWindow(QMainWindow):
         self.statusBar().showMessage(f"Sizing {len(doc.project.walls)} walls…")
         self.tabs.setCurrentWidget(self.design_map)
         return self.runner.request("all", doc.project, doc.project.walls)
+
+    # ---- adopting sizes ------------------------------------------------------------------------
+
+    def _forget_adoptions(self, status: bool = True) -> None:
+        """Words about adopting a size belong to the project (and wall) they were said of: clear them."""
+        readout = self.design_map.readout
+        readout.setText(self._map_readout)
+        readout.setStyleSheet("")
+        if status and self._adopt_message is not None and self.statusBar().currentMessage() == self._adopt_message:
+            self.statusBar().clearMessage()
+        if status:
+            self._adopt_message = None
+
+    _adopt_message: str | None = None
+
+    def _say_adopted(self, text: str) -> None:
+        self._adopt_message = text
+        self.statusBar().showMessage(text, 15000)
+
+    def _wall_passes(self, wall_id: str) -> bool:
+        result = self.document.results.get(wall_id)
+        if result is None:
+            return False
+        return bool(getattr(result, "passes_all", result.passes))  # the design along the length too, where there is one
+
+    def size_change_text(self, wall_id: str, values: Mapping[str, float]) -> str:
+        """ "C3: B 1'-4" × t_f 1'-0" → B 2'-0" × t_f 1'-2"" (and L_f when the extensions change)."""
+        doc = self.document
+        wall = next(w for w in doc.project.walls if w.id == wall_id)
+        ft = wall.footing
+        units = doc.units
+
+        def size(width: float, thickness: float) -> str:
+            return f"B {format_length(width, units)} × t_f {format_length(thickness, units)}"
+
+        before = size(ft.width, ft.thickness)
+        after = size(values.get("width", ft.width), values.get("thickness", ft.thickness))
+        if "extension_start" in values or "extension_end" in values:
+            now = ft.extension_start + wall.length + ft.extension_end
+            then = values.get("extension_start", ft.extension_start) + wall.length + values.get("extension_end", ft.extension_end)
+            before += f" × L_f {format_length(now, units)}"
+            after += f" × L_f {format_length(then, units)}"
+        return f"{wall_id}: {before} → {after}"
+
+    def adopt_all_sizes(self) -> str:
+        """The design map's "Adopt all chosen sizes": the failing walls take their chosen sizes, in one undo step.
+
+        Walls that pass keep their footings. When no failing wall is left to change but passing walls
+        could be brought to their smallest passing sizes, the window lists every change (wall, from → to)
+        and asks first; a yes is one undo step. Returns what happened: "failing", "passing", "declined"
+        or "nothing".
+        """
+        self.flush_typing()
+        doc = self.document
+        sizes = self.design_map.adoptable_sizes()
+        if not sizes:
+            self.statusBar().showMessage("Nothing to adopt: every sized wall already has its chosen size.", 8000)
+            return "nothing"
+        failing = {wid: v for wid, v in sizes.items() if not self._wall_passes(wid)}
+        if failing:
+            changes = [self.size_change_text(wid, v) for wid, v in failing.items()]
+            count = len(failing)
+            refused = doc.push(
+                commands.adopt_sizes(doc, failing, f"Adopt the chosen sizes of {count} failing wall{'s' if count > 1 else ''}")
+            )
+            if refused:
+                self.statusBar().showMessage(f"Not adopted: {refused}", 12000)
+                return "nothing"
+            kept = len(sizes) - count
+            text = "Adopted " + "; ".join(changes) + " (Ctrl+Z undoes)."
+            if kept:
+                text += f" {kept} passing wall{'s' if kept > 1 else ''} kept {'their footings' if kept > 1 else 'its footing'}."
+            self._say_adopted(text)
+            return "failing"
+        changes = [self.size_change_text(wid, v) for wid, v in sizes.items()]
+        count = len(sizes)
+        walls = f"{count} wall{'s' if count > 1 else ''}"
+        answer = QMessageBox.question(
+            self,
+            "Change walls that already pass?",
+            f"Every wall passes as it stands. Bring {walls} to {'their' if count > 1 else 'its'} smallest passing "
+            f"size{'s' if count > 1 else ''}?\n\n"
+            + "\n".join(changes)
+            + "\n\nA smaller footing passes with less margin; check the contact length and the assumptions. "
+            "One Ctrl+Z undoes every change.",
+            QMessageBox.StandardButton.Yes | QMessageBox.StandardButton.No,
+            QMessageBox.StandardButton.No,
+        )
+        if answer != QMessageBox.StandardButton.Yes:
+            self.statusBar().showMessage("No footing changed.", 5000)
+            return "declined"
+        refused = doc.push(commands.adopt_sizes(doc, sizes, f"Bring {walls} that pass to their smallest passing sizes"))
+        if refused:
+            self.statusBar().showMessage(f"Not adopted: {refused}", 12000)
+            return "nothing"
+        self._say_adopted("Adopted " + "; ".join(changes) + " (Ctrl+Z undoes).")
+        return "passing"
 
     def _on_sizing_finished(self, batch: SizingBatch) -> None:
         doc = self.document
@@ -831,17 +1229,27 @@ class MainWindow(QMainWindow):
         if self._refuse_unchecked("write the schedule"):
             return False
         doc = self.document
-        suggestion = str(doc.path.with_suffix("") if doc.path else Path("schedule")) + "-schedule.csv"
-        path, _ = QFileDialog.getSaveFileName(self, "Export the footing schedule", suggestion, "CSV (*.csv)")
+        suggestion = self.export_suggestion("schedule")
+        path, _ = QFileDialog.getSaveFileName(self, "Export the footing schedule", str(suggestion), "CSV (*.csv)")
         if not path:
             return False
+        if not Path(path).suffix:
+            path += ".csv"
         try:
             write_schedule(doc.project, path, [doc.results[w.id] for w in doc.project.walls])  # all checked
         except OSError as err:
             QMessageBox.warning(self, "Cannot write the schedule", f"{path}\n\n{err}")
             return False
+        self.settings.setValue("last_export_folder", str(Path(path).parent))
         self.statusBar().showMessage(f"Wrote the schedule to {path}", 5000)
         return True
+
+    def export_suggestion(self, kind: str) -> Path:
+        """Where an export is first offered: the project's folder (else the folder of the last export, else
+        the home folder) and :func:`export_file_name` — the same way for the PDF and the CSV."""
+        doc = self.document
+        folder = doc.path.parent if doc.path else Path(self.settings.value("last_export_folder", "") or Path.home())
+        return folder / export_file_name(doc.project.info.name.strip(), kind)
 
     # ---- calculation package -------------------------------------------------------------------
 
@@ -862,9 +1270,8 @@ class MainWindow(QMainWindow):
         if self.package_writer.busy:
             self.statusBar().showMessage("A calculation package is still being written.", 5000)
             return False
-        name = package_file_name(doc.project.info.name.strip())
-        folder = doc.path.parent if doc.path else Path(self.settings.value("last_export_folder", "") or Path.home())
-        path, _ = QFileDialog.getSaveFileName(self, "Export the calculation package", str(folder / name), PDF_FILTER)
+        suggestion = self.export_suggestion("package")
+        path, _ = QFileDialog.getSaveFileName(self, "Export the calculation package", str(suggestion), PDF_FILTER)
         if not path:
             return False
         if not Path(path).suffix:
@@ -1060,6 +1467,57 @@ class MainWindow(QMainWindow):
             window.start(str(path), recover=False)
         window.show()
         return window
+
+    # ---- help ----------------------------------------------------------------------------------
+
+    help_window: HelpWindow | None = None
+
+    def open_guide(self, anchor: str = "contents") -> HelpWindow:
+        """Show the user guide at ``anchor`` (one guide window per main window, made on first use)."""
+        if self.help_window is None:
+            self.help_window = HelpWindow(self)
+        self.help_window.open_at(anchor)
+        return self.help_window
+
+    def focused_field(self, widget: QWidget | None = None) -> str | None:
+        """The engine field path of the input that has the focus ("walls[0].footing.width", "soil.friction"), or None."""
+        w = widget if widget is not None else (QApplication.focusWidget() or self.focusWidget())
+        doc = self.document
+        wall_prefix = f"walls[{doc.current_index}]"
+        forms = ((self.wall_form, wall_prefix + "."), (self.project_form, ""))
+        while w is not None and w is not self:
+            spec = getattr(w, "spec", None)
+            path = getattr(spec, "path", None)
+            if isinstance(path, tuple) and path:
+                scope = getattr(spec, "scope", "wall")
+                return ".".join(path) if scope == "project" else f"{wall_prefix}.{'.'.join(path)}"
+            for form, prefix in forms:
+                for key, choice in getattr(form, "choices", {}).items():
+                    if getattr(choice, "box", None) is w:
+                        return prefix + ".".join(key)
+            loads = getattr(self.wall_form, "loads", None)
+            if w is loads:
+                return f"{wall_prefix}.loads"
+            if w is getattr(self.project_form, "combinations", None):
+                return "criteria.combinations"
+            w = w.parentWidget()
+        return None
+
+    def help_topic(self, widget: QWidget | None = None) -> str:
+        """The guide's section for the focused input or pane (the contents when nothing more precise is known)."""
+        w = widget if widget is not None else (QApplication.focusWidget() or self.focusWidget())
+        field = self.focused_field(w)
+        if field is not None:
+            return anchor_for(field)
+        for attribute, topic in PANE_TOPICS:
+            pane = getattr(self, attribute, None)
+            if w is not None and isinstance(pane, QWidget) and (w is pane or pane.isAncestorOf(w)):
+                return topic
+        return "contents"
+
+    def show_help(self) -> HelpWindow:
+        """F1: the guide at the section about the focused input or pane."""
+        return self.open_guide(self.help_topic())
 
     # ---- about, closing ------------------------------------------------------------------------
 

@@ -3,7 +3,10 @@ the event loop's exit code."""
 
 from __future__ import annotations
 
+import json
+
 import kernline.app.main_window as main_window
+from kernline.engine.resources import resource_path
 from PySide6.QtCore import QSettings, QTimer
 from PySide6.QtWidgets import QApplication
 
@@ -26,7 +29,8 @@ def _run_launch(monkeypatch, tmp_path, **kwargs) -> tuple[int, list]:
 def test_launch_demo_shows_the_demo_and_returns_zero(qapp, monkeypatch, tmp_path):
     code, seen = _run_launch(monkeypatch, tmp_path, demo=True)
     assert code == 0
-    assert seen == [("Cedar Hollow Community Clinic (demo)", ["N1", "S2", "C3", "E4"])]
+    demo = json.loads(resource_path("demo.kernline").read_text(encoding="utf-8"))
+    assert seen == [(f"{demo['project']['name']} (demo)", [w["id"] for w in demo["walls"]])]
 
 
 def test_launch_with_a_file_opens_it(qapp, monkeypatch, tmp_path, demo_file):
