@@ -277,7 +277,7 @@ class MainWindow(QMainWindow):
         self.notes = QWidget()
         self.notes.setObjectName("verdictAndWarnings")
         self.notes.setSizePolicy(QSizePolicy.Policy.Preferred, QSizePolicy.Policy.Fixed)
-        self.notes_row = QBoxLayout(QBoxLayout.Direction.TopToBottom, self.notes)
+        self.notes_row = QBoxLayout(QBoxLayout.Direction.LeftToRight, self.notes)
         self.notes_row.setContentsMargins(0, 0, 0, 0)
         self.notes_row.setSpacing(2)
         self.notes_row.addWidget(verdict_box, 2)
@@ -295,9 +295,18 @@ class MainWindow(QMainWindow):
         self.right_splitter = right
 
         self.walls_view.setMinimumWidth(WALLS_WIDTH)
+        # the walls list, and under it the warnings when the right column is too narrow to hold them beside
+        # the verdict (the tabs then keep that height)
+        left = QWidget()
+        left.setObjectName("wallsColumn")
+        self.left_layout = QVBoxLayout(left)
+        self.left_layout.setContentsMargins(0, 0, 0, 0)
+        self.left_layout.setSpacing(4)
+        self.left_layout.addWidget(self.walls_view, 1)
+        self.walls_column = left
         main = QSplitter(Qt.Orientation.Horizontal)
         main.setObjectName("mainColumns")
-        main.addWidget(self.walls_view)
+        main.addWidget(left)
         main.addWidget(self.forms_scroll)
         main.addWidget(right)
         main.setStretchFactor(0, 0)
@@ -512,15 +521,18 @@ class MainWindow(QMainWindow):
         self.welcome.recent_requested.connect(self._open_recent)
 
     def frame_panes(self) -> list[tuple[str, QWidget]]:
-        """The panes in the order Tab visits them: walls, inputs, drawings, verdict, warnings, tabs."""
-        return [
+        """The panes in the order Tab visits them: walls, inputs, drawings, verdict, tabs, and the warnings
+        after the verdict when they sit beside it, after the walls list when they sit under it."""
+        panes: list[tuple[str, QWidget]] = [
             ("walls", self.walls_view),
             ("inputs", self.forms_scroll),
             ("drawings", self.drawings),
             ("verdict", self.verdict_box),
-            ("warnings", self.warnings_slot),
             ("tabs", self.tabs),
         ]
+        # the warnings where they are shown: after the verdict beside it, or after the walls list under it
+        panes.insert(4 if self.warnings_beside_verdict else 1, ("warnings", self.warnings_slot))
+        return panes
 
     def _focus_ring(self) -> list[QWidget]:
         """Every widget of this window that Tab can reach, in the focus chain's present order."""
@@ -720,8 +732,6 @@ class MainWindow(QMainWindow):
             # the spare lines only from height nothing else needs: the drawings' least height (with its
             # captions' room), the tabs' least height, and the warnings' slot when it sits under the verdict
             others = self._drawings_least() + ResultsPane.GAP + self.tabs.minimumSizeHint().height()
-            if self.notes_row.direction() == QBoxLayout.Direction.TopToBottom:
-                others += self.warnings_slot.height() + self.notes_row.spacing()
             spare = max(0, min(spare, column - others - base))
         height = base + spare
         if self.verdict_box.minimumHeight() != height or self.verdict_box.maximumHeight() != height:
@@ -737,9 +747,7 @@ class MainWindow(QMainWindow):
     def _least_notes_height(self) -> int:
         """The verdict-and-warnings strip without the verdict's spare lines (the least the window must give it)."""
         base = self.verdict.minimumHeight() or self.verdict.minimumSizeHint().height()
-        if self.notes_row.direction() == QBoxLayout.Direction.TopToBottom:
-            return base + self.notes_row.spacing() + self.warnings_slot.height()
-        return max(base, self.warnings_slot.height())
+        return max(base, self.warnings_slot.height()) if self.warnings_beside_verdict else base
 
     def _fit_notes(self) -> None:
         """Pin the verdict-and-warnings strip at the height its reserved slots take, so the tabs under it never
@@ -769,6 +777,26 @@ class MainWindow(QMainWindow):
                 self._share_results()
         return super().eventFilter(watched, event)
 
+    @property
+    def warnings_beside_verdict(self) -> bool:
+        return self.notes_row.indexOf(self.warnings_slot) >= 0
+
+    def _place_warnings(self, wide: bool) -> None:
+        """Warnings beside the verdict in a wide right column; under the walls list otherwise."""
+        if wide == self.warnings_beside_verdict:
+            return
+        slot = self.warnings_slot
+        if wide:
+            self.left_layout.removeWidget(slot)
+            self.notes_row.addWidget(slot, 1, Qt.AlignmentFlag.AlignTop)
+        else:
+            self.notes_row.removeWidget(slot)
+            self.left_layout.addWidget(slot)
+        slot.show()
+        self._verdict_base = -1  # the strip's height changes: work the verdict's reserve out again
+        self._fit_verdict()
+        self._set_tab_order()
+
     def _share_columns(self) -> None:
         """Walls list and inputs keep their widths; every further pixel of width goes to the drawings and tables."""
         main = self.main_splitter
@@ -782,10 +810,7 @@ class MainWindow(QMainWindow):
         """Drawings above, verdict and tabs below, in fixed shares of the column's height; verdict and warnings
         side by side once the column is wide enough."""
         right = self.right_splitter
-        wide = right.width() >= WIDE_COLUMN
-        direction = QBoxLayout.Direction.LeftToRight if wide else QBoxLayout.Direction.TopToBottom
-        if self.notes_row.direction() != direction:
-            self.notes_row.setDirection(direction)
+        self._place_warnings(right.width() >= WIDE_COLUMN)
         self._fit_verdict(resized=True)
         height = right.height() - right.handleWidth()
         if self._user_split[right] or height <= 0:

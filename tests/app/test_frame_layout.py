@@ -11,7 +11,6 @@ from __future__ import annotations
 import pytest
 from kernline.app.main_window import FORMS_WIDTH, WALLS_WIDTH, WIDE_COLUMN
 from PySide6.QtCore import QPoint, QRect
-from PySide6.QtWidgets import QBoxLayout
 from window_helpers import field, select_wall, type_into
 
 SIZES = [(1280, 800), (1480, 940), (1920, 1080)]
@@ -124,17 +123,20 @@ def test_the_extra_width_of_a_wide_screen_goes_to_the_drawings_and_tables(qtbot,
 @pytest.mark.parametrize("size", SIZES)
 def test_the_tabs_have_a_fair_share_of_the_column(qtbot, window, size):
     """The tabs (with the design map) get real room: 30 % of the column at the larger sizes; at 1280 x 800,
-    where the drawings are at their least height, what remains (at least the tabs' own least height); verdict and warnings sit side by side in a wide column."""
+    where the drawings are at their least height, what remains (at least the tabs' own least height).
+    The warnings sit beside the verdict in a wide column, under the walls list in a narrow one.; verdict and warnings sit side by side in a wide column."""
     _settle(qtbot, window, size)
     p = panes(window)
     column = window.right_splitter.height()
     assert p["tabs"].height() >= (window.tabs.minimumSizeHint().height() if size[1] <= 800 else 0.3 * column)
     wide = window.right_splitter.width() >= WIDE_COLUMN
-    direction = window.notes_row.direction()
-    assert direction == (QBoxLayout.Direction.LeftToRight if wide else QBoxLayout.Direction.TopToBottom)
     assert wide == (size[0] >= 1480)
-    if wide:
+    assert window.warnings_beside_verdict == wide
+    if wide:  # beside the verdict
         assert p["warnings"].left() >= p["verdict"].right()
+    else:  # under the walls list, so the tabs keep that height
+        assert window.walls_column.isAncestorOf(window.warnings_slot)
+        assert p["warnings"].top() >= p["walls"].bottom() and p["warnings"].right() <= p["forms"].left()
     # nothing overlaps: the drawings end above the verdict, the verdict above the tabs
     assert p["drawings"].bottom() < p["verdict"].top() < p["tabs"].top()
     assert p["tabs"].bottom() < p["caution"].top()

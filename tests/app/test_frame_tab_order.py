@@ -7,6 +7,7 @@ Basis: issue 13 ("check the tab order so the keyboard reaches every field").
 
 from __future__ import annotations
 
+import pytest
 from PySide6.QtCore import Qt
 from PySide6.QtWidgets import QApplication, QMenu, QTabWidget, QWidget
 
@@ -46,9 +47,19 @@ def _runs(names: list[str]) -> list[str]:
     return out
 
 
-def test_tab_goes_pane_by_pane_and_back_to_the_walls(window):
+@pytest.mark.parametrize(
+    ("size", "order"),
+    [
+        ((1480, 940), ["walls", "inputs", "drawings", "verdict", "warnings", "tabs"]),  # warnings beside the verdict
+        ((1280, 800), ["walls", "warnings", "inputs", "drawings", "verdict", "tabs"]),  # warnings under the walls
+    ],
+)
+def test_tab_goes_pane_by_pane_and_back_to_the_walls(qtbot, window, size, order):
+    window.resize(*size)
+    qtbot.waitUntil(lambda: window.size().toTuple() == size, timeout=2000)
+    qtbot.wait(20)
     chain = _visible_chain(window)
-    assert _runs([_pane(window, w) for w in chain]) == ["walls", "inputs", "drawings", "verdict", "warnings", "tabs"]
+    assert _runs([_pane(window, w) for w in chain]) == order
 
 
 def test_tab_reaches_every_control_of_the_frame(window):
