@@ -142,9 +142,20 @@ class ResultsPane(QWidget):
         notes.setParent(self)
         tabs.setParent(self)
 
+    _least: QSize | None = None  # asked for often by the splitter: kept until a child's size rules change
+
     def minimumSizeHint(self) -> QSize:  # noqa: N802 - Qt's name
-        tabs = self.tabs.minimumSizeHint()
-        return QSize(max(self.notes.minimumSizeHint().width(), tabs.width()), self.least_strip() + self.GAP + tabs.height())
+        if self._least is None:
+            tabs = self.tabs.minimumSizeHint()
+            self._least = QSize(
+                max(self.notes.minimumSizeHint().width(), tabs.width()), self.least_strip() + self.GAP + tabs.height()
+            )
+        return QSize(self._least)
+
+    def forget_hint(self) -> None:
+        """The strip's or the tabs' size rules changed: work the least size out again."""
+        self._least = None
+        self.updateGeometry()
 
     def sizeHint(self) -> QSize:  # noqa: N802 - Qt's name
         return self.minimumSizeHint()
@@ -161,7 +172,8 @@ class ResultsPane(QWidget):
         self.tabs.setGeometry(0, top, width, max(0, self.height() - top))
 
     def event(self, event) -> bool:
-        if event.type() == QEvent.Type.LayoutRequest:  # the strip's height changed: place again
+        if event.type() == QEvent.Type.LayoutRequest:  # a child's size rules changed: place again
+            self._least = None
             self.place()
         return super().event(event)
 
@@ -757,8 +769,8 @@ class MainWindow(QMainWindow):
         height = layout.sizeHint().height()
         if self.notes.minimumHeight() != height or self.notes.maximumHeight() != height:
             self.notes.setFixedHeight(height)
-            self.results_pane.updateGeometry()
             self.results_pane.place()
+        self.results_pane.forget_hint()
 
     def _fit_warnings_slot(self) -> None:
         """Show the "nothing" line when there are no warnings; grow the slot only if the list ever outgrows it."""
