@@ -72,13 +72,14 @@ def candidates(environ: Mapping[str, str]) -> list[str]:
     """The platform plugins Qt will try, in order, from the environment.
 
     ``QT_QPA_PLATFORM`` may name several, separated by ";", each with options after ":"
-    ("xcb:nograb;offscreen"). Unset, Qt 6 tries wayland first in a Wayland session
-    (``XDG_SESSION_TYPE=wayland``) and falls back to xcb; elsewhere it uses xcb.
+    ("xcb:nograb;offscreen"). Unset, Qt 6 may try wayland first where a Wayland display is set
+    (``WAYLAND_DISPLAY``) and falls back to xcb; elsewhere it uses xcb. Both are taken as candidates
+    then, so the window is never stopped while either could load.
     """
     text = environ.get("QT_QPA_PLATFORM", "").strip()
     if text:
         return [part.split(":")[0].strip().lower() for part in text.split(";") if part.strip()]
-    if environ.get("XDG_SESSION_TYPE", "").lower() == "wayland" and environ.get("WAYLAND_DISPLAY"):
+    if environ.get("WAYLAND_DISPLAY"):
         return ["wayland", "xcb"]
     return ["xcb"]
 

@@ -56,6 +56,7 @@ def test_xcb_without_a_display_is_left_to_the_command_line():
 def test_a_wayland_session_falls_back_to_xcb_like_qt():
     env = {"XDG_SESSION_TYPE": "wayland", "WAYLAND_DISPLAY": "wayland-0", "DISPLAY": ":0"}
     assert candidates(env) == ["wayland", "xcb"]
+    assert candidates({"DISPLAY": ":0"}) == ["xcb"]
     # wayland loads: xcb's lack does not matter
     assert platform_problem(env, without("libxcb-cursor.so.0")) is None
     # neither loads: the line names what the fallback (xcb) lacks
