@@ -11,9 +11,11 @@ is open. File > Export calculation package writes the PDF on a worker (:class:`r
 
 from __future__ import annotations
 
+import contextlib
 import os
 import re
 import sys
+import warnings
 from collections.abc import Callable, Mapping
 from pathlib import Path
 from typing import Any
@@ -516,7 +518,9 @@ class MainWindow(QMainWindow):
         self.design_map.size_all_requested.connect(self.size_all)
         # "Adopt all chosen sizes" changes the failing walls only; passing walls only after asking
         adopt_all = self.design_map.adopt_all_button
-        adopt_all.clicked.disconnect()
+        with warnings.catch_warnings(), contextlib.suppress(RuntimeError, TypeError):
+            warnings.simplefilter("ignore", RuntimeWarning)  # nothing connected: nothing to take off
+            adopt_all.clicked.disconnect()
         adopt_all.clicked.connect(self.adopt_all_sizes)
         adopt_all.setToolTip(
             "Make each failing wall's chosen size its footing, in one undoable step; walls that pass keep theirs. "
