@@ -67,12 +67,8 @@ def test_about_box_and_caution_line_carry_the_caution(window, dialogs):
     assert CAUTION in dialogs.abouts[0]
 
 
-def test_every_input_has_a_tooltip_and_the_tab_order_follows_the_form(window):
-    """Tooltips define each input; Tab goes down the form in reading order (tables keep their viewport)."""
+def test_every_input_has_a_tooltip(window):
+    """Tooltips define each input. (Tab order: tests/app/test_forms_layout_and_keys.py presses Tab through
+    both forms; Qt's focus chain also holds widgets that take no focus, so it is not compared here.)"""
     fields = window.wall_form.group.fields + window.project_form.group.fields
     assert all(f.edit.toolTip() and f.spec.tip in f.edit.toolTip() for f in fields)
-    order = window.wall_form.focus_order() + window.project_form.focus_order()
-    for a, b in zip(order, order[1:], strict=False):
-        if a is window.wall_form.loads.table:
-            continue  # a table hands focus to its own viewport first
-        assert a.nextInFocusChain() is b, (a.objectName(), b.objectName())
