@@ -795,7 +795,18 @@ def _wall(raw: Any, units: str) -> Wall:
         WallConstruction.LIGHT_FRAME.value,
         "a light-frame wall: the moment section halfway to the wall's centre (ACI 318-19 Table 13.2.7.1, as masonry)",
     )
-    chord_offset = _quantity(obj, "chord_offset", Kind.LENGTH, non_negative=True) if "chord_offset" in obj else 3.0 * INCH
+    if "chord_offset" in obj or construction is WallConstruction.LIGHT_FRAME:  # only a light-frame wall uses it
+        chord_offset = _quantity(
+            obj,
+            "chord_offset",
+            Kind.LENGTH,
+            "3 in",
+            "the chord forces 3 in inside the wall's ends, about half a doubled-stud chord (an assumption; "
+            "it places the light-frame wall's overturning couple on the footing along its length)",
+            non_negative=True,
+        )
+    else:
+        chord_offset = 3.0 * INCH
     return Wall(
         id=wid,
         label=_text(obj, "label"),
