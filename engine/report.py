@@ -1317,8 +1317,27 @@ def _frame_geometry(units: str) -> tuple[float, float, float, float, float, floa
 
 def render_package(package: Package) -> bytes:
     """Lay out ``package`` and return the PDF bytes."""
+    return _render(package)[0]
+
+
+def sheet_fill(package: Package) -> tuple[float, ...]:
+    """Lay out ``package`` and return, per sheet in order, the share of its body frame (below the title
+    strip, above the footer) that holds content, from 0 (blank) to 1 (full)."""
+    return _render(package)[1]
+
+
+def _render(package: Package) -> tuple[bytes, tuple[float, ...]]:
+    """The PDF bytes and each sheet's filled share of its body frame (see :func:`sheet_fill`)."""
     from reportlab import rl_config
     from reportlab.platypus import BaseDocTemplate, Frame, PageTemplate
+
+    fill: list[float] = []
+
+    class SheetDoc(BaseDocTemplate):
+        def handle_pageEnd(self) -> None:  # noqa: N802 - reportlab's name
+            f = self.frame
+            fill.append(min(max((f._y2 - f._y) / (f._y2 - f._y1), 0.0), 1.0))
+            super().handle_pageEnd()
 
     # Binary (not ASCII85) page streams: the pure-Python encoder costs a noticeable part of a large
     # package, and only this module writes PDFs in Kernline.
@@ -1327,7 +1346,7 @@ def render_package(package: Package) -> bytes:
     fonts = _fonts()
     page_w, page_h, fx, fy, fw, fh = _frame_geometry(package.units)
     buffer = io.BytesIO()
-    doc = BaseDocTemplate(
+    doc = SheetDoc(
         buffer,
         pagesize=(page_w, page_h),
         leftMargin=fx,
@@ -1353,7 +1372,7 @@ def render_package(package: Package) -> bytes:
         story += builder.section(section, package)
     story = story[1:]  # no page break before the first section
     doc.build(story, canvasmaker=_canvas_class(package, fonts))
-    return buffer.getvalue()
+    return buffer.getvalue(), tuple(fill)
 
 
 def _unpack(project: Any) -> tuple[Project, str | None]:
@@ -1386,11 +1405,15 @@ def render_report(project: Any, wall_ids: Sequence[str] | str | None = None, **o
     Raises:
         InputError: an unknown wall id or an empty selection.
     """
+    return render_package(report_package(project, wall_ids, **options))
+
+
+def report_package(project: Any, wall_ids: Sequence[str] | str | None = None, **options: Any) -> Package:
+    """The calculation package :func:`render_report` prints, as the document model (same arguments)."""
     model, report = _unpack(project)
     if report is not None:
         options.setdefault("soil_report", report)
-    package = build_package(model, _wall_list(wall_ids), **options)
-    return render_package(package)
+    return build_package(model, _wall_list(wall_ids), **options)
 
 
 def write_report(

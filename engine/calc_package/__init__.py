@@ -1233,13 +1233,13 @@ def _wall_sections(project: Project, report: WallReport, fmt: _Fmt) -> tuple[Sec
     blocks.append(
         DrawingRow(
             (
-                elevation := elevation_drawing(wall, fmt, 372.0, 132.0),
+                elevation := elevation_drawing(wall, fmt, 372.0, 170.0),
                 section_drawing(wall, project, fmt, 140.0, max(elevation.height, 150.0)),
             )
         )
     )
+    blocks += _loads(project, wall, fmt)  # right under the sketch: its numbered tags are this table's numbers
     blocks += _inputs(project, wall, result, fmt)
-    blocks += _loads(project, wall, fmt)
     blocks += _self_weight(project, wall, result, fmt)
     checks: list[Block] = []
     for check in result.governing:
@@ -1339,7 +1339,7 @@ def _loads(project: Project, wall: Wall, fmt: _Fmt) -> list[Block]:
         label = _clean(load.label)
         if _is_long(label):
             long_labels.append((i, label))
-        label = brief(label) + (" [reverses]" if getattr(load, "reverses", False) else "")
+        label = brief(label)  # a reversing load shows its position in direction − ("−:") beside x
         index = next((k for k, w in enumerate(project.walls) if w.id == wall.id), -1)
         position = mark_assumed(project, f"walls[{index}].loads[{i - 1}]", _load_position(load, fmt))
         rows.append((str(i), kind, load.case.value, value, position, resultant, where, plain(label)))
@@ -1359,7 +1359,7 @@ def _loads(project: Project, wall: Wall, fmt: _Fmt) -> list[Block]:
         Para(
             formula(
                 "P = w (s_{2} − s_{1}) at the mid-point (Hibbeler 4.9); x on footing = extension at start + position; "
-                '"−:" the position in direction − of a reversing load; negative values act upward.'
+                '"−:" the position in direction − of a load that reverses with the direction; negative values act upward.'
             ),
             "small",
         ),

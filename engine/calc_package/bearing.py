@@ -179,7 +179,7 @@ def bearing_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
         ),
         _check_verdict(Check.BEARING, br.ratio, br.required, br.passes, f"q_{{a}} / {q_symbol}"),
     ]
-    drawing = pressure_drawing(diagram, br.allowable, result, g, fmt, CONTENT_WIDTH, 84.0)
+    drawing = pressure_drawing(diagram, br.allowable, result, g, fmt, CONTENT_WIDTH, 118.0)
     # the heading and the equations from N to the pressures on one sheet; the allowable, ratio and
     # verdict on one sheet; the diagram with them when it fits
     return [*_lead(blocks, 2), *_tail(tail, 2), drawing]

@@ -10,8 +10,7 @@ import math
 from collections.abc import Sequence
 
 from ..concrete.longitudinal import BeamDiagram
-from ..loads import lateral_resultants
-from ..model import LineLoad, PointLoad, Project, Wall
+from ..model import LateralLoad, LineLoad, PointLoad, Project, Wall
 from ..results import Governing, WallResult
 from ..soil_pressure import PressureDiagram
 from ..units import Kind
@@ -110,6 +109,7 @@ _US_SCALES = (
     (128, '3/32" = 1\'-0"'),
     (192, '1/16" = 1\'-0"'),
     (240, '1" = 20\'-0"'),
+    (360, '1" = 30\'-0"'),
     (384, '1/32" = 1\'-0"'),
     (480, '1" = 40\'-0"'),
     (600, '1" = 50\'-0"'),
@@ -137,30 +137,89 @@ def drawing_scale(fit: float, units: str) -> tuple[float, str]:
     return fit, f"1:{_POINTS_PER_METRE / fit:,.0f}"
 
 
-def _group_loads(items: Sequence[tuple[float, str]]) -> list[tuple[float, str]]:
-    """Merge labels of loads at the same position."""
-    out: dict[float, list[str]] = {}
-    for x, text in items:
-        key = round(x, 6)
-        out.setdefault(key, []).append(text)
-    return [(x, ", ".join(t)) for x, t in sorted(out.items())]
+# Load tags: a small box holding the numbers of the loads table ("No.") next to the arrow it names.
+_TAG_SIZE = 6.5  # points: the tag's text (the package's floor for drawings)
+_TAG_PAD = 2.0  # points between the tag's text and its box
+_TAG_H = 1.05 * _TAG_SIZE + 2 * _TAG_PAD  # the box's height
+_LEVEL = 14.0  # points between the bars of line loads that overlap along the wall
+_ARROW = 10.0  # points: length of a line load's arrow (drawn 0.6 pt wide; a point load's 0.7 pt)
+
+
+def _text_width(text: str, size: float) -> float:
+    """A generous estimate of a label's width in the drawing font (DejaVu Sans: digits 0.636 em)."""
+    return sum((0.64 if c.isdigit() else 0.32 if c in ", ." else _TEXT_WIDTH) for c in text) * size
+
+
+def _numbers(indexes: Sequence[int]) -> str:
+    return ", ".join(str(k) for k in indexes)
+
+
+def _tag(x: float, y: float, text: str, anchor: str) -> tuple[list[Shape], tuple[float, float]]:
+    """A numbered tag whose box's lower edge is at ``y``; ``anchor`` places the box's "start", "middle"
+    or "end" at ``x``. Returns its shapes and the box's horizontal extent."""
+    w = _text_width(text, _TAG_SIZE) + 2 * _TAG_PAD
+    x0 = {"start": x, "middle": x - w / 2.0, "end": x - w}[anchor]
+    baseline = y + _TAG_PAD + 0.3 * _TAG_SIZE
+    shapes: list[Shape] = [
+        Rect(x0, y, w, _TAG_H, fill="none", width=0.5),
+        Label(x0 + w / 2.0, baseline, text, "middle", _TAG_SIZE, bold=True, color="load"),
+    ]
+    return shapes, (x0, x0 + w)
+
+
+def _levels(spans: Sequence[tuple[float, float]]) -> list[int]:
+    """The lowest level for each span (in order) that no earlier span on that level overlaps."""
+    taken: list[list[tuple[float, float]]] = []
+    out: list[int] = []
+    for a, b in spans:
+        level = next(
+            (k for k, row in enumerate(taken) if all(b <= c - 1e-9 or a >= d + 1e-9 for c, d in row)),
+            len(taken),
+        )
+        if level == len(taken):
+            taken.append([])
+        taken[level].append((a, b))
+        out.append(level)
+    return out
 
 
 def elevation_drawing(wall: Wall, fmt: Formatter, width: float, height: float) -> Drawing:
-    """To-scale elevation of the wall on its footing with its loads and dimensions (points)."""
+    """To-scale elevation of the wall on its footing, each load drawn as one arrow with a numbered tag.
+
+    The tags carry the numbers of the loads table on the same sheet (its "No." column: case, type, value
+    and position); loads that act at the same place in the same sense share an arrow and a tag. Line
+    loads are a bar over the length they act on with one arrow at its middle (bars that overlap along
+    the wall stand one above the other); point loads one arrow onto (or, for uplift, away from) the
+    wall's top; in-plane shears an arrow at their height, pushing in direction +, whose heights are
+    dimensioned on the right. ``height`` is the most the drawing may take; it shrinks to what it holds.
+    """
     f = wall.footing
     length = wall.footing_length
-    laterals = lateral_resultants(wall)
-    h_top = max([h.height for h in laterals] + [0.0])
+    numbered = list(enumerate(wall.loads, start=1))
+    laterals = [(i, ld) for i, ld in numbered if isinstance(ld, LateralLoad)]
+    h_top = max([ld.height for _, ld in laterals] + [0.0])
     stem_h = wall.stem.height if wall.stem.present else 0.0
     wall_top = max(h_top, stem_h + 2.0)  # at least a stub of wall above the stem
-    line_loads = [ld for ld in wall.loads if isinstance(ld, LineLoad)]
-    point_loads = [ld for ld in wall.loads if isinstance(ld, PointLoad)]
-    band = 10.0 * len(line_loads) + (24.0 if point_loads else 0.0)
-    left_margin, right_margin, bottom_margin, top_margin = 86.0, 46.0, 32.0, 14.0 + band
-    fit = min((width - left_margin - right_margin) / length, (height - bottom_margin - top_margin) / (wall_top + f.thickness))
+    ws, we = f.extension_start, f.extension_start + wall.length
+
+    # line loads: one bar per extent and sense; point loads: one arrow per position and sense
+    bars: dict[tuple[float, float, bool], list[int]] = {}
+    points: dict[tuple[float, bool], list[int]] = {}
+    for i, ld in numbered:
+        if isinstance(ld, LineLoad):
+            bars.setdefault((round(ld.start, 6), round(ld.end, 6), ld.value < 0), []).append(i)
+        elif isinstance(ld, PointLoad):
+            points.setdefault((round(ld.at, 6), ld.value < 0), []).append(i)
+    bar_keys = sorted(bars, key=lambda k: (k[2], k[0], -(k[1] - k[0])))  # downward first, then from the start
+    levels = _levels([(a, b) for a, b, _ in bar_keys])
+    n_levels = max(levels, default=-1) + 1
+    bars_top = (4.0 + _LEVEL * n_levels) if bars else 0.0
+    stalk = bars_top + 14.0  # points: a point load's arrow reaches above every bar
+    above = (stalk + 2.0 + _TAG_H if points else bars_top) + 4.0
+    left_margin, right_margin, bottom_margin = 86.0, 46.0, 34.0
+    fit = min((width - left_margin - right_margin) / length, (height - bottom_margin - above) / (wall_top + f.thickness))
     s, scale_name = drawing_scale(fit, fmt.units)
-    height = bottom_margin + (wall_top + f.thickness) * s + top_margin  # the box shrinks to what it holds
+    height = bottom_margin + (wall_top + f.thickness) * s + above  # the box shrinks to what it holds
     x0 = left_margin + ((width - left_margin - right_margin) - length * s) / 2.0
     y0 = bottom_margin + f.thickness * s  # top of footing
 
@@ -174,7 +233,7 @@ def elevation_drawing(wall: Wall, fmt: Formatter, width: float, height: float) -
     # grade line over the footing
     grade = Y(f.cover)
     shapes.append(Line(X(0) - 14, grade, X(length) + 8, grade, 0.5, dash=True, color="soil"))
-    shapes.append(Label(X(0) - 16, grade - 2, "grade", "end", 5.5, color="soil"))
+    shapes.append(Label(X(0) - 16, grade - 2, "grade", "end", 6.5, color="soil"))
     if f.cover > 0:
         shapes.append(Rect(X(0), Y(0), length * s, f.cover * s, fill="soil", width=0))
     # footing
@@ -184,75 +243,81 @@ def elevation_drawing(wall: Wall, fmt: Formatter, width: float, height: float) -
     if wall.stem.present:
         shapes.append(Rect(X(0), Y(0), length * s, stem_h * s, fill="stem"))
         base = stem_h
-    ws, we = f.extension_start, f.extension_start + wall.length
     shapes.append(Rect(X(ws), Y(base), wall.length * s, (wall_top - base) * s, fill="wall"))
-    # break mark at the top of the wall (the wall continues above)
     top = Y(wall_top)
-    shapes.append(Line(X(ws) + 0.45 * wall.length * s, top, X(ws) + 0.5 * wall.length * s, top + 4, 0.6, color="paper"))
-    # lateral loads: arrows at their heights pushing in direction +
-    for y, text in _group_loads([(h.height, f"{h.case.value} {fmt.force(h.force)}") for h in laterals]):
+    # in-plane shears: one arrow per height, tagged at its tail
+    heights: dict[float, list[int]] = {}
+    for i, ld in laterals:
+        heights.setdefault(round(ld.height, 6), []).append(i)
+    for y, idx in sorted(heights.items()):
         yy = Y(y)
-        shapes.append(Arrow(X(ws) - 30, yy, X(ws), yy))
-        shapes.append(Label(X(ws) - 33, yy - 2, text, "end", 6.0, color="load"))
-    # heights of lateral loads above the top of footing, on the right
-    for k, (y, _) in enumerate(_group_loads([(h.height, "") for h in laterals])):
+        shapes.append(Arrow(X(ws) - 26, yy, X(ws), yy))
+        shapes += _tag(X(ws) - 28, yy - _TAG_H / 2.0, _numbers(idx), "end")[0]
+    for k, y in enumerate(sorted(heights)):
         shapes.append(Dimension(X(length), Y(0), X(length), Y(y), fmt.length(y), offset=14.0 + 18.0 * k))
-    # vertical loads: line loads as bands of arrows above the wall, point loads as single arrows
-    y_band = top + 8.0
-    for ld in line_loads:
-        xa, xb = X(f.extension_start + ld.start), X(f.extension_start + ld.end)
-        down = ld.value >= 0
-        shapes.append(Line(xa, y_band + 8, xb, y_band + 8, 0.5, color="load"))
-        n = max(2, int((xb - xa) / 18.0) + 1)
-        for k in range(n):
-            xx = xa + (xb - xa) * k / (n - 1)
-            if down:
-                shapes.append(Arrow(xx, y_band + 8, xx, y_band + 1, 0.5))
-            else:
-                shapes.append(Arrow(xx, y_band + 1, xx, y_band + 8, 0.5))
-        text = f"{ld.case.value} {fmt.line_load(ld.value)}" + (" (reverses)" if ld.reverses else "")
-        shapes.append(Label(xa - 4, y_band + 2, text, "end", 5.5, color="load"))
-        y_band += 10.0
-    shear_at_top = any(abs(Y(h.height) - top) < _CORNER_CLEAR for h in laterals)
-    if point_loads:
-        items = [
-            (f.extension_start + p.at, f"{p.case.value} {fmt.force(p.value)}" + (" rev." if p.reverses else ""))
-            for p in point_loads
-        ]
-        for up in (False, True):  # downward (compression) and upward (uplift) loads drawn apart
-            group = [it for it, p in zip(items, point_loads, strict=True) if (p.value < 0) == up]
-            for x, text in _group_loads(group):
-                xx = X(x)
-                # a shear arrow at the wall's top corner: keep the point load's arrowhead clear above it
-                gap = 7.0 if shear_at_top and abs(xx - X(ws)) < _CORNER_CLEAR else 2.0
-                if up:  # uplift: the arrow leaves the top of the wall, pointing up
-                    shapes.append(Arrow(xx, top + gap, xx, y_band + 16, 0.7))
-                else:
-                    shapes.append(Arrow(xx, y_band + 16, xx, top + gap, 0.7))
-                shapes.append(Label(xx, y_band + 18, text, "middle", 5.5, color="load"))
+    # point loads: an arrow from above every bar down onto the wall (uplift: from the wall upward)
+    shear_at_top = any(abs(Y(ld.height) - top) < _CORNER_CLEAR for _, ld in laterals)
+    stalks: list[float] = []
+    for (at, up), idx in sorted(points.items()):
+        xx = X(ws + at)
+        stalks.append(xx)
+        # a shear arrow at the wall's top corner: keep the point load's arrowhead clear above it
+        gap = 7.0 if shear_at_top and abs(xx - X(ws)) < _CORNER_CLEAR else 1.0
+        if up:
+            shapes.append(Arrow(xx, top + gap, xx, top + stalk, 0.7))
+        else:
+            shapes.append(Arrow(xx, top + stalk, xx, top + gap, 0.7))
+        shapes += _tag(xx, top + stalk + 2.0, _numbers(idx), "middle")[0]
+    # line loads: a bar over the loaded length, one arrow at a free place along it, the tag beside it
+    for (a, b, up), level in zip(bar_keys, levels, strict=True):
+        xa, xb = X(ws + a), X(ws + b)
+        yb = top + 4.0 + _LEVEL * level
+        text = _numbers(bars[(a, b, up)])
+        shapes.append(Line(xa, yb, xb, yb, 0.8, color="load"))
+        shapes.append(Line(xa, yb - 2.0, xa, yb + 2.0, 0.8, color="load"))
+        shapes.append(Line(xb, yb - 2.0, xb, yb + 2.0, 0.8, color="load"))
+        w = _text_width(text, _TAG_SIZE) + 2 * _TAG_PAD
+        candidates = [(xa + xb) / 2.0 + t * (xb - xa) for t in (0.0, -0.2, 0.2, -0.35, 0.35)]
+
+        def clear(xm: float, w: float = w) -> bool:
+            return all(abs(xm - p) > 3.0 and not (xm + 1.0 <= p <= xm + 3.0 + w) for p in stalks)
+
+        xm = next((c for c in candidates if clear(c)), candidates[0])
+        stalks.append(xm)  # the next bar's arrow stands elsewhere
+        if up:
+            shapes.append(Arrow(xm, yb, xm, yb + _ARROW, 0.6))
+        else:
+            shapes.append(Arrow(xm, yb + _ARROW, xm, top + 0.5, 0.6))
+        shapes += _tag(xm + 2.0, yb + 1.5, text, "start")[0]
     # dimensions: footing length, extensions and wall length, footing thickness
     shapes.append(
         Dimension(X(0), Y(-f.thickness), X(length), Y(-f.thickness), f"L_{{f}} = {fmt.length(length)}", offset=-18.0, markup=True)
     )
-    if f.extension_start > 0 or f.extension_end > 0:
-        if f.extension_start > 0:
-            shapes.append(
-                Dimension(
-                    X(0), Y(-f.thickness), X(ws), Y(-f.thickness), fmt.length(f.extension_start), offset=-8.0, outside="start"
-                )
-            )
-        if f.extension_end > 0:
-            shapes.append(Dimension(X(we), Y(-f.thickness), X(length), Y(-f.thickness), fmt.length(f.extension_end), offset=-8.0))
+    if f.extension_start > 0:
+        shapes.append(
+            Dimension(X(0), Y(-f.thickness), X(ws), Y(-f.thickness), fmt.length(f.extension_start), offset=-8.0, outside="start")
+        )
+    if f.extension_end > 0:
+        shapes.append(Dimension(X(we), Y(-f.thickness), X(length), Y(-f.thickness), fmt.length(f.extension_end), offset=-8.0))
     wall_text = f"wall, {fmt.length(wall.length)} long"
-    if wall.length * s > _TEXT_WIDTH * 6.0 * len(wall_text) + 6.0:
-        shapes.append(Label(X(ws + wall.length / 2), Y((base + wall_top) / 2), wall_text, "middle", 6.0))
+    if wall.length * s > _text_width(wall_text, 6.5) + 6.0:
+        shapes.append(Label(X(ws + wall.length / 2), Y((base + wall_top) / 2) - 2.0, wall_text, "middle", 6.5))
     else:  # a narrow wall: the text runs up it
-        shapes.append(Label(X(ws + wall.length / 2) + 2.0, Y((base + wall_top) / 2), wall_text, "middle", 6.0, angle=90.0))
+        shapes.append(Label(X(ws + wall.length / 2) + 2.0, Y((base + wall_top) / 2), wall_text, "middle", 6.5, angle=90.0))
     if wall.stem.present:
-        shapes.append(Label(X(ws + wall.length / 2), Y(stem_h / 2) - 2, f"stem wall, {fmt.length(stem_h)} high", "middle", 5.5))
-    shapes.append(Label(X(0), Y(-f.thickness) - 30, "x = 0", "middle", 5.0))
-    shapes.append(Label(X(length), Y(-f.thickness) - 30, "x = L_{f}", "middle", 5.0, markup=True))
-    caption = f"Elevation along the wall, scale {scale_name} (printed at 100%); wall drawn to the highest lateral load; + direction to the right."
+        # the stem's words in the taller of its parts below and above grade, when they fit there
+        parts = [(0.0, min(f.cover, stem_h)), (min(f.cover, stem_h), stem_h)]
+        lo, hi = max(parts, key=lambda p: p[1] - p[0])
+        stem_text = f"stem wall, {fmt.length(stem_h)} high"
+        if (hi - lo) * s >= 9.0 and length * s > _text_width(stem_text, 6.5) + 4.0:
+            shapes.append(Label(X(length / 2), Y((lo + hi) / 2) - 2.2, stem_text, "middle", 6.5))
+    shapes.append(Label(X(0), Y(-f.thickness) - 30, "x = 0", "middle", 6.5))
+    shapes.append(Label(X(length), Y(-f.thickness) - 30, "x = L_{f}", "middle", 6.5, markup=True))
+    caption = (
+        f"Elevation along the wall, scale {scale_name} (printed at 100%). Each arrow's tag gives its loads' numbers "
+        "in the loads table below; loads that reverse are drawn for direction + (to the right); the wall is drawn "
+        "to the highest shear."
+    )
     return Drawing(width, height, tuple(shapes), caption)
 
 

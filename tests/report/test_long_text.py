@@ -161,7 +161,7 @@ def test_schedule_and_headings_show_the_label_cut_short(long_label_package: list
 
 def test_inputs_print_the_labels_and_name_in_full(long_label_package: list[str]) -> None:
     text = squeezed(" ".join(body(p) for p in long_label_package))
-    assert "Walllabelinfull:" + "W" * LONG + "Loads" in text
+    assert "Walllabelinfull:" + "W" * LONG + "Selfweight" in text  # the inputs follow the loads table
     assert "Labelofload1infull:" + "L" * LONG + "P=w" in text
     assert "Projectinfull:" + "N" * LONG + "Thispackagecovers" in text
 
