@@ -946,7 +946,7 @@ class WallForm(QWidget):
         designed = doc.project.concrete is not None
         form = self.concrete_form
         form.setRowVisible(self.concrete_note, not designed)
-        form_of = reinforcement_form(wall.footing.reinforcement)
+        form_of = reinforcement_form(get_at(doc.raw, doc.wall_path("footing", "reinforcement")))
         values = {("construction",): wall.construction.value, ("footing", "reinforcement"): form_of}
         for path, choice in self.choices.items():
             choice.show_value(values[path], assumed.get(path_text(doc.wall_path(*path))))
@@ -954,7 +954,8 @@ class WallForm(QWidget):
         light = wall.construction is WallConstruction.LIGHT_FRAME
         form.setRowVisible(self.chord_offset, designed and light)
         for f in self.bar_fields:
-            form.setRowVisible(f, designed and form_of == "entered")
+            along = f.spec.path[-1] in ("bottom", "top")
+            form.setRowVisible(f, designed and (form_of == "entered" or (form_of == "plain-bars" and along)))
 
     def _on_choice(self, path: tuple[str, ...]) -> None:
         """A wall's construction or its form of reinforcement chosen: one undoable edit."""
@@ -963,7 +964,7 @@ class WallForm(QWidget):
         value = choice.box.currentData()
         full = doc.wall_path(*path)
         if path == ("footing", "reinforcement"):
-            if value == reinforcement_form(doc.current_wall.footing.reinforcement):
+            if value == reinforcement_form(get_at(doc.raw, full)):
                 return
             raw_value: Any = REINFORCEMENT_RAW[value]
         else:
@@ -1073,23 +1074,36 @@ CONSTRUCTION_TIP = (
 REINFORCEMENT_FORMS = (
     ("designed by Kernline", "designed"),
     ("plain concrete, no bars (ACI 318-19 ch. 14)", "plain"),
+    ("plain across, continuous bars along (IBC 2021 1905.6.2)", "plain-bars"),
     ("bars as entered below", "entered"),
 )
-REINFORCEMENT_RAW: dict[str, Any] = {"designed": commands.DELETE, "plain": "plain", "entered": {}}
+REINFORCEMENT_RAW: dict[str, Any] = {
+    "designed": commands.DELETE,
+    "plain": "plain",
+    "plain-bars": {"transverse": "plain"},
+    "entered": {},
+}
 REINFORCEMENT_TIP = (
     "The footing's bars. Designed by Kernline: the lightest passing bar size and spacing (#4 to #8 at whole "
     "inches, common practice). Plain concrete: no bars, ACI 318-19 chapter 14 (h at least 8 in, strength on "
-    "h - 2 in cast against soil, 14.5.1.7; in seismic design categories C to F with the bars of IBC 2021 "
-    "1905.6.2). As "
+    "h - 2 in cast against soil, 14.5.1.7). Plain across with continuous bars along: the same, with the "
+    "bottom and top bars that IBC 2021 1905.6.2 asks of a plain wall footing in seismic design categories C "
+    "to F (two or more, #4 or larger, As at least 0.002 Ag, one top and one bottom above 8 in). As "
     "entered: the bars you give are checked; a part left empty is designed by Kernline."
 )
 
 
-def reinforcement_form(reinforcement: Any) -> str:
-    """ "designed" (none given), "plain", or "entered" (bars given, some parts possibly left to Kernline)."""
-    if reinforcement is None:
+def reinforcement_form(raw: Any) -> str:
+    """The form of a footing's raw "reinforcement": "designed" (absent), "plain", "plain-bars" (plain
+    across the width, continuous bars along it) or "entered" (bars given, some parts possibly left to
+    Kernline)."""
+    if raw is MISSING or raw is None:
         return "designed"
-    return "plain" if reinforcement.plain else "entered"
+    if raw == "plain":
+        return "plain"
+    if isinstance(raw, dict) and raw.get("transverse") == "plain":
+        return "plain-bars"
+    return "entered"
 
 
 SEISMIC_CATEGORIES: tuple[tuple[str, str | None], ...] = (("not given", None),) + tuple(
