@@ -133,10 +133,16 @@ def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[Longitudinal
                 diagrams[largest], thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer
             )
             return _plain_along([one], width, thickness, concrete.fc, concrete.lam)[0], largest, diagrams[largest]
+    # every case checked quickly; only the governing failure is worded (a search over the bars)
     designs = [
-        design_longitudinal(d, thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer)
+        design_longitudinal(d, thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer, words=False)
         for d in diagrams
     ]
+    first = next((i for i, d in enumerate(designs) if not d.passes), None)
+    if first is not None:
+        designs[first] = design_longitudinal(
+            diagrams[first], thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer
+        )
     if plain:
         designs = _plain_along(designs, float(np.asarray(evaluation.statics.width)), thickness, concrete.fc, concrete.lam)
     failing = [i for i, d in enumerate(designs) if not d.passes]

@@ -413,6 +413,7 @@ def _face(
     phi_shear: float,
     aggregate: float,
     given: tuple[int, Bar] | None,
+    words: bool = True,
 ) -> tuple[FaceDesign, list[str], bool]:
     """The bars of one face: (design, what fails in words, whether no practical bars could pass).
 
@@ -497,7 +498,7 @@ def _face(
 
     if given is not None:  # bars given that pass need no search (the search only words a failure)
         checked = evaluate(*given)
-        if checked.passes:
+        if checked.passes or not words:  # without words, a failure needs no search either
             return checked, [], False
     # the lightest passing bars of #4 to #8 (least area, ties to fewer bars); the heaviest if none passes
     best: FaceDesign | None = None
@@ -559,6 +560,7 @@ def design_longitudinal(
     aggregate: float = AGGREGATE,
     bottom: str | tuple[int, Bar] | None = None,
     top: str | tuple[int, Bar] | None = None,
+    words: bool = True,
 ) -> LongitudinalDesign:
     """Design (or check) the longitudinal bars of the footing for its beam diagram (ACI 318-19).
 
@@ -575,6 +577,8 @@ def design_longitudinal(
             under the bottom longitudinal bars (m; 0 when the longitudinal bars are the lowest layer).
         phi_shear: φ for one-way shear (0.75; 21.2.4.3 may require less). aggregate: d_agg (m).
         bottom, top: bars to check ("4 #5" or (count, bar)); None to choose.
+        words: say what fails (a search over the practical bars when given bars fail); False only
+            tells whether they pass, with an empty message.
 
     Raises:
         InputError: bad bar text or numbers.
@@ -586,8 +590,10 @@ def design_longitudinal(
     given_bottom = parse_counted(bottom) if isinstance(bottom, str) else bottom
     given_top = parse_counted(top) if isinstance(top, str) else top
     common = (diagram, thickness, materials)
-    low, low_words, low_hopeless = _face("bottom", *common, materials.cover, layer_below, phi_shear, aggregate, given_bottom)
-    high, high_words, high_hopeless = _face("top", *common, top_cover, 0.0, phi_shear, aggregate, given_top)
+    low, low_words, low_hopeless = _face(
+        "bottom", *common, materials.cover, layer_below, phi_shear, aggregate, given_bottom, words
+    )
+    high, high_words, high_hopeless = _face("top", *common, top_cover, 0.0, phi_shear, aggregate, given_top, words)
     words = low_words + high_words + ([CANNOT_SPREAD] if low_hopeless or high_hopeless else [])
     return LongitudinalDesign(
         diagram=diagram,
