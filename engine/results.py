@@ -306,7 +306,7 @@ def along_lines(results: Sequence[WallResult]) -> list[str]:
                 bars.append(f"{face} {faced.bars} ({'entered' if entered else 'designed'})")
         text = ", ".join(bars) or "no bars"
         verdict = "carries its strength cases" if design.passes else "FAILS: " + design.message
-        plain = design.plain_moment_capacity is not None and design.passes and not design.message
+        plain = bool(design.plain_carries)
         lines.append(f"{r.wall_id}: {text}; " + ("the plain section " if plain else "") + verdict)
     return lines
 
@@ -417,6 +417,7 @@ def longitudinal_json(result: WallResult, stations: int = 101) -> dict[str, Any]
         "message": design.message,
         "plain_moment_capacity": _num(design.plain_moment_capacity),
         "plain_shear_capacity": _num(design.plain_shear_capacity),
+        "plain_carries": design.plain_carries,
         "diagram": points,
     }
 

@@ -14,6 +14,8 @@ from __future__ import annotations
 import math
 from typing import TYPE_CHECKING, Any
 
+import numpy as np
+
 from ..checks._strength import strength_grid
 from ..concrete.along import design_along
 from ..concrete.bars import bar
@@ -501,11 +503,26 @@ def _plain(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, rec: Any, she
             "passes" if ok else "FAILS",
         )
 
-    rows = (
+    rows: tuple[tuple[Cell, ...], ...] = (
         row("Thickness", u.small(MIN_THICKNESS, 0), u.small(result.thickness), "thickness", "14.3.2.1"),
         row("Flexure", u.moment(float(design.moment)), u.moment(float(design.moment_capacity)), "flexure", "14.5.2.1"),
         row("One-way shear", u.shear(float(design.shear)), u.shear(float(design.shear_capacity)), "shear", "14.5.5.1"),
     )
+    seismic = getattr(grid, "seismic", None)
+    if seismic is not None and seismic.applies:  # the continuous bars IBC 2021 1905.6.2 asks of a plain footing
+        r = float(np.asarray(seismic.ratio))
+        bars_ok = r >= 1.0 - 1e-9
+        needed = float(np.asarray(seismic.steel_required))
+        rows += (
+            (
+                "Continuous bars along",
+                f"0.002 Ag = {u.total_area(needed)}",
+                u.total_area(seismic.steel),
+                ratio_text(r, 1.0, bars_ok) if r > 0.0 else "—",
+                "IBC 1905.6.2",
+                "passes" if bars_ok else "FAILS",
+            ),
+        )
     ok = rec.passes and shear_rec.passes
     return [
         *blocks,
@@ -542,7 +559,7 @@ def _along(
     )
     plain_mn = getattr(design, "plain_moment_capacity", None)
     plain_vn = getattr(design, "plain_shear_capacity", None)
-    plain_carries = plain_mn is not None and design.passes
+    plain_carries = bool(getattr(design, "plain_carries", False))  # the engine's finding, not re-derived
     rows: list[tuple[Cell, ...]] = []
     fails = []
     for k, face in enumerate((design.bottom, design.top)):
@@ -581,7 +598,11 @@ def _along(
                     formula(
                         f"Plain section along the length: φM_{{n}} = {u.beam_moment(plain_mn)} (14.5.2.1) and φV_{{n}} = "
                         f"{u.force(plain_vn or 0.0)} (14.5.5.1) of the whole section B × (h − 2 in) against |M| and |V| above"
-                        + ("; it carries them, so the bars below are not needed for strength." if plain_carries else ".")
+                        + (
+                            "; it carries them, so the bars below are not needed for strength."
+                            if plain_carries
+                            else "; it does not carry them, so the bars below must."
+                        )
                     ),
                     "small",
                 )

@@ -190,9 +190,15 @@ def _plain_along(
     out = []
     for design in designs:
         if _plain_carries(design.diagram, phi_mn, phi_vn):
-            out.append(replace(design, passes=True, message="", plain_moment_capacity=phi_mn, plain_shear_capacity=phi_vn))
+            out.append(
+                replace(
+                    design, passes=True, message="", plain_moment_capacity=phi_mn, plain_shear_capacity=phi_vn, plain_carries=True
+                )
+            )
         else:
             why = "the plain section does not carry the moment and shear along the length (ACI 318-19 14.5.2.1, 14.5.5.1)"
             message = why + ("; " + design.message if design.message else "; the bars carry them")
-            out.append(replace(design, message=message, plain_moment_capacity=phi_mn, plain_shear_capacity=phi_vn))
+            out.append(
+                replace(design, message=message, plain_moment_capacity=phi_mn, plain_shear_capacity=phi_vn, plain_carries=False)
+            )
     return out

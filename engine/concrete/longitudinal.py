@@ -371,6 +371,8 @@ class LongitudinalDesign:
         message: "" or what fails, in words.
         plain_moment_capacity, plain_shear_capacity: for a plain footing, φMn and φVn of its whole
             section along the length (N·m, N; ACI 318-19 14.5.2.1, 14.5.5.1), else None.
+        plain_carries: for a plain footing, whether that section carries this diagram (the bars then
+            carry no computed moment), else None.
     """
 
     diagram: BeamDiagram
@@ -381,6 +383,7 @@ class LongitudinalDesign:
     message: str
     plain_moment_capacity: float | None = None
     plain_shear_capacity: float | None = None
+    plain_carries: bool | None = None
 
 
 def bars_that_fit(width: float, bar_diameter: float, side_cover: float, aggregate: float = AGGREGATE) -> int:
@@ -413,7 +416,7 @@ def _face(
     phi_shear: float,
     aggregate: float,
     given: tuple[int, Bar] | None,
-    words: bool = True,
+    explain: bool = True,
 ) -> tuple[FaceDesign, list[str], bool]:
     """The bars of one face: (design, what fails in words, whether no practical bars could pass).
 
@@ -498,7 +501,7 @@ def _face(
 
     if given is not None:  # bars given that pass need no search (the search only words a failure)
         checked = evaluate(*given)
-        if checked.passes or not words:  # without words, a failure needs no search either
+        if checked.passes or not explain:  # unexplained, a failure needs no search either
             return checked, [], False
     # the lightest passing bars of #4 to #8 (least area, ties to fewer bars); the heaviest if none passes
     best: FaceDesign | None = None
@@ -591,17 +594,17 @@ def design_longitudinal(
     given_top = parse_counted(top) if isinstance(top, str) else top
     common = (diagram, thickness, materials)
     low, low_words, low_hopeless = _face(
-        "bottom", *common, materials.cover, layer_below, phi_shear, aggregate, given_bottom, words
+        "bottom", *common, materials.cover, layer_below, phi_shear, aggregate, given_bottom, explain=words
     )
-    high, high_words, high_hopeless = _face("top", *common, top_cover, 0.0, phi_shear, aggregate, given_top, words)
-    words = low_words + high_words + ([CANNOT_SPREAD] if low_hopeless or high_hopeless else [])
+    high, high_words, high_hopeless = _face("top", *common, top_cover, 0.0, phi_shear, aggregate, given_top, explain=words)
+    said = low_words + high_words + ([CANNOT_SPREAD] if low_hopeless or high_hopeless else [])
     return LongitudinalDesign(
         diagram=diagram,
         bottom=low,
         top=high,
         phi_shear=float(phi_shear),
         passes=low.passes and high.passes,
-        message="; ".join(words),
+        message="; ".join(said),
     )
 
 

@@ -377,12 +377,14 @@ class PlainSeismicGrid:
             rule, else 0 (array of the broadcast shape of B and h; inf where the rule does not apply).
         reason: the first unmet condition that holds for every size, in words ("" when none).
         steel: the continuous bars' total area (m^2).
+        steel_required: 0.002 Ag over the sizes (m^2; 0 where nothing is asked).
     """
 
     applies: bool
     ratio: np.ndarray
     reason: str
     steel: float
+    steel_required: np.ndarray | float = 0.0
 
 
 def plain_seismic_grid(
@@ -421,9 +423,10 @@ def plain_seismic_grid(
     elif any(bar_.size < SEISMIC_MIN_BAR_SIZE for _, bar_ in faces):
         small = next(bar_.name for _, bar_ in faces if bar_.size < SEISMIC_MIN_BAR_SIZE)
         reason = f"{where} continuous bars of No. 4 or larger, not {small} ({IBC_PLAIN_CLAUSE})"
-    if reason:
-        return PlainSeismicGrid(True, np.zeros(shape), reason, steel)
     gross = b * h
+    required = np.broadcast_to(SEISMIC_MIN_STEEL_RATIO * gross, shape)
+    if reason:
+        return PlainSeismicGrid(True, np.zeros(shape), reason, steel, required)
     ratio = np.broadcast_to(steel / (SEISMIC_MIN_STEEL_RATIO * gross), shape).copy()
     both_faces = bottom is not None and top is not None
     if not both_faces:
@@ -433,7 +436,7 @@ def plain_seismic_grid(
             reason = (
                 f"{where} a continuous bar at the top and one at the bottom when it is more than 8 in thick ({IBC_PLAIN_CLAUSE})"
             )
-    return PlainSeismicGrid(True, ratio, reason, steel)
+    return PlainSeismicGrid(True, ratio, reason, steel, required)
 
 
 def plain_seismic_words(grid: PlainSeismicGrid, index: tuple[int, ...] | int = ()) -> str:

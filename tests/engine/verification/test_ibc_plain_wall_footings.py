@@ -149,3 +149,18 @@ def test_a_missing_seismic_design_category_is_warned_with_e_loads_and_a_concrete
     del raw["criteria"]["seismic_design_category"]
     warned = [w for w in input_warnings(parse_project(raw)) if w.field == "criteria.seismic_design_category"]
     assert len(warned) == 1 and "21.2.4.3" in warned[0].message
+
+
+def test_the_engine_says_whether_the_plain_section_carries_the_length():
+    """Uniform loads: no moment along the length, the plain section carries it. The demo's N1 (light-frame
+    chord couple on an 18 in x 12 in plain footing): |M| well above φMn = 49,295 lb-in, so its bars must."""
+    import json
+
+    from kernline.engine.resources import resource_path
+
+    project = _project({"transverse": "plain", "bottom": "2 #4", "top": "1 #4"})
+    assert longitudinal_json(check_wall(project, project.walls[0]))["plain_carries"] is True
+    demo = parse_project(json.loads(resource_path("demo.kernline").read_text(encoding="utf-8")))
+    n1 = longitudinal_json(check_wall(demo, demo.walls[0]))
+    assert n1["plain_carries"] is False and n1["passes"] is True
+    assert max(abs(n1["moment_bottom"]), abs(n1["moment_top"])) > n1["plain_moment_capacity"]
