@@ -71,7 +71,7 @@ def guide_path() -> Path:
         candidate = Path(str(_importlib_resources.files("kernline.docs").joinpath(GUIDE)))
         if candidate.exists():
             return candidate
-    except (ModuleNotFoundError, TypeError):
+    except (ModuleNotFoundError, TypeError, OSError, ValueError):  # e.g. a namespace over several folders
         pass
     return Path(__file__).resolve().parents[2] / "docs" / GUIDE
 
