@@ -1430,6 +1430,12 @@ def _case_of(result: WallResult, g: Governing) -> tuple[CaseResult, LoadCombinat
     return result.cases[i], design.combination, i, float(result.table.dead_factor[i])
 
 
+def _no_demand(title: str, why: str, name: str | None = None) -> list[Block]:
+    """The sheet of a check that no case loads: its heading, why there is no demand, and the verdict
+    (naming the check as ``name``, by default its title)."""
+    return [Heading(title, 2), Para(why), Verdict(True, f"{name or title} passes: no demand.")]
+
+
 def _governing_heading(check: Check, g: Governing) -> list[Block]:
     words = {"+": ", lateral load toward x = L_{f}", "-": ", lateral load toward x = 0"}.get(g.direction, "")
     head = Heading(formula(f"{_CHECK_TITLE[check]}: governing case {case_name(g.combination, g.direction)}{words}"), 2)

@@ -15,9 +15,7 @@ from . import (
     Equation,
     Formatter,
     Group,
-    Heading,
     Para,
-    Verdict,
     _case_of,
     _check_verdict,
     _governing_heading,
@@ -25,6 +23,7 @@ from . import (
     _lateral_terms,
     _lead,
     _n_equation,
+    _no_demand,
     _position,
     _tail,
     factor_text,
@@ -39,11 +38,7 @@ def bearing_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
     """Soil bearing in its governing case: N, M, e against the kern, the peak pressure and the diagram."""
     g = result.governing[Check.BEARING]
     if math.isinf(g.ratio):
-        return [
-            Heading("Soil bearing", 2),
-            Para("No case presses on the soil: no demand."),
-            Verdict(True, "Bearing passes: no demand."),
-        ]
+        return _no_demand("Soil bearing", "No case presses on the soil: no demand.", "Bearing")
     case, combo, i, f_d = _case_of(result, g)
     br = case.bearing
     assert br is not None

@@ -277,7 +277,7 @@ def _across(
 
 
 def _reinforced(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, flexure: Any, shear: Any) -> list[Block]:
-    from . import Equation, Group, Table, Verdict, formula, plain, ratio_text
+    from . import Equation, Group, Table, Verdict, formula, plain
 
     design = grid.design
     concrete_h = result.thickness
@@ -378,19 +378,9 @@ def _reinforced(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, flexure:
             clause="25.4.2.4",
         ),
     ]
-    ratios = design.ratios
 
     def row(name: str, demand: str, capacity: str, key: str, clause: str) -> tuple[Cell, ...]:
-        r = float(ratios[key])
-        ok = r >= 1.0 - 1e-9
-        return (
-            name,
-            demand,
-            capacity,
-            "no demand" if math.isinf(r) else ratio_text(r, 1.0, ok),
-            clause,
-            "passes" if ok else "FAILS",
-        )
+        return _requirement_row(name, demand, capacity, float(design.ratios[key]), clause)
 
     rows = (
         row("Depth above the bars", u.small(MIN_DEPTH_ABOVE_BARS, 0), u.small(d), "depth", "13.3.1.2"),
@@ -435,6 +425,21 @@ def grid_cover(result: Any) -> float:
 
 def result_fc(result: Any) -> float:
     return float(result.strength_table.concrete.fc)
+
+
+def _requirement_row(name: str, demand: str, capacity: str, ratio: float, clause: str) -> tuple[Cell, ...]:
+    """One row of a requirement table: demand, capacity, the ratio (or "no demand"), the clause, the result."""
+    from . import ratio_text
+
+    ok = ratio >= 1.0 - 1e-9
+    return (
+        name,
+        demand,
+        capacity,
+        "no demand" if math.isinf(ratio) else ratio_text(ratio, 1.0, ok),
+        clause,
+        "passes" if ok else "FAILS",
+    )
 
 
 def _plain(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, rec: Any, shear_rec: Any) -> list[Block]:
@@ -489,19 +494,9 @@ def _plain(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, rec: Any, she
             clause="14.5.5.1",
         ),
     ]
-    ratios = design.ratios
 
     def row(name: str, demand: str, capacity: str, key: str, clause: str) -> tuple[Cell, ...]:
-        r = float(ratios[key])
-        ok = r >= 1.0 - 1e-9
-        return (
-            name,
-            demand,
-            capacity,
-            "no demand" if math.isinf(r) else ratio_text(r, 1.0, ok),
-            clause,
-            "passes" if ok else "FAILS",
-        )
+        return _requirement_row(name, demand, capacity, float(design.ratios[key]), clause)
 
     rows: tuple[tuple[Cell, ...], ...] = (
         row("Thickness", u.small(MIN_THICKNESS, 0), u.small(result.thickness), "thickness", "14.3.2.1"),

@@ -12,15 +12,14 @@ from . import (
     Block,
     Equation,
     Formatter,
-    Heading,
     Para,
-    Verdict,
     _case_of,
     _check_verdict,
     _governing_heading,
     _join,
     _lateral_terms,
     _lead,
+    _no_demand,
     _position,
     _tail,
     factor_text,
@@ -34,11 +33,7 @@ def overturning_sheet(project: Project, wall: Wall, result: WallResult, fmt: For
     """Overturning in its governing case: the moments about the toe, written out, and the ratio."""
     g = result.governing[Check.OVERTURNING]
     if math.isinf(g.ratio):
-        return [
-            Heading("Overturning", 2),
-            Para("No case produces an overturning moment (no lateral load and no uplift): no demand.", "body"),
-            Verdict(True, "Overturning passes: no demand."),
-        ]
+        return _no_demand("Overturning", "No case produces an overturning moment (no lateral load and no uplift): no demand.")
     case, combo, i, f_d = _case_of(result, g)
     ot = case.overturning
     assert ot is not None

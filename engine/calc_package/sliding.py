@@ -12,9 +12,6 @@ from . import (
     Block,
     Equation,
     Formatter,
-    Heading,
-    Para,
-    Verdict,
     _case_of,
     _check_verdict,
     _governing_heading,
@@ -22,6 +19,7 @@ from . import (
     _lateral_terms,
     _lead,
     _n_equation,
+    _no_demand,
     _tail,
     formula,
     plain,
@@ -33,11 +31,7 @@ def sliding_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
     """Sliding in its governing case: the shear, friction, cohesion and passive resistance, and the ratio."""
     g = result.governing[Check.SLIDING]
     if math.isinf(g.ratio):
-        return [
-            Heading("Sliding", 2),
-            Para("No case has a lateral shear: no demand."),
-            Verdict(True, "Sliding passes: no demand."),
-        ]
+        return _no_demand("Sliding", "No case has a lateral shear: no demand.")
     case, combo, i, f_d = _case_of(result, g)
     sl = case.sliding
     assert sl is not None
