@@ -558,6 +558,7 @@ def build_package(
     checked_by: str = "",
     printed: _dt.date | None = None,
     seal_every_sheet: bool = False,
+    verification: bool = False,
 ) -> Package:
     """Assemble the calculation package of ``project`` (the walls named, or all of them).
 
@@ -573,6 +574,7 @@ def build_package(
         checked_by: the checker's name; the project's ``project.checker`` when empty.
         printed: the date of this print, in the footer of every sheet (today when None).
         seal_every_sheet: a small seal box in every sheet's title strip (the cover has the 3 in square).
+        verification: add the verification appendix (the benchmark cases run now; :mod:`.verification`).
     """
     walls = select_walls(project, wall_ids)
     fmt = _Fmt(project.units)
@@ -618,6 +620,11 @@ def build_package(
     if reports:
         sections.append(_appendix(project, reports, fmt))
         entries.append(ContentsEntry("Appendix: every combination and direction of every wall", (("sheet", "appendix"),)))
+    if verification:
+        from .verification import verification_section
+
+        sections.append(verification_section(printed, title.program))
+        entries.append(ContentsEntry(sections[-1].title, (("sheet", sections[-1].key),)))
     sections.insert(0, _cover(project, reports, title, tuple(entries)))
     front = {"cover", "basis", "references", "schedule"}
     sections = [replace(s, parent="Front matter") if s.key in front else s for s in sections]
