@@ -72,6 +72,11 @@ def _parser() -> argparse.ArgumentParser:
         action="store_true",
         help="a small seal box in every sheet's title strip (the cover always has the 3 in seal square)",
     )
+    p.add_argument(
+        "--verification-appendix",
+        action="store_true",
+        help="add the verification appendix: the program's benchmark cases run now, published values beside its own",
+    )
 
     p = sub.add_parser("schedule", help="write the footing schedule (CSV)")
     p.add_argument("file")
@@ -146,7 +151,7 @@ def _dispatch(args: argparse.Namespace) -> int:
     if command == "size":
         return _size(args.file, as_json=args.json, write=args.write)
     if command == "report":
-        return _report(args.file, args.output, args.walls, args.seal_every_sheet)
+        return _report(args.file, args.output, args.walls, args.seal_every_sheet, args.verification_appendix)
     if command == "schedule":
         return _schedule(args.file, args.output)
     raise AssertionError(command)  # pragma: no cover - argparse refuses others
@@ -265,7 +270,7 @@ def _size(path: str, as_json: bool, write: bool) -> int:
     return EXIT_OK if all(s.feasible for s in sized) else EXIT_FAIL
 
 
-def _report(path: str, output: str, walls: str | None, seal_every_sheet: bool = False) -> int:
+def _report(path: str, output: str, walls: str | None, seal_every_sheet: bool = False, verification: bool = False) -> int:
     try:
         from kernline.engine import write_report
     except ImportError:
@@ -277,7 +282,7 @@ def _report(path: str, output: str, walls: str | None, seal_every_sheet: bool = 
     check_output_path(output, inputs=[path])
     doc = load_project(path)
     ids = [w.strip() for w in walls.split(",")] if walls else None
-    write_report(doc, output, wall_ids=ids, seal_every_sheet=seal_every_sheet)
+    write_report(doc, output, wall_ids=ids, seal_every_sheet=seal_every_sheet, verification=verification)
     print(f"wrote {output}")
     return EXIT_OK
 
