@@ -23,7 +23,8 @@ SUBJECT = "Verification appendix"
 # Case, source (status), quantity, published, Kernline, difference, tolerance, result
 _WIDTHS = (0.05, 0.22, 0.295, 0.09, 0.095, 0.085, 0.085, 0.08)
 _FONT = 7.0
-_SUBSCRIPTS = re.compile(r"_([A-Za-z]+)")  # "FS_OT", "q_max", "S_DS": the letters after "_" print as a subscript
+# "FS_OT", "q_max", "A_s,min": the letters after "_" print as a subscript
+_SUBSCRIPTS = re.compile(r"_([A-Za-z]+(?:,[A-Za-z]+)?)")
 
 
 def verification_section(printed: _dt.date, program: str) -> Section:
@@ -41,9 +42,9 @@ def verification_section(printed: _dt.date, program: str) -> Section:
         Heading(TITLE),
         Para(
             f"This appendix was produced by running the program's benchmark cases when this package was printed, "
-            f"on {printed.isoformat()}, with {program}. Each row is one quantity of a case of the program's verification "
-            "register: the value its source publishes (or, with status D, the value worked by hand from the formula "
-            "named), the value this version computes with the engine functions that prepared this package, their "
+            f"on {printed.isoformat()}, with {program}. Each row is one quantity of a case of the program's "
+            "verification register (docs/verification.md in the program's source): the value its source publishes "
+            "(or, with status D, the value worked by hand from the formula named), the value this version computes with the engine functions that prepared this package, their "
             "difference, and the tolerance allowed for the source's rounding. The same cases, with the same published "
             "values, are checked by the program's test suite."
         ),
@@ -93,11 +94,11 @@ def _table(results: Sequence[BenchmarkResult]) -> Table:
         b = r.benchmark
         # the source once per run of rows of one case; the rows after it name only what differs
         if (b.case, b.source, b.where) == before:
-            source = f"as above ({b.status})"
+            source = f"as above [{b.status}]"
         elif (b.case, b.source) == before[:2]:
-            source = f"{b.where} ({b.status})"
+            source = f"{b.where} [{b.status}]"
         else:
-            source = f"{b.source}, {b.where} ({b.status})"
+            source = f"{b.source}, {b.where} [{b.status}]"
         before = (b.case, b.source, b.where)
         unit = f" {b.unit}" if b.unit else ""
         quantity = b.quantity if not r.message else f"{b.quantity}\nDoes not run: {r.message}"
@@ -116,7 +117,7 @@ def _table(results: Sequence[BenchmarkResult]) -> Table:
         if not r.passes:
             fail_rows.append(k)
     return Table(
-        ("Case", "Source (status)", "Quantity", "Published", "This version", "Difference", "Tolerance", "Result"),
+        ("Case", "Source [status]", "Quantity", "Published", "This version", "Difference", "Tolerance", "Result"),
         tuple(rows),
         _WIDTHS,
         align="CLLRRRRL",

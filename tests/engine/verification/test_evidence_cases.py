@@ -111,7 +111,7 @@ def test_a_value_outside_its_tolerance_fails():
     """3.06 against a published 3.0 (± 0.05) differs; 3.04 agrees."""
     far = Benchmark(**{**_fields(CASES[0]), "compute": lambda: 3.06})
     near = Benchmark(**{**_fields(CASES[0]), "compute": lambda: 3.04})
-    assert not run_case(far).passes and run_case(far).difference_text == "+0.06"
+    assert not run_case(far).passes and run_case(far).difference_text == "+0.060"
     assert run_case(near).passes
 
 
