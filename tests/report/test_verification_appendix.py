@@ -127,3 +127,22 @@ def test_command_line_flag(tmp_path) -> None:
         assert done.returncode == 0, done.stderr
         found[bool(flag)] = any(TITLE in p for p in page_texts(out.read_bytes()))
     assert found == {False: False, True: True}
+
+
+def test_a_case_that_differs_or_cannot_run_is_printed_in_bold_and_counted(demo_document, monkeypatch) -> None:
+    """A benchmark that differs, or cannot run, is a row marked as such with its message; the count says so."""
+    import dataclasses
+
+    from kernline.engine import evidence
+
+    def broken() -> float:
+        raise ValueError("the engine refused the case")
+
+    first = evidence.CASES[0]
+    cases = (first, dataclasses.replace(first, compute=lambda: 3.5), dataclasses.replace(first, compute=broken))
+    monkeypatch.setattr(evidence, "CASES", cases)
+    package = render(demo_document, wall_ids="N1", printed=PRINTED, verification=True)
+    text = " ".join(body(p) for p in _appendix_pages(package))
+    assert "2 of 3 values DO NOT agree within their tolerance" in text
+    assert "DIFFERS" in text and "NO VALUE" in text
+    assert "Does not run: ValueError: the engine refused the case" in text
