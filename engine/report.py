@@ -730,7 +730,9 @@ def _flowable_classes() -> dict[str, type]:
             self._result = _layout([self.result], _STYLES["result"], self.fonts, self.text, _RESULT_COLUMN)
             self._note = _layout([self.note], _STYLES["remark"], self.fonts, self.text, mid) if self.note else []
             lead = _STYLES["calc"].leading
-            body = max(len(self._lines) * lead, len(self._clause) * _STYLES["clause"].leading)
+            # the results column's lines run down from the step's last line (a long result wraps there)
+            column = (len(self._lines) - 1 + len(self._result)) * lead
+            body = max(len(self._lines) * lead, len(self._clause) * _STYLES["clause"].leading, column)
             self.height = body + len(self._note) * _STYLES["remark"].leading + 1.5
             return aw, self.height
 
@@ -748,13 +750,13 @@ def _flowable_classes() -> dict[str, type]:
             c.setLineWidth(0.3)
             c.line(x_res - 4.0, top, x_res - 4.0, top - len(self._lines) * st.leading)
             c.restoreState()
-            res = [(max(0.0, _RESULT_COLUMN - _line_width(segs)), segs) for _, segs in self._result[:1]]
+            res = [(max(0.0, _RESULT_COLUMN - _line_width(segs)), segs) for _, segs in self._result]
             _draw_lines(c, res, x_res, last, rs.leading, rs.size)
             if self._note:
                 _draw_lines(c, self._note, _CLAUSE_COLUMN + 10.0, top - len(self._lines) * st.leading, rm.leading, rm.size)
 
         def getSpaceAfter(self) -> float:  # noqa: N802 - reportlab's name
-            return 1.5
+            return 1.0
 
     return {
         "SectionStart": SectionStart,
@@ -921,9 +923,9 @@ _STYLES = {
     "bullet": TextStyle(size=7.5, leading=9.4, left_indent=10, bullet="•", space_after=1.5),
     "eq": TextStyle(leading=12, left_indent=58, first_indent=-50, space_after=4, splits=False),
     # a calculation step: the step, its clause, its result and a remark (see CalcLine)
-    "calc": TextStyle(size=8, leading=9.8, left_indent=10, first_indent=-10, space_after=0),
+    "calc": TextStyle(size=8, leading=9.5, left_indent=10, first_indent=-10, space_after=0),
     "clause": TextStyle(size=6.5, leading=8.0, color="grey", space_after=0),
-    "result": TextStyle(size=8, leading=9.8, bold=True, space_after=0),
+    "result": TextStyle(size=8, leading=9.5, bold=True, space_after=0),
     "remark": TextStyle(size=7, leading=8.2, color="grey", space_after=0),
 }
 
@@ -1109,7 +1111,8 @@ class _Builder:
             if part is not None:
                 main += [Span(" = "), *_operator_breaks(_spans(part))]
         main += [Span(" = "), *_spans(eq.result)]
-        result = [replace(sp, bold=True) for sp in _spans(eq.result)]
+        shown = eq.result if eq.column is None else eq.column
+        result = [replace(sp, bold=True) for sp in _spans(shown)]
         note = _spans(eq.note) if eq.note else []
         return self.classes["CalcLine"](eq.clause, main, result, note, self.fonts, self.text)
 

@@ -26,7 +26,6 @@ from ..combinations import combinations_of
 from ..errors import InputError
 from ..loads import VerticalResultant, lateral_resultants, vertical_resultants
 from ..model import (
-    ALL_CHECKS,
     BearingBasis,
     Check,
     LateralLoad,
@@ -145,7 +144,8 @@ class KeyValues:
 class Equation:
     """``symbol = formula = numbers = result`` (formula and numbers may be absent).
 
-    ``clause`` is the standard's clause the step follows, printed in the margin column.
+    ``clause`` is the standard's clause the step follows, printed in the margin column; ``column`` is the
+    result as the right-hand results column carries it (a comparison on the line, its value there).
     """
 
     symbol: Rich
@@ -154,6 +154,7 @@ class Equation:
     result: Cell
     note: Cell = ""
     clause: str = ""
+    column: Cell | None = None  # what the results column shows, when shorter than ``result`` (default: ``result``)
 
 
 @dataclass(frozen=True, slots=True)
@@ -387,20 +388,37 @@ class _Fmt:
         extra = f"{format_length(abs(value), self.units)} " if self.units == "US" else ""
         return f"{self.decimal(value)} ({extra}{side})"
 
-    def carried(self, value: float | Any, kind: Kind) -> str:
+    def carried(self, value: float | Any, kind: Kind, extra: int = 1) -> str:
         """A force or moment as carried through the equations: the display precision when that is exact,
-        else one more decimal (so a line recomputed from printed values lands on its printed result)."""
+        else ``extra`` more decimals (so a line recomputed from printed values lands on its printed result)."""
         value = float(value)
         info = kind.info
         decimals = info.decimals_us if self.units == "US" else info.decimals_si
         shown = to_display(value, kind, self.units)
         if abs(shown - round(shown, decimals)) > 1e-7:
-            decimals += 1
+            decimals += extra
         return minus(format_quantity(value, kind, self.units, decimals))
 
     def sub(self, value: float | Any, kind: Kind) -> str:
         """:meth:`carried` for substitution into an expression: a negative value in parentheses."""
         return paren(self.carried(value, kind))
+
+    def arm_sub(self, value: float | Any) -> str:
+        """A force substituted beside a long arm (f H (h + t_f)): in SI, where converted inch-pound loads are
+        not round, one decimal more than :meth:`sub`, so the moment reproduces to its last printed digit."""
+        return paren(self.carried(value, Kind.FORCE, 1 if self.units == "US" else 2))
+
+    def term(self, value: float) -> str:
+        """A length substituted into an expression: feet and inches (US, exact for whole inches) or metres to
+        three places, four where three are not exact (SI), so that the line reproduces its printed result."""
+        return self.length(value) if self.units == "US" else paren(self.exact(value))
+
+    def weight_term(self, value: float, kind: Kind = Kind.UNIT_WEIGHT) -> str:
+        """A unit weight or pressure gradient substituted into an expression, with the digits it needs
+        (23.563 kN/m³ for 150 pcf; US values print as entered)."""
+        if self.units == "US":
+            return format_quantity(value, kind, self.units)
+        return self.carried(value, kind)
 
 
 _FOOT = 0.3048
@@ -1376,13 +1394,13 @@ def _loads(project: Project, wall: Wall, fmt: _Fmt) -> list[Block]:
 def _self_weight(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
     f = wall.footing
     sw = result.self_weight
-    L, B, t = fmt.length(result.length), fmt.length(result.width), fmt.length(result.thickness)
+    L, B, t = fmt.term(result.length), fmt.term(result.width), fmt.term(result.thickness)
     eqs: list[Block] = [
         Heading("Self weight (dead load at the footing's mid-length)", 2),
         Equation(
             formula("W_{f}"),
             formula("γ_{c} B t_{f} L_{f}"),
-            f"{fmt.unit_weight(f.unit_weight)} × {B} × {t} × {L}",
+            f"{fmt.weight_term(f.unit_weight)} × {B} × {t} × {L}",
             fmt.sub(sw.footing, Kind.FORCE),
         ),
     ]
@@ -1391,7 +1409,7 @@ def _self_weight(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) ->
             Equation(
                 formula("W_{stem}"),
                 formula("γ_{c} t_{stem} h_{stem} L_{f}"),
-                f"{fmt.unit_weight(f.unit_weight)} × {fmt.length(wall.stem.thickness)} × {fmt.length(wall.stem.height)} × {L}",
+                f"{fmt.weight_term(f.unit_weight)} × {fmt.term(wall.stem.thickness)} × {fmt.term(wall.stem.height)} × {L}",
                 fmt.sub(sw.stem, Kind.FORCE),
                 "the stem runs the full footing length",
             )
@@ -1403,7 +1421,7 @@ def _self_weight(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) ->
         Equation(
             formula("W_{soil}"),
             formula(f"γ_{{s}} h_{{s}} (B − {t_sup}) L_{{f}}"),
-            f"{fmt.unit_weight(project.soil.unit_weight)} × {fmt.length(f.cover)} × ({B} − {fmt.length(wall.supported_thickness)}) × {L}",
+            f"{fmt.weight_term(project.soil.unit_weight)} × {fmt.term(f.cover)} × ({B} − {fmt.term(wall.supported_thickness)}) × {L}",
             fmt.sub(sw.soil, Kind.FORCE),
             "",
         )
@@ -1460,7 +1478,7 @@ def _lateral_terms(wall: Wall, combo: LoadCombination, direction: str, fmt: _Fmt
             continue
         if with_arm:
             terms.append(
-                f"{factor_text(f)} × {fmt.sub(h.force, Kind.FORCE)} × ({fmt.length(h.height)} + {fmt.length(wall.footing.thickness)})"
+                f"{factor_text(f)} × {fmt.arm_sub(h.force)} × ({fmt.term(h.height)} + {fmt.term(wall.footing.thickness)})"
             )
         else:
             terms.append(f"{factor_text(f)} × {fmt.sub(h.force, Kind.FORCE)}")
@@ -1566,7 +1584,6 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
     ):
         if r < 0 or c < 0:
             continue  # outside the bounds searched: not a candidate
-            continue
         values = []
         for j in range(len(s.checks)):
             v = float(s.check_normalized[j, r, c])
@@ -1579,10 +1596,13 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
             verdict = "FAILS " + s.governing_check(r, c).id
             fail_rows.append(k)
         table_rows.append((name, f"{fmt.length(float(s.widths[c]))} × {fmt.length(float(s.thicknesses[r]))}", *values, verdict))
-    # one line per candidate: its size, each check's lowest ratio / required (1.000 or more passes), result
+    # one line per candidate: its size, each check's lowest ratio / required (1.000 or more passes), result;
+    # the first line says what the numbers are
     lines = tuple(
         plain(
-            f"{row[0]}, {row[1]}: "
+            f"{row[0]}, {row[1]}"
+            + (" (each check's lowest ratio / required over all cases; 1.000 or more passes)" if k == 0 else "")
+            + ": "
             + ", ".join(f"{c.title.lower()} {v}" for c, v in zip(s.checks, row[2:-1], strict=True))
             + f"; {row[-1]}",
             bold=k in fail_rows,
@@ -1592,16 +1612,7 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
     blocks += [
         Para(formula(f"Smallest passing size: B × t_{{f}} = {fmt.length(s.width)} × {fmt.length(s.thickness)}.", bold=True)),
         Bullets(lines),
-        Para("Each check's lowest ratio / required over all cases (1.000 or more passes).", "small"),
     ]
-    if report.sized_result is not None:
-        sr = report.sized_result
-        parts = [
-            f"{_CHECK_WORD[c]} "
-            + ("no demand" if math.isinf(sr.governing[c].normalized) else f"{sr.governing[c].normalized:.3f}")
-            for c in ALL_CHECKS
-        ]
-        del parts  # the first row of the table gives them
     if row == 0 and col == 0:
         blocks.append(
             Para(

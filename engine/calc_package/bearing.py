@@ -43,7 +43,7 @@ def bearing_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
     br = case.bearing
     assert br is not None
     soil = project.soil
-    L = fmt.length(result.length)
+    L = fmt.term(result.length)
     Ld, Bd = fmt.exact(result.length), fmt.exact(result.width)
     # N and M carry the digits the lines below use (one more than the display precision when not exact)
     N, M = fmt.sub(case.vertical, Kind.FORCE), fmt.sub(case.moment, Kind.MOMENT)
@@ -56,7 +56,7 @@ def bearing_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
         x = _position(v, g.direction)
         mirrored = mirrored or (g.direction == "-" and abs(v.x_reversed - v.x) > 1e-9)
         if abs(x - 0.5 * result.length) > 1e-9:  # a load at mid-length adds no moment about it
-            m_terms.append(f"{factor_text(f)} × {fmt.sub(v.force, Kind.FORCE)} × ({fmt.length(x)} − {L}/2)")
+            m_terms.append(f"{factor_text(f)} × {fmt.sub(v.force, Kind.FORCE)} × ({fmt.term(x)} − {L}/2)")
     lateral = _lateral_terms(wall, combo, g.direction, fmt, with_arm=True)
     if lateral:
         sign = "" if g.direction == "+" else "−"
@@ -82,6 +82,7 @@ def bearing_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
                 formula("M / N"),
                 f"{M} / {N}",
                 formula(fmt.signed_length(br.eccentricity)) if math.isfinite(br.eccentricity) else "∞",
+                column=fmt.decimal(br.eccentricity) if math.isfinite(br.eccentricity) else "∞",
             ),
             Para(
                 formula(
@@ -97,7 +98,15 @@ def bearing_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
     beyond = br.contact_length < result.length * (1.0 - 1e-9)
     diagram = pressure_diagram(case.vertical, br.eccentricity, result.width, result.length)
     kern_half = br.kern_eccentricity  # L_f/6, from the engine
-    blocks.append(Equation(formula("e"), formula("M / N"), f"{M} / {N}", formula(fmt.signed_length(br.eccentricity))))
+    blocks.append(
+        Equation(
+            formula("e"),
+            formula("M / N"),
+            f"{M} / {N}",
+            formula(fmt.signed_length(br.eccentricity)),
+            column=fmt.decimal(br.eccentricity),  # the side it lies toward is on the line
+        )
+    )
     if not beyond:
         blocks += [
             Equation(
@@ -105,7 +114,8 @@ def bearing_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
                 None,
                 None,
                 formula(f"{e_abs} ≤ L_{{f}}/6 = {fmt.decimal(kern_half)}", bold=True),
-                "the resultant is inside the kern (middle third): the whole footing is in contact",
+                "",  # the column says it: the resultant is in the kern (middle third), the whole footing in contact
+                column="in the kern",  # the comparison is on the line
             ),
             Equation(
                 formula("q_{max}"),
@@ -129,8 +139,16 @@ def bearing_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
                 None,
                 formula(f"{e_abs} > L_{{f}}/6 = {fmt.decimal(kern_half)}", bold=True),
                 "the resultant is beyond the kern: only part of the footing is in contact and the pressure is a triangle",
+                column="beyond the kern",  # the comparison is on the line
             ),
-            Equation(formula("a"), formula("3 (L_{f}/2 − |e|)"), f"3 × ({Ld}/2 − {e_abs})", a_text, "contact length"),
+            Equation(
+                formula("a"),
+                formula("3 (L_{f}/2 − |e|)"),
+                f"3 × ({Ld}/2 − {e_abs})",
+                a_text,
+                "contact length",
+                column=fmt.decimal(br.contact_length),
+            ),
             Equation(
                 formula("q_{max}"),
                 formula("2N / (3B (L_{f}/2 − |e|))"),
@@ -145,7 +163,7 @@ def bearing_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
             Equation(
                 formula("q"),
                 formula("q_{max} − γ_{s} (h_{s} + t_{f})"),
-                f"{fmt.pressure(br.q_max)} − {fmt.unit_weight(soil.unit_weight)} × ({fmt.length(wall.footing.cover)} + {fmt.length(result.thickness)})",
+                f"{fmt.pressure(br.q_max)} − {fmt.weight_term(soil.unit_weight)} × ({fmt.term(wall.footing.cover)} + {fmt.term(result.thickness)})",
                 fmt.pressure(br.pressure_compared),
                 "net pressure, for a net allowable",
             )

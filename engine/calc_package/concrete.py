@@ -6,7 +6,8 @@ along the length (:func:`engine.concrete.along.design_along`). Substituted lines
 values and the inputs so that a reviewer can redo them; nothing here decides a design.
 
 Equations are written in the inch-pound form of ACI 318-19 (√f'c in psi). In SI projects the
-capacity equations print their formula and result, without the inch-pound substitution.
+substitutions are in millimetres and MPa, √f'c still the inch-pound root (54.77 psi for 3,000 psi)
+converted to MPa, so that every printed line reproduces its printed result in either system.
 """
 
 from __future__ import annotations
@@ -56,17 +57,35 @@ class MemberUnits:
         """A member dimension: decimal inches (US) or millimetres (SI)."""
         return f"{value / INCH:,.{places}f} in" if self.us else f"{value * 1000.0:,.0f} mm"
 
+    def sub_small(self, value: float, places: int = 2) -> str:
+        """A member dimension substituted into a line: decimal inches (US) or millimetres to one place (SI),
+        so that inch values converted to millimetres (304.8 mm) are carried exactly enough."""
+        return self.small(value, places) if self.us else f"{value * 1000.0:,.1f} mm"
+
+    def root(self, fc: float) -> str:
+        """√f'c of the inch-pound equations (ACI 318-19 uses √f'c in psi): psi (US) or that stress in MPa (SI)."""
+        root_psi = math.sqrt(fc / PSI)
+        return f"{root_psi:.2f} psi" if self.us else f"{root_psi * PSI / 1e6:.5f} MPa"
+
+    def root_note(self, fc: float) -> str:
+        """In SI, how the inch-pound root was converted (blank in US)."""
+        if self.us:
+            return ""
+        root_psi = math.sqrt(fc / PSI)
+        return f"; √f'_{{c}} = √({fc / PSI:,.0f} psi) = {root_psi:.2f} psi = {root_psi * PSI / 1e6:.5f} MPa (inch-pound form)"
+
     def feet(self, value: float) -> str:
-        """A cantilever or distance substituted in decimal feet (metres in SI)."""
-        return self.fmt.decimal(value)
+        """A cantilever or distance substituted in decimal feet to three places (metres to four in SI, so
+        that converted inch dimensions such as 0.8128 m are carried exactly)."""
+        return self.fmt.decimal(value, 3 if self.us else 4)
 
     def stress(self, value: float) -> str:
         """f'c and fy: psi (US) or MPa (SI)."""
         return f"{value / PSI:,.0f} psi" if self.us else f"{value / 1e6:,.1f} MPa"
 
     def q(self, value: float) -> str:
-        """A factored soil pressure: ksf to three places (US) or kPa to one (SI)."""
-        return f"{value / (1000.0 * 4.4482216152605 / FOOT**2):,.3f} ksf" if self.us else f"{value / 1000.0:,.1f} kPa"
+        """A factored soil pressure: ksf to three places (US) or kPa to two (SI)."""
+        return f"{value / (1000.0 * 4.4482216152605 / FOOT**2):,.3f} ksf" if self.us else f"{value / 1000.0:,.2f} kPa"
 
     def moment(self, value: float) -> str:
         """A moment per length of footing: kip·ft/ft (US) or kN·m/m (SI)."""
@@ -98,6 +117,10 @@ class MemberUnits:
     def strip(self) -> str:
         """The width b of the design strip: 12 in (US) or 1 m (SI)."""
         return "12 in" if self.us else "1 m"
+
+    def strip_sub(self) -> str:
+        """The strip width b substituted next to member dimensions: 12 in (US) or 1,000 mm (SI)."""
+        return "12 in" if self.us else "1,000 mm"
 
 
 def _construction_words(construction: WallConstruction) -> str:
@@ -226,7 +249,7 @@ def _across(
         if case
         else ""
     )
-    B, L = fmt.decimal(result.width), fmt.decimal(result.length)
+    B, L = u.feet(result.width), u.feet(result.length)
     t_w = wall.supported_thickness
     c = float(design.cantilever)
     eqs: list[Block] = [
@@ -245,8 +268,8 @@ def _across(
             Equation(
                 formula("c"),
                 formula("(B − t_{w}) / 2"),
-                f"({B} − {fmt.decimal(t_w)}) / 2",
-                fmt.decimal(c),
+                f"({B} − {u.feet(t_w)}) / 2",
+                u.feet(c),
                 "",
                 clause="Table 13.2.7.1",
             )
@@ -256,8 +279,8 @@ def _across(
             Equation(
                 formula("c"),
                 formula(f"(B − t_{{w}}) / 2 + {MASONRY_SECTION:g} t_{{w}}"),
-                f"({B} − {fmt.decimal(t_w)}) / 2 + {MASONRY_SECTION:g} × {fmt.decimal(t_w)}",
-                fmt.decimal(c),
+                f"({B} − {u.feet(t_w)}) / 2 + {MASONRY_SECTION:g} × {u.feet(t_w)}",
+                u.feet(c),
                 "",
                 clause="Table 13.2.7.1",
             )
@@ -266,7 +289,7 @@ def _across(
         Equation(
             formula("M_{u}"),
             formula("q_{u} c² / 2"),
-            f"{u.q(rec.q_u)} × ({fmt.decimal(c)})² / 2",
+            f"{u.q(rec.q_u)} × ({u.feet(c)})² / 2",
             u.moment(float(design.moment)),
             clause="13.2.7.1",
         )
@@ -288,34 +311,34 @@ def _reinforced(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, flexure:
     c = float(design.cantilever)
     spacing = float(design.spacing)
     db = the_bar.diameter if the_bar is not None else 0.0
-    h_in = u.small(concrete_h)
     blocks: list[Block] = [
         Equation(
             formula("d"),
             formula("h − cover − d_{b} / 2"),
-            f"{h_in} − {u.small(float(grid_cover(result)))} − {u.small(db, 3)} / 2",
+            f"{u.sub_small(concrete_h)} − {u.sub_small(float(grid_cover(result)))} − {u.sub_small(db, 3)} / 2",
             u.small(d),
             formula(f"at least {u.small(MIN_DEPTH_ABOVE_BARS, 0)} above the bottom bars ({rec.bars})"),
             clause="13.3.1.2",
         ),
         Equation(
             formula("A_{s,req}"),
-            formula("from M_{u} = φ A_{s} f_{y} (d − a/2), a = A_{s} f_{y} / (0.85 f'_{c} b), φ = 0.90"),
+            None,
             None,
             u.area(float(design.steel_required)),
+            formula("solves M_{u} = φ A_{s} f_{y} (d − a/2) with a = A_{s} f_{y} / (0.85 f'_{c} b), φ = 0.90"),
             clause="22.2",
         ),
         Equation(
             formula("A_{s,min}"),
             formula(f"{MIN_STEEL_RATIO:g} b h"),
-            f"{MIN_STEEL_RATIO:g} × {u.strip()} × {h_in}" if u.us else None,
+            f"{MIN_STEEL_RATIO:g} × {u.strip_sub()} × {u.sub_small(concrete_h)}",
             u.area(float(design.steel_minimum)),
             clause="7.6.1.1",
         ),
         Equation(
             formula("A_{s,prov}"),
             formula("A_{b} b / s"),
-            (f"{u.bar_area(the_bar.area)} × 12 in / {u.small(spacing, 1)}" if u.us else None) if the_bar else None,
+            f"{u.bar_area(the_bar.area)} × {u.strip_sub()} / {u.sub_small(spacing, 1)}" if the_bar else None,
             u.area(float(design.steel_provided)),
             plain(f"{rec.bars}"),
             clause="",
@@ -335,7 +358,7 @@ def _reinforced(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, flexure:
         Equation(
             formula("V_{u}"),
             formula("q_{u} (c − d)"),
-            f"{u.q(rec.q_u)} × ({fmt.decimal(c)} − {fmt.decimal(d)})",
+            f"{u.q(rec.q_u)} × ({u.feet(c)} − {u.feet(d)})" if c > d else f"{u.q(rec.q_u)} × max({u.feet(c)} − {u.feet(d)}, 0)",
             u.shear(float(design.shear)),
             "at d from the moment section" + ("; the section lies beyond the footing's edge: no demand" if c <= d else ""),
             clause="13.2.7.2",
@@ -343,10 +366,10 @@ def _reinforced(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, flexure:
     ]
     rho = float(design.steel_provided) / d if d > 0 else 0.0
     coeff = min(VC_COEFFICIENT * rho ** (1.0 / 3.0), VC_LIMIT)
-    root = math.sqrt(min(result_fc(result) / PSI, 100.0**2))
+    fc_root = min(result_fc(result), (100.0**2) * PSI)  # √f'c at most 100 psi (22.5.3.1)
     phi = float(shear.record.phi)
     lam = result.strength_table.concrete.lam
-    numbers = f"{phi:g} × {coeff:.3f} × {lam:g} × {root:.2f} psi × 12 in × {d / INCH:.2f} in" if u.us else None
+    numbers = f"{phi:g} × {coeff:.4f} × {lam:g} × {u.root(fc_root)} × {u.strip_sub()} × {u.sub_small(d)}"
     shear_blocks.append(
         Equation(
             formula("φV_{c}"),
@@ -356,6 +379,7 @@ def _reinforced(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, flexure:
             formula(
                 f"ρ_{{w}} = {rho:.5f}; λ_{{s}} = 1 (13.2.6.2); φ = {phi:g}"
                 + (" (21.2.4.3, SDC D to F)" if phi < 0.75 else " (Table 21.2.1)")
+                + u.root_note(fc_root)
             ),
             clause="22.5.5.1(c)",
         )
@@ -363,7 +387,7 @@ def _reinforced(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, flexure:
     dev: list[Block] = [
         Equation(
             formula("ℓ_{d}"),
-            formula("(3/40) (f_{y} / (λ √f'_{c})) ψ_{t} ψ_{e} ψ_{s} ψ_{g} / ((c_{b} + K_{tr}) / d_{b}) d_{b} ≥ 12 in"),
+            formula("max((3/40) (f_{y} / (λ √f'_{c})) ψ_{t} ψ_{e} ψ_{s} ψ_{g} / ((c_{b} + K_{tr}) / d_{b}) d_{b}, 12 in)"),
             None,
             u.small(float(design.development_length), 1),
             formula("(c_{b} + K_{tr}) / d_{b} ≤ 2.5, K_{tr} = 0 (no stirrups)"),
@@ -372,7 +396,7 @@ def _reinforced(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, flexure:
         Equation(
             formula("ℓ_{avail}"),
             formula("c − cover"),
-            f"{u.small(c)} − {u.small(grid_cover(result))}",
+            f"{u.sub_small(c)} − {u.sub_small(grid_cover(result))}",
             u.small(float(design.development_available)),
             "",
             clause="25.4.2.4",
@@ -449,12 +473,17 @@ def _plain(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, rec: Any, she
     h_s = float(design.strength_thickness)
     c = float(design.cantilever)
     lam = result.strength_table.concrete.lam
-    root = math.sqrt(result_fc(result) / PSI)
+    fc = result_fc(result)
+    modulus = (
+        f"{float(design.section_modulus) * FOOT / INCH**3:,.1f} in³/ft"
+        if u.us
+        else f"{float(design.section_modulus) * 1e9:,.0f} mm³/m"
+    )
     blocks: list[Block] = [
         Equation(
             formula("h_{s}"),
             formula("h − 2 in"),
-            f"{u.small(result.thickness)} − {u.small(SOIL_ALLOWANCE, 0)}",
+            f"{u.sub_small(result.thickness)} − {u.sub_small(SOIL_ALLOWANCE, 0)}",
             u.small(h_s),
             f"strength thickness of concrete cast against soil; h ≥ {u.small(MIN_THICKNESS, 0)} (14.3.2.1)",
             clause="14.5.1.7",
@@ -462,34 +491,35 @@ def _plain(result: Any, fmt: Formatter, u: MemberUnits, grid: Any, rec: Any, she
         Equation(
             formula("S_{m}"),
             formula("b h_{s}² / 6"),
-            f"12 in × ({u.small(h_s)})² / 6" if u.us else None,
-            f"{float(design.section_modulus) * FOOT / INCH**3:,.1f} in³/ft"
-            if u.us
-            else f"{float(design.section_modulus) * 1e9:,.0f} mm³/m",
+            f"{u.strip_sub()} × ({u.sub_small(h_s)})² / 6",
+            modulus,
             clause="14.5.2.1",
         ),
         Equation(
             formula("φM_{n}"),
             formula(f"{PHI_PLAIN:g} × {FLEXURE_COEFFICIENT:g} λ √f'_{{c}} S_{{m}}"),
-            f"{PHI_PLAIN:g} × {FLEXURE_COEFFICIENT:g} × {lam:g} × {root:.2f} psi × {float(design.section_modulus) * FOOT / INCH**3:,.1f} in³"
-            if u.us
-            else None,
+            f"{PHI_PLAIN:g} × {FLEXURE_COEFFICIENT:g} × {lam:g} × {u.root(fc)} × {modulus}",
             u.moment(float(design.moment_capacity)),
-            "φ = 0.60 (Table 21.2.1)",
+            formula("φ = 0.60 (Table 21.2.1)" + u.root_note(fc)),
             clause="14.5.2.1",
         ),
         Equation(
             formula("V_{u}"),
             formula("q_{u} (c − h_{s})"),
-            f"{u.q(rec.q_u)} × ({fmt.decimal(c)} − {fmt.decimal(h_s)})",
+            f"{u.q(rec.q_u)} × ({u.feet(c)} − {u.feet(h_s)})"
+            if c > h_s
+            else f"{u.q(rec.q_u)} × max({u.feet(c)} − {u.feet(h_s)}, 0)",
             u.shear(float(design.shear)),
-            formula("shear section at h_{s} from the moment section"),
+            formula(
+                "shear section at h_{s} from the moment section"
+                + ("; it lies beyond the footing's edge: no demand" if c <= h_s else "")
+            ),
             clause="14.4.3.3",
         ),
         Equation(
             formula("φV_{n}"),
             formula(f"{PHI_PLAIN:g} × (4/3) λ √f'_{{c}} b h_{{s}}"),
-            f"{PHI_PLAIN:g} × {SHEAR_COEFFICIENT:.4f} × {lam:g} × {root:.2f} psi × 12 in × {h_s / INCH:.2f} in" if u.us else None,
+            f"{PHI_PLAIN:g} × {SHEAR_COEFFICIENT:.4f} × {lam:g} × {u.root(fc)} × {u.strip_sub()} × {u.sub_small(h_s)}",
             u.shear(float(design.shear_capacity)),
             clause="14.5.5.1",
         ),

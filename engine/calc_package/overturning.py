@@ -39,6 +39,7 @@ def overturning_sheet(project: Project, wall: Wall, result: WallResult, fmt: For
     assert ot is not None
     toe_sign = float(result.table.toe_sign[i])
     L = fmt.length(result.length)
+    L_term = fmt.term(result.length)
     toe = (
         f"toe at x = L_{{f}} = {L} (the end the load pushes toward)"
         if toe_sign > 0
@@ -50,36 +51,37 @@ def overturning_sheet(project: Project, wall: Wall, result: WallResult, fmt: For
         f = combo.factor(v.case)
         if f == 0.0 or v.force == 0.0:
             continue
-        x = fmt.length(_position(v, g.direction))
+        x = fmt.term(_position(v, g.direction))
         mirrored = mirrored or (g.direction == "-" and abs(v.x_reversed - v.x) > 1e-9)
-        arm = f"({L} − {x})" if toe_sign > 0 else x
+        arm = f"({L_term} − {x})" if toe_sign > 0 else x
         if f * v.force > 0.0:  # downward: resists
             resisting.append(f"{factor_text(f)} × {fmt.sub(v.force, Kind.FORCE)} × {arm}")
         else:  # upward: overturns
             overturning.append(f"|{factor_text(f)} × {fmt.sub(v.force, Kind.FORCE)}| × {arm}")
     weight = fmt.sub(result.self_weight.total, Kind.FORCE)
     if f_d > 0.0:
-        resisting.append(f"{factor_text(f_d)} × {weight} × {L}/2")
+        resisting.append(f"{factor_text(f_d)} × {weight} × {L_term}/2")
     elif f_d < 0.0:
-        overturning.append(f"|{factor_text(f_d)}| × {weight} × {L}/2")
+        overturning.append(f"|{factor_text(f_d)}| × {weight} × {L_term}/2")
     lateral = _lateral_terms(wall, combo, g.direction, fmt, with_arm=True)
-    mirror_note = 'reversing loads at their mirror position (direction −; loads table, after "−:")' if mirrored else ""
+    # said once for both moments
+    mirror_note = ' Loads that reverse are at their mirror position (direction −; loads table, after "−:").' if mirrored else ""
     blocks: list[Block] = _governing_heading(Check.OVERTURNING, g)
-    blocks.append(Para(formula(f"Moments about the {toe}. Arms of vertical loads are measured from the toe."), "small"))
+    blocks.append(
+        Para(formula(f"Moments about the {toe}. Arms of vertical loads are measured from the toe.{mirror_note}"), "small")
+    )
     blocks += [
         Equation(
             formula("M_{OT}"),
             formula("Σ f H (h + t_{f}) + Σ |f P| arm (uplift)" + (" + |f_{D}| W L_{f}/2" if f_d < 0 else "")),
             _join(lateral + overturning),
             fmt.moment(ot.moment),
-            mirror_note if overturning else "",
         ),
         Equation(
             formula("M_{R}"),
             formula("Σ f P arm (downward loads)" + (" + f_{D} W L_{f}/2" if f_d > 0 else "")),
             _join(resisting),
             fmt.moment(ot.resisting),
-            mirror_note,
         ),
         Equation(
             formula("ratio"),

@@ -3,7 +3,6 @@
 from __future__ import annotations
 
 import math
-from dataclasses import replace
 
 from ..model import Check, Project, Wall
 from ..results import WallResult
@@ -37,8 +36,8 @@ def sliding_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
     assert sl is not None
     soil = project.soil
     N = fmt.sub(case.vertical, Kind.FORCE)
-    B, t = fmt.length(result.width), fmt.length(result.thickness)
-    hs = fmt.length(wall.footing.cover)
+    B, t = fmt.term(result.width), fmt.term(result.thickness)
+    hs = fmt.term(wall.footing.cover)
     blocks: list[Block] = _governing_heading(Check.SLIDING, g)
     blocks.append(
         Equation(
@@ -57,9 +56,9 @@ def sliding_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
         )
     else:
         n_eq = _n_equation(wall, result, combo, f_d, case.vertical, fmt)
-        blocks.append(replace(n_eq, note="vertical load on the soil in this combination"))
+        blocks.append(n_eq)
     if case.vertical > 0.0:
-        blocks.append(Equation(formula("F_{μ}"), formula("μ N"), f"{soil.friction:g} × {N}", fmt.force(sl.friction), "friction"))
+        blocks.append(Equation(formula("F_{μ}"), formula("μ N"), f"{soil.friction:g} × {N}", fmt.force(sl.friction)))
     else:
         blocks.append(Equation(formula("F_{μ}"), None, None, fmt.force(sl.friction), "N ≤ 0: no friction"))
     if soil.cohesion > 0.0:
@@ -76,7 +75,7 @@ def sliding_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
     else:
         blocks.append(Equation(formula("F_{c}"), None, None, fmt.force(sl.cohesion), "no cohesion (c = 0)"))
     if soil.passive > 0.0:
-        z = fmt.length(soil.passive_ignore)
+        z = fmt.term(soil.passive_ignore)
         note = "passive on the end face from z_{0} = max(h_{s}, ignored depth) below grade to the base at h_{s} + t_{f}"
         if sl.passive == 0.0:
             note = "the ignored depth reaches the base: no passive resistance"
@@ -84,7 +83,7 @@ def sliding_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
             Equation(
                 formula("F_{p}"),
                 formula("p_{p} B ((h_{s} + t_{f})² − z_{0}²) / 2"),
-                f"{fmt.gradient(soil.passive)} × {B} × (({hs} + {t})² − max({hs}, {z})²) / 2",
+                f"{fmt.weight_term(soil.passive, Kind.PRESSURE_GRADIENT)} × {B} × (({hs} + {t})² − max({hs}, {z})²) / 2",
                 fmt.force(sl.passive),
                 formula(note),
             )
@@ -97,7 +96,7 @@ def sliding_sheet(project: Project, wall: Wall, result: WallResult, fmt: Formatt
             formula("F_{μ} + F_{c} + F_{p}"),
             f"{fmt.force(sl.friction)} + {fmt.force(sl.cohesion)} + {fmt.force(sl.passive)}",
             fmt.force(sl.resistance),
-            "friction and passive combined (IBC 1806.3.1)",
+            clause="IBC 1806.3.1",  # friction and passive combined
         ),
         Equation(
             formula("ratio"),
