@@ -186,7 +186,7 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
         tables = _tables(project, trial)
         check_normalized, allowed, all_checks = feasibility_maps(tables, widths, thicknesses)
         passes = allowed & (np.min(check_normalized, axis=0) >= 1.0 - 1e-9)
-        maps.append((trial, tables[0], check_normalized, allowed, passes))
+        maps.append((trial, tables, check_normalized, allowed, passes))
         if not passes.any():
             continue
         rows, cols = np.nonzero(passes)
@@ -199,7 +199,8 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
             best = candidate
 
     k = best[4] if best is not None else len(maps) - 1
-    trial, table, check_normalized, allowed, passes = maps[k]
+    trial, trial_tables, check_normalized, allowed, passes = maps[k]
+    table = trial_tables[0]
     governing = np.argmin(check_normalized, axis=0)
     normalized = np.min(check_normalized, axis=0)
     width: float | None
@@ -209,7 +210,7 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
         _, extension, thickness, width, _, row, col = best
         message = _why_smallest(all_checks, check_normalized, passes, allowed, row, col)
         if project.concrete is not None:
-            row, col, skipped = _along_the_length(project, trial, widths, thicknesses, passes, row, col)
+            row, col, skipped = _along_the_length(trial_tables[-1], widths, thicknesses, passes, row, col)
             width, thickness = float(widths[col]), float(thicknesses[row])
             if skipped:
                 plural = "s pass" if skipped > 1 else " passes"
@@ -244,25 +245,29 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
 
 
 # How many passing sizes, in order of concrete, are tried against the design along the length (each
-# costs tens of milliseconds); beyond them the first is kept and the verdict says it fails.
+# costs a few milliseconds); beyond them the first is kept and the verdict says it fails.
 ALONG_TRIES = 40
 
 
 def _along_the_length(
-    project: Project, wall: Wall, widths: np.ndarray, thicknesses: np.ndarray, passes: np.ndarray, row: int, col: int
+    strength: CaseTable, widths: np.ndarray, thicknesses: np.ndarray, passes: np.ndarray, row: int, col: int
 ) -> tuple[int, int, int]:
     """The first size, in order of least B·t_f (ties thinner, then narrower), that passes the grid's
-    checks and also the design along the length (:func:`engine.concrete.along.design_along`, which
-    the grid does not evaluate: it costs tens of milliseconds a size). Returns (row, col, how many
-    smaller passing sizes fail it); the grid's choice when none of the first ``ALONG_TRIES`` pass."""
-    from .results import check_wall
+    checks and also the design along the length (:func:`engine.concrete.along.passes_along`, which
+    the grid does not evaluate: it costs milliseconds a size). Returns (row, col, how many smaller
+    passing sizes fail it); the grid's choice when none of the first ``ALONG_TRIES`` pass.
 
+    ``strength`` is the wall's strength case table; it does not depend on the footing's size, so each
+    size tried is only evaluated on it (the same numbers :func:`engine.results.check_wall` gets on a
+    wall with that footing)."""
+    from .concrete.along import passes_along
+
+    designed = bool(strength.cases) and strength.concrete is not None  # else nothing to design along it
     rows, cols = np.nonzero(passes)
     order = np.lexsort((widths[cols], thicknesses[rows], np.round(thicknesses[rows] * widths[cols], 12)))
     for tried, i in enumerate(order[:ALONG_TRIES].tolist()):
         r, c = int(rows[i]), int(cols[i])
-        trial = replace(wall, footing=replace(wall.footing, width=float(widths[c]), thickness=float(thicknesses[r])))
-        if check_wall(project, trial).passes_along:
+        if not designed or passes_along(strength, evaluate(strength, float(widths[c]), float(thicknesses[r]))):
             return r, c, tried
     return row, col, 0
 

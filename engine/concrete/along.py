@@ -25,11 +25,14 @@ import numpy as np
 from ..loads import self_weight
 from ..model import LateralLoad, LineLoad, LoadCase, PointLoad, WallConstruction
 from .longitudinal import (
+    TOP_COVER,
     BeamDiagram,
     BeamLineLoad,
     BeamPointLoad,
     LongitudinalDesign,
+    bars_fail_anywhere,
     beam_diagram,
+    beam_diagrams,
     chord_couple,
     design_longitudinal,
     rigid_soil_stations,
@@ -37,7 +40,10 @@ from .longitudinal import (
 from .transverse import TOLERANCE
 
 if TYPE_CHECKING:  # pragma: no cover
+    from ..model import Reinforcement
     from ..stability import CaseTable, Evaluation
+    from .bars import Bar
+    from .transverse import Materials
 
 # Strips that carry a rigid wall's overturning as a linear pressure along the wall (even, so the
 # middle strip boundary sits at the wall's mid-length).
@@ -89,6 +95,100 @@ def case_diagram(table: CaseTable, evaluation: Evaluation, index: int) -> BeamDi
     return beam_diagram(x, q, width, lines, points)
 
 
+def case_diagrams(table: CaseTable, evaluation: Evaluation) -> list[BeamDiagram]:
+    """The beam diagram of every strength case on the size ``evaluation`` was made for, at once.
+
+    The same loads, in the same order, as :func:`case_diagram` builds case by case, handed to
+    :func:`engine.concrete.longitudinal.beam_diagrams` (numpy over cases); a property test compares
+    the two.
+    """
+    wall = table.wall
+    k = len(table.cases)
+    width = float(np.asarray(evaluation.statics.width))
+    thickness = float(np.asarray(evaluation.statics.thickness))
+    length = table.length
+    start = wall.footing.extension_start
+    total = float(self_weight(wall, table.soil, width, thickness).total)
+    wall_start, wall_end = start, start + wall.length
+    light_frame = wall.construction is WallConstruction.LIGHT_FRAME
+    strips: list[tuple[float, float, float]] = []
+    if not light_frame:  # the strips of a rigid wall: their edges and the moment of a unit intensity
+        edges = np.linspace(wall_start, wall_end, WALL_STRIPS + 1)
+        mids = 0.5 * (edges[:-1] + edges[1:]) - 0.5 * (wall_start + wall_end)
+        step = float(edges[1] - edges[0])
+        unit = float(np.sum(step * mids * mids))
+        strips = [(float(mids[j]), float(edges[j]), float(edges[j + 1])) for j in range(WALL_STRIPS)]
+    vertical = evaluation.statics.vertical
+    eccentricity = evaluation.statics.eccentricity
+    stations, pressures, lines_of, points_of = [], [], [], []
+    for index in range(k):
+        case = table.cases[index]
+        combo, sign = case.combination, case.direction.sign
+        lines: list[tuple[float, float, float]] = []
+        points: list[tuple[float, float]] = []
+        weight = total * combo.factor(LoadCase.D)
+        if weight:
+            lines.append((weight / length, 0.0, length))
+        moment = 0.0
+        for load in wall.loads:
+            f = combo.factor(load.case)
+            if f == 0.0:
+                continue
+            mirror = sign < 0 and getattr(load, "reverses", False)
+            if isinstance(load, LineLoad):
+                a, b = (wall.length - load.end, wall.length - load.start) if mirror else (load.start, load.end)
+                lines.append((f * load.value, start + a, start + b))
+            elif isinstance(load, PointLoad):
+                at = wall.length - load.at if mirror else load.at
+                points.append((f * load.value, start + at))
+            elif isinstance(load, LateralLoad) and sign != 0:
+                moment += sign * f * load.value * (load.height + thickness)
+        if moment:
+            if light_frame:
+                chords = chord_couple(moment, wall_start=wall_start, wall_end=wall_end, offset=wall.chord_offset)
+                points.extend((chord.value, chord.at) for chord in chords)
+            else:
+                scale = moment / unit  # sum w_i step (x_i - x_mid) = M
+                lines.extend((scale * mid, a, b) for mid, a, b in strips)
+        x, q = rigid_soil_stations(float(vertical[index]), float(eccentricity[index]), width, length)
+        stations.append(x)
+        pressures.append(q)
+        lines_of.append(lines)
+        points_of.append(points)
+    return beam_diagrams(stations, pressures, width, lines_of, points_of)
+
+
+def _setup(table: CaseTable, evaluation: Evaluation) -> tuple[float, Materials, Reinforcement | None, float]:
+    """What every case's design along the length shares: h (m), the materials, the bars given in the
+    project and the diameter of the transverse layer under the bottom bars (m)."""
+    from .transverse import Materials
+
+    concrete = table.concrete
+    if concrete is None:
+        raise ValueError("the design along the length needs the project's concrete settings")
+    thickness = float(np.asarray(evaluation.statics.thickness))
+    materials = Materials(fc=concrete.fc, fy=concrete.fy, lam=concrete.lam, cover=concrete.cover)
+    return thickness, materials, table.wall.footing.reinforcement, _transverse_layer(evaluation)
+
+
+def _chosen_bars(
+    diagrams: list[BeamDiagram], thickness: float, materials: Materials, given: Reinforcement | None, layer: float
+) -> tuple[tuple[int, Bar] | str | None, tuple[int, Bar] | str | None, int, int]:
+    """The bottom and top bars (given, else chosen for the case with the largest sagging, and the one
+    with the largest hogging, moment) and the indices of those two cases."""
+    sag = int(np.argmax([d.max_moment for d in diagrams]))
+    hog = int(np.argmin([d.min_moment for d in diagrams]))
+    bottom = given.bottom if given is not None and given.bottom is not None else None
+    top = given.top if given is not None and given.top is not None else None
+    if bottom is None:
+        chosen = design_longitudinal(diagrams[sag], thickness=thickness, materials=materials, top=top, layer_below=layer)
+        bottom = (chosen.bottom.count, chosen.bottom.bar) if chosen.bottom.bar is not None else None
+    if top is None:
+        chosen = design_longitudinal(diagrams[hog], thickness=thickness, materials=materials, bottom=bottom, layer_below=layer)
+        top = (chosen.top.count, chosen.top.bar) if chosen.top.bar is not None else None
+    return bottom, top, sag, hog
+
+
 def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[LongitudinalDesign, int, BeamDiagram]:
     """Design the longitudinal bars for every strength case at the evaluated size (ACI 318-19).
 
@@ -101,28 +201,13 @@ def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[Longitudinal
     case is checked with those bars. Returns the design of the case that governs (the first failing
     one, else the one with the largest moment) with its index and diagram.
     """
-    from .transverse import Materials
-
-    wall, concrete = table.wall, table.concrete
-    if concrete is None:
-        raise ValueError("the design along the length needs the project's concrete settings")
-    thickness = float(np.asarray(evaluation.statics.thickness))
-    materials = Materials(fc=concrete.fc, fy=concrete.fy, lam=concrete.lam, cover=concrete.cover)
-    given = wall.footing.reinforcement
-    layer = _transverse_layer(evaluation)
-    diagrams = [case_diagram(table, evaluation, i) for i in range(len(table.cases))]
+    thickness, materials, given, layer = _setup(table, evaluation)
+    concrete = table.concrete
+    assert concrete is not None
+    diagrams = case_diagrams(table, evaluation)
     if not diagrams:
         raise ValueError("no strength case")
-    sag = int(np.argmax([d.max_moment for d in diagrams]))
-    hog = int(np.argmin([d.min_moment for d in diagrams]))
-    bottom = given.bottom if given is not None and given.bottom is not None else None
-    top = given.top if given is not None and given.top is not None else None
-    if bottom is None:
-        chosen = design_longitudinal(diagrams[sag], thickness=thickness, materials=materials, top=top, layer_below=layer)
-        bottom = (chosen.bottom.count, chosen.bottom.bar) if chosen.bottom.bar is not None else None
-    if top is None:
-        chosen = design_longitudinal(diagrams[hog], thickness=thickness, materials=materials, bottom=bottom, layer_below=layer)
-        top = (chosen.top.count, chosen.top.bar) if chosen.top.bar is not None else None
+    bottom, top, sag, hog = _chosen_bars(diagrams, thickness, materials, given, layer)
     largest = sag if diagrams[sag].max_moment >= -diagrams[hog].min_moment else hog
     plain = given is not None and given.plain
     if plain:  # the plain section first: when it carries every case, the bars are only checked at one
@@ -148,6 +233,49 @@ def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[Longitudinal
     failing = [i for i, d in enumerate(designs) if not d.passes]
     index = failing[0] if failing else largest
     return designs[index], index, diagrams[index]
+
+
+def passes_along(table: CaseTable, evaluation: Evaluation) -> bool:
+    """Whether :func:`design_along` passes at the evaluated size, without its words or its governing
+    design: the same diagrams, bars and checks, stopping at the first case that fails.
+
+    Every case passes when (for a plain footing) its plain section carries it or its bars do, and
+    (otherwise) its bars do; the words :func:`design_along` adds to the first failure do not change
+    whether it passes.
+    """
+    thickness, materials, given, layer = _setup(table, evaluation)
+    concrete = table.concrete
+    assert concrete is not None
+    if not table.cases:
+        raise ValueError("no strength case")
+    width = float(np.asarray(evaluation.statics.width))
+    plain = given is not None and given.plain
+    # given bars that fail whatever the loads (As,min, fit, count) fail every case; then only a plain
+    # section that carries every case passes, and a reinforced footing fails without its diagrams
+    hopeless = given is not None and any(
+        bars is not None
+        and bars_fail_anywhere(*bars, width=width, thickness=thickness, materials=materials, cover=cover, layer_below=below)
+        for bars, cover, below in ((given.bottom, materials.cover, layer), (given.top, TOP_COVER, 0.0))
+    )
+    if hopeless and not plain:
+        return False
+    diagrams = case_diagrams(table, evaluation)
+    carries: list[bool] = [False] * len(diagrams)
+    if plain:
+        phi_mn, phi_vn = _plain_capacities(width, thickness, concrete.fc, concrete.lam)
+        carries = [_plain_carries(d, phi_mn, phi_vn) for d in diagrams]
+    if hopeless:
+        return all(carries)
+    bottom, top, _, _ = _chosen_bars(diagrams, thickness, materials, given, layer)
+    for diagram, plain in zip(diagrams, carries, strict=True):
+        if plain:
+            continue
+        design = design_longitudinal(
+            diagram, thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer, words=False
+        )
+        if not design.passes:
+            return False
+    return True
 
 
 def _transverse_layer(evaluation: Evaluation) -> float:

@@ -26,8 +26,10 @@ there (the reduction to the section at d from a support is not taken: conservati
 from __future__ import annotations
 
 import math
+from bisect import bisect_left
 from collections.abc import Sequence
 from dataclasses import dataclass
+from functools import lru_cache
 
 import numpy as np
 
@@ -166,6 +168,25 @@ def _with_points(stations: np.ndarray, points: np.ndarray, gap: float) -> np.nda
             nodes = np.insert(nodes, i, point)
         elif 0 < near[0] < nodes.size - 1:
             nodes[near[0]] = point  # the ends of the footing stay where they are
+    return nodes
+
+
+def _with_points_sorted(stations: list[float], points: list[float], gap: float) -> list[float]:
+    """:func:`_with_points` on Python floats, ``points`` already sorted: the same nodes, step for step
+    (bisect_left is numpy's searchsorted), without an array copy per point added."""
+    nodes = list(stations)
+    for point in points:
+        i = bisect_left(nodes, point)
+        n = len(nodes)
+        if i > 0 and abs(nodes[i - 1] - point) <= gap:
+            near = i - 1
+        elif i < n and abs(nodes[i] - point) <= gap:
+            near = i
+        else:
+            nodes.insert(i, point)
+            continue
+        if 0 < near < n - 1:
+            nodes[near] = point  # the ends of the footing stay where they are
     return nodes
 
 
@@ -319,6 +340,157 @@ def beam_diagram(
     )
 
 
+def beam_diagrams(
+    stations: Sequence[np.ndarray],
+    pressures: Sequence[np.ndarray],
+    width: float,
+    line_loads: Sequence[Sequence[tuple[float, float, float]]],
+    point_loads: Sequence[Sequence[tuple[float, float]]],
+) -> list[BeamDiagram]:
+    """:func:`beam_diagram` of several load sets on one footing at once (statics, derived here).
+
+    The same equations as :func:`beam_diagram`, evaluated for every load set together (numpy over
+    load sets x segments): each set keeps its own nodes (its stations and its loads' ends), and the
+    shorter node lists are padded with their far end, whose zero-length segments add nothing. Used for
+    all the strength cases of one size (:func:`engine.concrete.along.case_diagrams`); a property test
+    compares it with :func:`beam_diagram` case by case.
+
+    Args:
+        stations, pressures: per load set, the stations (m) and the soil pressure q there (Pa).
+        width: B (m).
+        line_loads: per load set, (w in N/m, start, end) of each uniform downward line load, in order.
+        point_loads: per load set, (P in N, at) of each downward point load, in order.
+
+    Raises:
+        InputError: as :func:`beam_diagram`.
+    """
+    k = len(stations)
+    if not (math.isfinite(width) and width > 0.0):
+        raise InputError("width", "must be a finite number greater than zero")
+    if k == 0:
+        return []
+    node_lists = []
+    for xs, qs, lines, points in zip(stations, pressures, line_loads, point_loads, strict=True):
+        if xs.ndim != 1 or xs.size < 2 or not np.all(np.diff(xs) > 0.0) or not np.all(np.isfinite(xs)):
+            raise InputError("x", "stations must be at least two finite positions, increasing")
+        if qs.shape != xs.shape or not np.all(np.isfinite(qs)):
+            raise InputError("pressure", "expected one finite pressure at each station")
+        low, high = float(xs[0]), float(xs[-1])
+        slack = 1e-9 * (high - low)
+        line_array = np.asarray(lines, dtype=float).reshape(-1, 3)
+        point_array = np.asarray(points, dtype=float).reshape(-1, 2)
+        fine = (
+            np.all(np.isfinite(line_array))
+            and np.all(np.isfinite(point_array))
+            and np.all(line_array[:, 2] > line_array[:, 1])
+            and np.all(line_array[:, 1] >= low - slack)
+            and np.all(line_array[:, 2] <= high + slack)
+            and np.all(point_array[:, 1] >= low - slack)
+            and np.all(point_array[:, 1] <= high + slack)
+        )
+        if not fine:  # say which load, as BeamLineLoad, BeamPointLoad and beam_diagram would
+            for i, (value, start, end) in enumerate(lines):
+                BeamLineLoad(value=value, start=start, end=end)
+                if start < low - slack or end > high + slack:
+                    raise InputError(f"line_loads[{i}]", "the line load runs past the footing")
+            for i, (value, at) in enumerate(points):
+                BeamPointLoad(value=value, at=at)
+                if not low - slack <= at <= high + slack:
+                    raise InputError(f"point_loads[{i}]", "the point load is off the footing")
+        extra = [min(max(v, low), high) for line in lines for v in (line[1], line[2])]
+        extra += [min(max(p[1], low), high) for p in points]
+        node_lists.append(_with_points_sorted(xs.tolist(), sorted(extra), NODE_GAP * (high - low)))
+    sizes = [len(n) for n in node_lists]
+    m = max(sizes)
+    nodes = np.empty((k, m))
+    up = np.empty((k, m))
+    for i, (listed, xs, qs) in enumerate(zip(node_lists, stations, pressures, strict=True)):
+        row = np.asarray(listed, dtype=float)
+        nodes[i, : row.size] = row
+        nodes[i, row.size :] = row[-1]  # padding: zero-length segments at the far end
+        up[i] = width * np.interp(nodes[i], xs, qs)  # N/m
+    h = np.diff(nodes, axis=1)
+    real = h > 0.0
+    safe = np.where(real, h, 1.0)
+    # line loads slot by slot (slot j holds each set's j-th load, so each set sums in its own order)
+    slots = max((len(lines) for lines in line_loads), default=0)
+    if slots:
+        table = np.zeros((3, k, slots))
+        for i, lines in enumerate(line_loads):
+            if lines:
+                table[:, i, : len(lines)] = np.asarray(lines, dtype=float).T
+    w = np.zeros_like(h)
+    for j in range(slots):
+        intensity, begin, finish = table[0, :, j : j + 1], table[1, :, j : j + 1], table[2, :, j : j + 1]
+        overlap = np.minimum(nodes[:, 1:], finish) - np.maximum(nodes[:, :-1], begin)
+        w += intensity * np.clip(overlap, 0.0, None) / safe
+    n0 = up[:, :-1] - w
+    n1 = up[:, 1:] - w
+    jumps = np.zeros_like(nodes)
+    rows = np.arange(k)
+    count = max((len(points) for points in point_loads), default=0)
+    if count:
+        forces = np.zeros((2, k, count))
+        for i, points in enumerate(point_loads):
+            if points:
+                forces[:, i, : len(points)] = np.asarray(points, dtype=float).T
+        for p in range(count):
+            at = np.argmin(np.abs(nodes - forces[1, :, p : p + 1]), axis=1)
+            jumps[rows, at] += forces[0, :, p]
+    zero = np.zeros((k, 1))
+    right = np.concatenate([zero, np.cumsum(0.5 * h * (n0 + n1), axis=1)], axis=1) - np.cumsum(jumps, axis=1)
+    left = right + jumps
+    moment = np.concatenate([zero, np.cumsum(right[:, :-1] * h + h * h * (2.0 * n0 + n1) / 6.0, axis=1)], axis=1)
+    # peaks inside segments: V(ξ) = V0 + n0 ξ + (n1 - n0) ξ^2 / (2h) = 0 for 0 < ξ < h
+    a = (n1 - n0) / (2.0 * safe)
+    b, c = n0, right[:, :-1]
+    with np.errstate(all="ignore"):
+        disc = b * b - 4.0 * a * c
+        root = np.sqrt(np.maximum(disc, 0.0))
+        linear = np.abs(a) * h <= 1e-12 * (np.abs(b) + np.abs(c) / safe + 1e-300)
+        candidates = [
+            np.where(linear, -c / b, (-b + root) / (2.0 * a)),
+            np.where(linear, np.nan, (-b - root) / (2.0 * a)),
+        ]
+        peak_x, peak_m, peak_in = [], [], []
+        for xi in candidates:
+            inside = np.isfinite(xi) & (xi > 0.0) & (xi < h) & (disc >= 0.0) & real
+            s = np.where(inside, xi, 0.0)
+            peak_in.append(inside)
+            peak_x.append(nodes[:, :-1] + s)
+            peak_m.append(moment[:, :-1] + c * s + b * s * s / 2.0 + a * s**3 / 3.0)
+    # the extremes over the nodes, then the peaks (the order beam_diagram takes them in, for ties)
+    on_node = np.arange(m)[None, :] < np.asarray(sizes)[:, None]
+    valid = np.concatenate([on_node, *peak_in], axis=1)
+    all_x = np.concatenate([nodes, *peak_x], axis=1)
+    all_m = np.concatenate([moment, *peak_m], axis=1)
+    top = np.argmax(np.where(valid, all_m, -np.inf), axis=1)
+    bottom = np.argmin(np.where(valid, all_m, np.inf), axis=1)
+    largest_shear = np.max(np.maximum(np.abs(left), np.abs(right)), axis=1)  # padding repeats the far end
+    out = []
+    for i, size in enumerate(sizes):
+        t, u = int(top[i]), int(bottom[i])
+        out.append(
+            BeamDiagram(
+                x=nodes[i, :size],
+                shear_left=left[i, :size],
+                shear_right=right[i, :size],
+                moment=moment[i, :size],
+                width=float(width),
+                net_start=n0[i, : size - 1],
+                net_end=n1[i, : size - 1],
+                closure_shear=float(right[i, size - 1]),
+                closure_moment=float(moment[i, size - 1]),
+                max_moment=float(max(all_m[i, t], 0.0)),
+                max_moment_at=float(all_x[i, t]),
+                min_moment=float(min(all_m[i, u], 0.0)),
+                min_moment_at=float(all_x[i, u]),
+                max_shear=float(largest_shear[i]),
+            )
+        )
+    return out
+
+
 @dataclass(frozen=True, slots=True)
 class FaceDesign:
     """The longitudinal bars of one face (bottom or top) of the footing.
@@ -406,34 +578,13 @@ def bars_that_fit(width: float, bar_diameter: float, side_cover: float, aggregat
 MOMENT_NOISE = 1e-6
 
 
-def _face(
-    face: str,
-    diagram: BeamDiagram,
-    thickness: float,
-    materials: Materials,
-    cover: float,
-    layer_below: float,
-    phi_shear: float,
-    aggregate: float,
-    given: tuple[int, Bar] | None,
-    explain: bool = True,
-) -> tuple[FaceDesign, list[str], bool]:
-    """The bars of one face: (design, what fails in words, whether no practical bars could pass).
-
-    Shear is checked segment by segment (between nodes): the largest |V| on the segment (at its ends,
-    or inside where the net load n changes sign) against φVc with ρw of the face that the segment's
-    larger end moment puts in tension. So the shear just beside a chord force goes with the moment on
-    that side of it, not with the moment at the node, which may be a near-zero of either sign.
-    """
-    width = diagram.width
+def _segments(diagram: BeamDiagram) -> tuple[float, np.ndarray, np.ndarray, np.ndarray]:
+    """What both faces read of the diagram's segments: the moment noise, whether each segment hogs
+    (by the moment at its end with the larger |M|), its largest |V| and where (see :func:`_face`)."""
     noise = MOMENT_NOISE * max(abs(diagram.max_moment), abs(diagram.min_moment))
     m0, m1 = diagram.moment[:-1], diagram.moment[1:]
     governing = np.where(np.abs(m1) > np.abs(m0), m1, m0)
     hogging = governing < -noise
-    in_tension = ~hogging if face == "bottom" else hogging
-    moment = diagram.max_moment if face == "bottom" else -diagram.min_moment
-    at = diagram.max_moment_at if face == "bottom" else diagram.min_moment_at
-    needed = face == "bottom" or moment > noise or bool(in_tension.any())
     v_start, v_end = diagram.shear_right[:-1], diagram.shear_left[1:]
     v_seg = np.maximum(np.abs(v_start), np.abs(v_end))
     x_seg = np.where(np.abs(v_end) > np.abs(v_start), diagram.x[1:], diagram.x[:-1])
@@ -447,6 +598,83 @@ def _face(
     inner = crosses & (v_peak > v_seg)
     v_seg = np.where(inner, v_peak, v_seg)
     x_seg = np.where(inner, diagram.x[:-1] + xi, x_seg)
+    return noise, hogging, v_seg, x_seg
+
+
+@lru_cache(maxsize=4096)
+def _section(
+    count: int,
+    the_bar: Bar,
+    width: float,
+    thickness: float,
+    cover: float,
+    layer_below: float,
+    materials: Materials,
+    phi_shear: float,
+    aggregate: float,
+) -> tuple[float, float, float, float, float, int]:
+    """What ``count`` bars on one face give whatever the diagram: d (m), As (m^2), φMn (N·m), εt,
+    φVc (N) and how many such bars fit (ACI 318-19 22.2, 22.5.5.1, 25.2.1; a pure function of its
+    arguments, kept for the next case and the next size)."""
+    d = thickness - cover - layer_below - 0.5 * the_bar.diameter
+    provided = count * the_bar.area
+    flex = flexural_strength(provided, width, d, materials)
+    phi_vc = float(one_way_shear_strength(width, d, provided / (width * d) if d > 0.0 else 0.0, materials, phi_shear))
+    max_count = bars_that_fit(width, the_bar.diameter, materials.cover, aggregate)
+    return d, provided, float(flex.capacity), float(flex.strain), phi_vc, max_count
+
+
+def bars_fail_anywhere(
+    count: int,
+    the_bar: Bar,
+    *,
+    width: float,
+    thickness: float,
+    materials: Materials,
+    cover: float,
+    layer_below: float = 0.0,
+    phi_shear: float = PHI_SHEAR,
+    aggregate: float = AGGREGATE,
+) -> bool:
+    """Whether given bars on a face fail along the length whatever the diagram: below As,min =
+    0.0018 B h (ACI 318-19 7.6.1.1), more than fit in the width (25.2.1) or fewer than two (common
+    practice). These are the ratios of :func:`design_longitudinal` that do not depend on the loads
+    (As / max(As,req, As,min) is at most As / As,min), so a face that fails here fails every case
+    with the same numbers; given bars are checked on their face even where it is not in tension."""
+    _, provided, _, _, _, max_count = _section(
+        count, the_bar, width, thickness, cover, layer_below, materials, phi_shear, aggregate
+    )
+    minimum = float(minimum_steel(width, thickness))
+    return min(provided / minimum, max_count / count, count / MIN_BARS) < 1.0 - TOLERANCE
+
+
+def _face(
+    face: str,
+    diagram: BeamDiagram,
+    thickness: float,
+    materials: Materials,
+    cover: float,
+    layer_below: float,
+    phi_shear: float,
+    aggregate: float,
+    given: tuple[int, Bar] | None,
+    explain: bool = True,
+    segments: tuple[float, np.ndarray, np.ndarray, np.ndarray] | None = None,
+) -> tuple[FaceDesign, list[str], bool]:
+    """The bars of one face: (design, what fails in words, whether no practical bars could pass).
+
+    Shear is checked segment by segment (between nodes): the largest |V| on the segment (at its ends,
+    or inside where the net load n changes sign) against φVc with ρw of the face that the segment's
+    larger end moment puts in tension. So the shear just beside a chord force goes with the moment on
+    that side of it, not with the moment at the node, which may be a near-zero of either sign.
+    ``segments`` is :func:`_segments` of the diagram, when the caller has it already.
+    """
+    width = diagram.width
+    noise, hogging, v_seg, x_seg = segments if segments is not None else _segments(diagram)
+    in_tension = ~hogging if face == "bottom" else hogging
+    moment = diagram.max_moment if face == "bottom" else -diagram.min_moment
+    at = diagram.max_moment_at if face == "bottom" else diagram.min_moment_at
+    needed = face == "bottom" or moment > noise or bool(in_tension.any())
     v_face = np.where(in_tension, v_seg, 0.0)
     minimum = float(minimum_steel(width, thickness))
     if not needed and given is None:
@@ -458,16 +686,13 @@ def _face(
         return design, [], False
 
     def evaluate(count: int, the_bar: Bar) -> FaceDesign:
-        d = thickness - cover - layer_below - 0.5 * the_bar.diameter
+        d, provided, capacity, strain, phi_vc, max_count = _section(
+            count, the_bar, width, thickness, cover, layer_below, materials, phi_shear, aggregate
+        )
         required = float(steel_required(moment, width, d, materials.fc, materials.fy))
-        provided = count * the_bar.area
-        flex = flexural_strength(provided, width, d, materials)
-        capacity, strain = float(flex.capacity), float(flex.strain)
-        phi_vc = float(one_way_shear_strength(width, d, provided / (width * d) if d > 0.0 else 0.0, materials, phi_shear))
         with np.errstate(divide="ignore", invalid="ignore"):
             shear_ratios = np.where(v_face > 0.0, phi_vc / v_face, np.inf)
         worst = int(np.argmin(shear_ratios))
-        max_count = bars_that_fit(width, the_bar.diameter, materials.cover, aggregate)
         ratio = min(
             provided / max(required, minimum) if math.isfinite(required) else 0.0,
             capacity / moment if moment > 0.0 else math.inf,
@@ -593,10 +818,13 @@ def design_longitudinal(
     given_bottom = parse_counted(bottom) if isinstance(bottom, str) else bottom
     given_top = parse_counted(top) if isinstance(top, str) else top
     common = (diagram, thickness, materials)
+    segments = _segments(diagram)
     low, low_words, low_hopeless = _face(
-        "bottom", *common, materials.cover, layer_below, phi_shear, aggregate, given_bottom, explain=words
+        "bottom", *common, materials.cover, layer_below, phi_shear, aggregate, given_bottom, explain=words, segments=segments
     )
-    high, high_words, high_hopeless = _face("top", *common, top_cover, 0.0, phi_shear, aggregate, given_top, explain=words)
+    high, high_words, high_hopeless = _face(
+        "top", *common, top_cover, 0.0, phi_shear, aggregate, given_top, explain=words, segments=segments
+    )
     said = low_words + high_words + ([CANNOT_SPREAD] if low_hopeless or high_hopeless else [])
     return LongitudinalDesign(
         diagram=diagram,
@@ -616,8 +844,10 @@ __all__ = [
     "BeamPointLoad",
     "FaceDesign",
     "LongitudinalDesign",
+    "bars_fail_anywhere",
     "bars_that_fit",
     "beam_diagram",
+    "beam_diagrams",
     "chord_couple",
     "design_longitudinal",
     "rigid_soil_stations",

@@ -1,0 +1,141 @@
+"""The beam diagrams of many load sets at once equal the diagrams of each set on its own.
+
+engine.concrete.longitudinal.beam_diagrams evaluates the statics of beam_diagram (V and M of a free
+beam on the rigid-footing soil pressure, derived here, D) for several load sets together, with numpy
+over sets x segments. beam_diagram, one set at a time, is the reference: every array and every
+extreme must agree for random footings, loads (including loads that end on the footing's ends or on
+each other's ends, and uplift) and soil pressures. engine.concrete.along.case_diagrams is checked the
+same way against case_diagram on random walls of every construction, and passes_along against the
+verdict of design_along.
+"""
+
+from __future__ import annotations
+
+import json
+from dataclasses import replace
+
+import numpy as np
+from hypothesis import assume, given, settings
+from hypothesis import strategies as st
+from kernline.engine.concrete.along import case_diagram, case_diagrams, design_along, passes_along
+from kernline.engine.concrete.longitudinal import (
+    BeamLineLoad,
+    BeamPointLoad,
+    beam_diagram,
+    beam_diagrams,
+    rigid_soil_stations,
+)
+from kernline.engine.model import INCH
+from kernline.engine.project_file import parse_project
+from kernline.engine.resources import resource_path
+from kernline.engine.results import check_wall
+
+FAST = settings(max_examples=60, deadline=None)
+
+FIELDS = (
+    "x",
+    "shear_left",
+    "shear_right",
+    "moment",
+    "width",
+    "net_start",
+    "net_end",
+    "closure_shear",
+    "closure_moment",
+    "max_moment",
+    "max_moment_at",
+    "min_moment",
+    "min_moment_at",
+    "max_shear",
+)
+
+fractions = st.sampled_from([0.0, 0.25, 0.5, 1.0]) | st.floats(0.0, 1.0)
+
+
+@st.composite
+def load_set(draw, length):
+    """Line and point loads on a footing of ``length``, with their soil stations and pressures."""
+    lines = []
+    for _ in range(draw(st.integers(0, 5))):
+        a, b = sorted((draw(fractions), draw(fractions)))
+        assume(b - a > 1e-6)
+        lines.append(BeamLineLoad(value=draw(st.floats(-5e4, 2e5)), start=a * length, end=b * length))
+    points = [
+        BeamPointLoad(value=draw(st.floats(-2e5, 5e5)), at=draw(fractions) * length) for _ in range(draw(st.integers(0, 4)))
+    ]
+    vertical = draw(st.floats(-1e4, 2e6))
+    eccentricity = draw(st.floats(-0.6, 0.6)) * length
+    return lines, points, vertical, eccentricity
+
+
+def assert_same(one, other):
+    for name in FIELDS:
+        a, b = np.asarray(getattr(one, name)), np.asarray(getattr(other, name))
+        assert a.shape == b.shape, name
+        np.testing.assert_allclose(b, a, rtol=1e-12, atol=1e-9 * (1.0 + float(np.max(np.abs(a), initial=0.0))), err_msg=name)
+
+
+@FAST
+@given(st.floats(1.0, 30.0), st.floats(0.3, 3.0), st.data())
+def test_diagrams_at_once_equal_each_diagram_alone(length, width, data):
+    """beam_diagrams of 1 to 6 load sets equals beam_diagram of each (D)."""
+    sets = [data.draw(load_set(length)) for _ in range(data.draw(st.integers(1, 6)))]
+    stations, pressures = zip(*(rigid_soil_stations(n, e, width, length) for _, _, n, e in sets), strict=True)
+    together = beam_diagrams(
+        stations,
+        pressures,
+        width,
+        [[(w.value, w.start, w.end) for w in lines] for lines, _, _, _ in sets],
+        [[(p.value, p.at) for p in points] for _, points, _, _ in sets],
+    )
+    assert len(together) == len(sets)
+    for (lines, points, _, _), x, q, diagram in zip(sets, stations, pressures, together, strict=True):
+        assert_same(beam_diagram(x, q, width, lines, points), diagram)
+
+
+def _demo_walls():
+    raw = json.loads(resource_path("demo.kernline").read_text(encoding="utf-8"))
+    return raw, parse_project(raw)
+
+
+RAW, PROJECT = _demo_walls()
+
+
+@FAST
+@given(
+    st.integers(0, len(PROJECT.walls) - 1),
+    st.sampled_from(["concrete", "masonry", "light-frame"]),
+    st.floats(12.0, 120.0),
+    st.floats(12.0, 48.0),
+    st.floats(0.2, 4.0),
+    st.sampled_from(["as given", "designed", "plain, designed", "light", "plain, light"]),
+)
+def test_case_diagrams_equal_case_diagram_on_random_walls(index, construction, width_in, thickness_in, scale, bars):
+    """case_diagrams gives every strength case's case_diagram, and passes_along the verdict of
+    design_along, on the demo's walls (inputs only) with other constructions, sizes, loads and bars (D)."""
+    from kernline.engine.concrete.bars import bar
+    from kernline.engine.model import Reinforcement, WallConstruction
+
+    wall = PROJECT.walls[index]
+    loads = tuple(replace(load, value=load.value * scale) for load in wall.loads)
+    reinforcement = wall.footing.reinforcement
+    if bars != "as given":
+        plain = bars.startswith("plain")
+        light = (2, bar(4)) if bars.endswith("light") else None
+        transverse = None if plain else (bar(5), 12.0 * INCH)
+        reinforcement = Reinforcement(transverse=transverse, bottom=light, top=light, plain=plain)
+    footing = replace(
+        wall.footing,
+        width=max(width_in * INCH, wall.supported_thickness),
+        thickness=thickness_in * INCH,
+        reinforcement=reinforcement,
+    )
+    wall = replace(wall, construction=WallConstruction(construction), loads=loads, footing=footing)
+    result = check_wall(PROJECT, wall)
+    table, evaluation = result.strength_table, result.strength_evaluation
+    assert table is not None and evaluation is not None
+    together = case_diagrams(table, evaluation)
+    assert len(together) == len(table.cases)
+    for i, diagram in enumerate(together):
+        assert_same(case_diagram(table, evaluation, i), diagram)
+    assert passes_along(table, evaluation) == design_along(table, evaluation)[0].passes
