@@ -946,7 +946,7 @@ def _design_basis(project: Project, reports: Sequence[WallReport], fmt: _Fmt, so
                 (formula("Allowable bearing pressure q_{a}"), fmt.pressure(soil.allowable_bearing)),
                 ("Basis of the allowable", formula(basis)),
                 (
-                    "Friction coefficient μ (on the dead load f_D (D + W_f), at most N; see below)"
+                    formula("Friction coefficient μ (on the dead load f_{D} (D + W_{f}), at most N; see below)")
                     if soil.sliding_basis is SlidingBasis.DEAD
                     else "Friction coefficient μ (on the vertical load N; see below)",
                     f"{soil.friction:g}",

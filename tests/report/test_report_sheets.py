@@ -159,19 +159,47 @@ def test_schedule_rows_link_to_their_walls(member: RenderedPackage) -> None:
     assert len(cover) >= 5  # the contents lines
 
 
-def test_font_size_floor(member: RenderedPackage) -> None:
-    """Text is at least 6.5 pt (tables and drawings); subscripts at their reduced size of such text."""
+def _text_sizes(pdf: bytes) -> list[tuple[float, bool]]:
+    """The size of every piece of text shown in the PDF, and whether a smaller size of the same text run
+    (a subscript) could be meant: read back from the content streams (``Tf`` sets the size, ``Tj``/``TJ``
+    shows text)."""
     from pypdf import PdfReader
+    from pypdf.generic import ContentStream
 
-    sizes: set[float] = set()
-    for page in PdfReader(io.BytesIO(member.pdf)).pages:
-        for m in re.finditer(rb"/F\d+\s+([\d.]+)\s+Tf", page.get_contents().get_data()):
-            sizes.add(round(float(m.group(1)), 2))
+    shown: list[tuple[float, bool]] = []
+    reader = PdfReader(io.BytesIO(pdf))
+    for page in reader.pages:
+        size = 0.0
+        for operands, operator in ContentStream(page.get_contents(), reader).operations:
+            if operator == b"Tf":
+                size = round(float(operands[1]), 2)
+            elif operator in (b"Tj", b"TJ", b"'", b'"'):
+                shown.append((size, True))
+    return shown
+
+
+def too_small(sizes: set[float]) -> list[float]:
+    """Sizes below the 6.5 pt floor that are not the subscript size (0.72 ×) of a size at or above it."""
     subscript = 0.72  # engine.report's subscript scale
-    smallest_text = min(s for s in sizes if s >= TEXT_FLOOR - 1e-6)
-    assert smallest_text >= TEXT_FLOOR
-    for s in sizes:
-        assert s >= TEXT_FLOOR - 1e-6 or s >= round(TEXT_FLOOR * subscript, 2) - 0.01, s
+    allowed = {round(s * subscript, 2) for s in sizes if s >= TEXT_FLOOR - 1e-6}
+    return sorted(s for s in sizes if s < TEXT_FLOOR - 1e-6 and not any(abs(s - a) <= 0.011 for a in allowed))
+
+
+@pytest.mark.parametrize("which", ["member", "demo"])
+def test_font_size_floor(which: str, member: RenderedPackage, demo: RenderedPackage) -> None:
+    """Every piece of text read back from the PDF is at least 6.5 pt (drawings and tables), or the subscript
+    size of such text; the smallest full-size text is the floor or above it."""
+    package = member if which == "member" else demo
+    sizes = {s for s, _ in _text_sizes(package.pdf)}
+    assert not too_small(sizes), too_small(sizes)
+    subscripts = {round(s * 0.72, 2) for s in sizes}
+    assert min(sizes - subscripts) >= TEXT_FLOOR
+
+
+def test_a_label_below_the_floor_would_be_caught() -> None:
+    """5.5 pt text (the old drawing labels) is neither 6.5 pt or more nor 0.72 × a size in use."""
+    assert too_small({5.5, 6.5, 7.0, 8.0}) == [5.5]
+    assert too_small({4.68, 6.5, 8.0}) == []  # 0.72 × 6.5: a subscript of 6.5 pt text
 
 
 def test_body_text_is_at_least_seven_points() -> None:
@@ -192,11 +220,54 @@ def test_assumed_values_are_marked_and_listed_in_the_design_basis(member: Render
 def test_design_basis_citations(member: RenderedPackage, demo: RenderedPackage) -> None:
     """ASCE 7-16 2.4.1 and 2.4.5 with Ev per 12.4.2.2; required ratios cited (IBC 2021 1605.1.1, ASCE 7-16 2.4);
     soil values from the soil report; Table 1806.2 only with a presumptive class."""
-    basis = member.text_of("Design basis")
-    for expected in ("2.4.1", "2.4.5", "12.4.2.2", "IBC 2021 1605.1.1, ASCE 7-16 2.4", "Test soil letter TS-7"):
-        assert expected in basis, expected
-    assert "12.4.2.3" not in " ".join(member.pages)
-    assert "1806.2, presumptive" not in basis
+    for package, report in ((member, "Test soil letter TS-7"), (demo, "Demo geotechnical memo GM-26-031")):
+        basis = package.text_of("Design basis")
+        for expected in (
+            "the basic combinations of section 2.4.1 with the seismic load effect in the ASD forms of section 2.4.5",
+            "Ev = 0.2 SDS D (12.4.2.2)",
+            "Basis of the required ratios a ratio of 1.0 with the ASD combinations (IBC 2021 1605.1.1, ASCE 7-16 2.4)",
+            f"Source of the soil values {report}",
+        ):
+            assert expected in basis, expected
+        assert "12.4.2.3" not in " ".join(package.pages)  # ASCE 7-10 numbering
+        assert "1806.2, presumptive" not in basis
+    # the demo's passive value (250 psf/ft) exceeds every class of Table 1806.2: it is the soil report's
+    assert "250 psf/ft" in demo.text_of("Design basis")
+    assert "Table 1806.2" not in demo.text_of("Wall N1")
+
+
+def test_presumptive_class_cites_table_1806_2() -> None:
+    """With a presumptive class (and no report) the soil values are Table 1806.2's, cited as such."""
+    raw = concrete_raw()
+    raw["soil"] = {"presumptive_class": 4, "unit_weight": "110 pcf"}
+    basis = render(parse_project(raw), wall_ids="P2").text_of("Design basis")
+    assert "Source of the soil values IBC 2021 Table 1806.2, presumptive class 4" in basis
+    assert "Test soil letter" not in basis
+
+
+def test_revision_date_is_the_projects_never_the_print_date() -> None:
+    """The strip's date is project.revision_date; without one it is a dash, not the print date."""
+    import datetime as dt
+
+    raw = concrete_raw()
+    dated = render(parse_project(raw), wall_ids="P2", issued=None)
+    assert all(f"rev. date {raw['project']['revision_date']}" in p for p in dated.pages)
+    del raw["project"]["revision_date"]
+    undated = render(parse_project(raw), wall_ids="P2", issued=None)
+    for page in undated.pages:
+        assert "rev. date —" in page
+        assert f"rev. date {dt.date.today().isoformat()}" not in page
+        assert f"Printed {dt.date.today().isoformat()}" in page  # the print date is in the footer
+
+
+def test_assumed_beside_a_defaulted_value_on_the_wall_sheet(demo: RenderedPackage, demo_document) -> None:
+    """E4's line loads were entered without start and end: their extents print "(assumed)"; its point loads'
+    positions were entered and do not."""
+    e4 = demo.text_of("Wall E4: stability")
+    assert e4.count('0" to 22\'-0" (assumed)') == 3
+    assert 'at 3" (assumed)' not in e4 and 'at 3"' in e4
+    paths = [a.field for a in demo_document.project.assumptions]
+    assert "walls[3].loads[0]" in " ".join(paths)
 
 
 def test_service_fs_required_ratios_are_set_by_the_engineer() -> None:
