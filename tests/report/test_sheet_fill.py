@@ -54,3 +54,18 @@ def test_a_mostly_blank_sheet_would_be_caught(demo_document) -> None:
     fill = sheet_fill(blank)
     assert len(fill) == 2
     assert fill[0] < 0.1 < LEAST_FILL < 0.75 < fill[1]
+
+
+HEADROOM = 0.95  # a wall's last stability sheet keeps a few lines free, so one longer remark adds no sheet
+
+
+def test_each_walls_last_stability_sheet_has_headroom(demo_document, demo: RenderedPackage) -> None:
+    """The demo's walls end their stability sheets at most 95% full (E4's second sheet was 100%)."""
+    fill = sheet_fill(report_package(demo_document, issued=ISSUED))
+    sections = _sections(demo)
+    last = {
+        subject: share for share, (subject, end) in zip(fill, sections, strict=True) if end and subject.endswith(": stability")
+    }
+    assert len(last) == len(demo_document.project.walls)
+    full = {subject: round(share, 3) for subject, share in last.items() if share > HEADROOM}
+    assert not full, full
