@@ -1182,7 +1182,7 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
                 "Wall",
                 "Label",
                 formula("Footing B × t_{f} × L_{f}"),
-                *(_CHECK_TITLE.get(c, c.title) for c in reported_checks(project)),
+                *(_narrow_header(_CHECK_TITLE.get(c, c.title)) for c in reported_checks(project)),
                 "Result",
             ),
             tuple(rows),
@@ -1219,6 +1219,15 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
             ),
         ]
     return Section("schedule", "Summary schedule", "Summary schedule", tuple(blocks))
+
+
+_HYPHENATED = {"Overturning": "Over-\nturning", "Embedment": "Embed-\nment"}
+
+
+def _narrow_header(title: str) -> str:
+    """A check's title for a narrow schedule column: long words hyphenated where a reader would break them
+    (the table would otherwise cut "Overturni / ng")."""
+    return " ".join(_HYPHENATED.get(word, word) for word in title.split(" "))
 
 
 def _same_size(wall: Wall, sizing: SizingResult) -> bool:
@@ -1726,7 +1735,7 @@ def _appendix_table(project: Project, report: WallReport, fmt: _Fmt) -> tuple[st
         "BR ratio",
         "Result",
     )
-    widths = (0.215, 0.04, 0.052, 0.045, 0.058, 0.085, 0.058, 0.058, 0.045, 0.052, 0.045, 0.052, 0.045, 0.045, 0.075)
+    widths = (0.19, 0.04, 0.052, 0.045, 0.058, 0.085, 0.058, 0.058, 0.061, 0.052, 0.061, 0.052, 0.045, 0.045, 0.075)
     total = sum(widths)
     any_na = any("n/a" in row for row in rows)
     key = (

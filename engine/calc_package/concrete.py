@@ -594,13 +594,13 @@ def _along(
         rows.append(
             (
                 face.face,
-                f"{u.beam_moment(face.moment)} at x = {fmt.length(face.at)}",
+                f"{u.beam_moment(abs(face.moment))} at x = {fmt.length(face.at)}",  # the column is |M|: never "−0.00"
                 u.small(face.effective_depth),
                 u.total_area(face.steel_required) if math.isfinite(face.steel_required) else "none suffices",
                 u.total_area(face.steel_minimum),
                 f"{face.bars or '—'} ({u.total_area(face.steel_provided)})",
                 u.beam_moment(face.moment_capacity),
-                f"{u.force(face.shear)} / {u.force(face.shear_capacity)}",
+                f"{u.force(abs(face.shear))} / {u.force(face.shear_capacity)}",
                 "passes" if face.passes else ("not needed: plain carries" if plain_carries else "FAILS"),
             )
         )
