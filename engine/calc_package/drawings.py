@@ -88,8 +88,9 @@ def beam_drawing(diagram: BeamDiagram, fmt: Formatter, width: float, height: flo
     )
     # the footing itself, as a strip across the top, with its ends
     shapes.append(Rect(X(0.0), height - 10.0, length * sx, 6.0, fill="concrete", width=0.5))
-    shapes.append(Label(X(0.0), height - 2.0, "x = 0", "middle", 6.5))
-    shapes.append(Label(X(length), height - 2.0, "x = L_{f}", "middle", 6.5, markup=True))
+    # the ends named beside the strip, inside the drawing (above it they ran into the text over the drawing)
+    shapes.append(Label(X(0.0) - 4.0, height - 9.5, "x = 0", "end", 6.5))
+    shapes.append(Label(X(length) + 4.0, height - 9.5, "x = L_{f}", "start", 6.5, markup=True))
     caption = (
         f"The footing as a beam in {case}: shear V and moment M along x, to one horizontal scale "
         "(M drawn up where the bottom is in tension)."
