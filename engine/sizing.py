@@ -16,7 +16,7 @@ import numpy as np
 
 from .model import Project, Wall
 from .registry import Check, Family
-from .stability import CaseTable, case_table, evaluate
+from .stability import CaseTable, case_table, evaluate, statics
 from .units import format_length
 
 # Relative tolerance that lets the upper bound of a range be reached despite floating-point steps.
@@ -253,21 +253,24 @@ def _along_the_length(
     strength: CaseTable, widths: np.ndarray, thicknesses: np.ndarray, passes: np.ndarray, row: int, col: int
 ) -> tuple[int, int, int]:
     """The first size, in order of least B·t_f (ties thinner, then narrower), that passes the grid's
-    checks and also the design along the length (:func:`engine.concrete.along.passes_along`, which
+    checks and also the design along the length (:func:`engine.concrete.along.failing_case_along`, which
     the grid does not evaluate: it costs milliseconds a size). Returns (row, col, how many smaller
     passing sizes fail it); the grid's choice when none of the first ``ALONG_TRIES`` pass.
 
     ``strength`` is the wall's strength case table; it does not depend on the footing's size, so each
-    size tried is only evaluated on it (the same numbers :func:`engine.results.check_wall` gets on a
-    wall with that footing)."""
-    from .concrete.along import passes_along
+    size tried only needs its statics on it (the same numbers :func:`engine.results.check_wall` gets
+    on a wall with that footing)."""
+    from .concrete.along import failing_case_along
 
     designed = bool(strength.cases) and strength.concrete is not None  # else nothing to design along it
     rows, cols = np.nonzero(passes)
     order = np.lexsort((widths[cols], thicknesses[rows], np.round(thicknesses[rows] * widths[cols], 12)))
+    failed: int | None = None  # the case that failed on the last size: tried first on the next
     for tried, i in enumerate(order[:ALONG_TRIES].tolist()):
         r, c = int(rows[i]), int(cols[i])
-        if not designed or passes_along(strength, evaluate(strength, float(widths[c]), float(thicknesses[r]))):
+        if designed:
+            failed = failing_case_along(strength, statics(strength, float(widths[c]), float(thicknesses[r])), failed)
+        if not designed or failed is None:
             return r, c, tried
     return row, col, 0
 

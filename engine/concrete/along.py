@@ -18,30 +18,35 @@ end), which the caller can check.
 
 from __future__ import annotations
 
-from typing import TYPE_CHECKING
+from collections.abc import Sequence
+from typing import TYPE_CHECKING, Any
 
 import numpy as np
 
 from ..loads import self_weight
 from ..model import LateralLoad, LineLoad, LoadCase, PointLoad, WallConstruction
+from .bars import parse_counted
 from .longitudinal import (
     TOP_COVER,
+    BeamArrays,
     BeamDiagram,
     BeamLineLoad,
     BeamPointLoad,
     LongitudinalDesign,
     bars_fail_anywhere,
+    beam_arrays,
     beam_diagram,
-    beam_diagrams,
     chord_couple,
     design_longitudinal,
+    given_bars_pass,
     rigid_soil_stations,
+    rigid_soil_stations_of,
 )
 from .transverse import TOLERANCE
 
 if TYPE_CHECKING:  # pragma: no cover
     from ..model import Reinforcement
-    from ..stability import CaseTable, Evaluation
+    from ..stability import CaseTable, Evaluation, Statics
     from .bars import Bar
     from .transverse import Materials
 
@@ -99,13 +104,20 @@ def case_diagrams(table: CaseTable, evaluation: Evaluation) -> list[BeamDiagram]
     """The beam diagram of every strength case on the size ``evaluation`` was made for, at once.
 
     The same loads, in the same order, as :func:`case_diagram` builds case by case, handed to
-    :func:`engine.concrete.longitudinal.beam_diagrams` (numpy over cases); a property test compares
+    :func:`engine.concrete.longitudinal.beam_arrays` (numpy over cases); a property test compares
     the two.
     """
+    return _case_beams(table, evaluation.statics).diagrams() if table.cases else []
+
+
+def _case_beams(table: CaseTable, state: Statics, only: Sequence[int] | None = None) -> BeamArrays:
+    """:func:`case_diagrams` as the padded arrays of :func:`engine.concrete.longitudinal.beam_arrays`
+    (at least one case), on the statics of one size; ``only`` these cases (row i is case only[i]),
+    whose rows are those they have among all the cases (each row is computed on its own)."""
     wall = table.wall
-    k = len(table.cases)
-    width = float(np.asarray(evaluation.statics.width))
-    thickness = float(np.asarray(evaluation.statics.thickness))
+    chosen = list(range(len(table.cases))) if only is None else list(only)
+    width = float(np.asarray(state.width))
+    thickness = float(np.asarray(state.thickness))
     length = table.length
     start = wall.footing.extension_start
     total = float(self_weight(wall, table.soil, width, thickness).total)
@@ -118,10 +130,11 @@ def case_diagrams(table: CaseTable, evaluation: Evaluation) -> list[BeamDiagram]
         step = float(edges[1] - edges[0])
         unit = float(np.sum(step * mids * mids))
         strips = [(float(mids[j]), float(edges[j]), float(edges[j + 1])) for j in range(WALL_STRIPS)]
-    vertical = evaluation.statics.vertical
-    eccentricity = evaluation.statics.eccentricity
-    stations, pressures, lines_of, points_of = [], [], [], []
-    for index in range(k):
+    vertical = np.asarray(state.vertical)[chosen]
+    eccentricity = np.asarray(state.eccentricity)[chosen]
+    soil = rigid_soil_stations_of(vertical, eccentricity, width, length)
+    lines_of, points_of = [], []
+    for index in chosen:
         case = table.cases[index]
         combo, sign = case.combination, case.direction.sign
         lines: list[tuple[float, float, float]] = []
@@ -150,15 +163,12 @@ def case_diagrams(table: CaseTable, evaluation: Evaluation) -> list[BeamDiagram]
             else:
                 scale = moment / unit  # sum w_i step (x_i - x_mid) = M
                 lines.extend((scale * mid, a, b) for mid, a, b in strips)
-        x, q = rigid_soil_stations(float(vertical[index]), float(eccentricity[index]), width, length)
-        stations.append(x)
-        pressures.append(q)
         lines_of.append(lines)
         points_of.append(points)
-    return beam_diagrams(stations, pressures, width, lines_of, points_of)
+    return beam_arrays([x for x, _ in soil], [q for _, q in soil], width, lines_of, points_of)
 
 
-def _setup(table: CaseTable, evaluation: Evaluation) -> tuple[float, Materials, Reinforcement | None, float]:
+def _setup(table: CaseTable, state: Statics) -> tuple[float, Materials, Reinforcement | None, float]:
     """What every case's design along the length shares: h (m), the materials, the bars given in the
     project and the diameter of the transverse layer under the bottom bars (m)."""
     from .transverse import Materials
@@ -166,9 +176,9 @@ def _setup(table: CaseTable, evaluation: Evaluation) -> tuple[float, Materials, 
     concrete = table.concrete
     if concrete is None:
         raise ValueError("the design along the length needs the project's concrete settings")
-    thickness = float(np.asarray(evaluation.statics.thickness))
+    thickness = float(np.asarray(state.thickness))
     materials = Materials(fc=concrete.fc, fy=concrete.fy, lam=concrete.lam, cover=concrete.cover)
-    return thickness, materials, table.wall.footing.reinforcement, _transverse_layer(evaluation)
+    return thickness, materials, table.wall.footing.reinforcement, _transverse_layer(state)
 
 
 def _chosen_bars(
@@ -201,7 +211,7 @@ def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[Longitudinal
     case is checked with those bars. Returns the design of the case that governs (the first failing
     one, else the one with the largest moment) with its index and diagram.
     """
-    thickness, materials, given, layer = _setup(table, evaluation)
+    thickness, materials, given, layer = _setup(table, evaluation.statics)
     concrete = table.concrete
     assert concrete is not None
     diagrams = case_diagrams(table, evaluation)
@@ -237,18 +247,36 @@ def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[Longitudinal
 
 def passes_along(table: CaseTable, evaluation: Evaluation) -> bool:
     """Whether :func:`design_along` passes at the evaluated size, without its words or its governing
-    design: the same diagrams, bars and checks, stopping at the first case that fails.
+    design (:func:`verdict_along` on the evaluation's statics)."""
+    return verdict_along(table, evaluation.statics)
+
+
+def verdict_along(table: CaseTable, state: Statics) -> bool:
+    """Whether :func:`design_along` passes on the size of ``state`` (:func:`engine.stability.statics`):
+    :func:`failing_case_along` finds no failing case."""
+    return failing_case_along(table, state) is None
+
+
+def failing_case_along(table: CaseTable, state: Statics, probe: int | None = None) -> int | None:
+    """A strength case that fails the design along the length on the size of ``state``
+    (:func:`engine.stability.statics`), or None when :func:`design_along` passes there: the same
+    diagrams, bars and checks, without the words or the governing design.
 
     Every case passes when (for a plain footing) its plain section carries it or its bars do, and
     (otherwise) its bars do; the words :func:`design_along` adds to the first failure do not change
-    whether it passes.
+    whether it passes. Given bars that fail whatever the loads (As,min, fit, count) fail every case
+    without a diagram; bars on both faces are checked for every case at once
+    (:func:`engine.concrete.longitudinal.given_bars_pass`). Where each case's verdict is its own
+    (the bars given, not chosen from all the cases), case ``probe`` (say the one that failed on the
+    last size tried) is checked first, alone, and returned when it fails.
     """
-    thickness, materials, given, layer = _setup(table, evaluation)
+    thickness, materials, given, layer = _setup(table, state)
     concrete = table.concrete
     assert concrete is not None
-    if not table.cases:
+    k = len(table.cases)
+    if not k:
         raise ValueError("no strength case")
-    width = float(np.asarray(evaluation.statics.width))
+    width = float(np.asarray(state.width))
     plain = given is not None and given.plain
     # given bars that fail whatever the loads (As,min, fit, count) fail every case; then only a plain
     # section that carries every case passes, and a reinforced footing fails without its diagrams
@@ -258,34 +286,66 @@ def passes_along(table: CaseTable, evaluation: Evaluation) -> bool:
         for bars, cover, below in ((given.bottom, materials.cover, layer), (given.top, TOP_COVER, 0.0))
     )
     if hopeless and not plain:
-        return False
-    diagrams = case_diagrams(table, evaluation)
-    carries: list[bool] = [False] * len(diagrams)
-    if plain:
-        phi_mn, phi_vn = _plain_capacities(width, thickness, concrete.fc, concrete.lam)
-        carries = [_plain_carries(d, phi_mn, phi_vn) for d in diagrams]
-    if hopeless:
-        return all(carries)
+        return 0
+    phi_mn, phi_vn = _plain_capacities(width, thickness, concrete.fc, concrete.lam) if plain else (0.0, 0.0)
+    both = given is not None and given.bottom is not None and given.top is not None
+
+    def failing(beams: BeamArrays, cases: list[int], bottom: Any, top: Any) -> int | None:
+        """The first of ``cases`` (rows of ``beams``) that fails with these bars on both faces."""
+        rows = range(len(cases))
+        carries = [
+            plain and _plain_carries_values(beams.max_moment[i], beams.min_moment[i], beams.max_shear[i], phi_mn, phi_vn)
+            for i in rows
+        ]
+        if hopeless or all(carries):
+            return next((cases[i] for i in rows if not carries[i]), None)
+        faces = [
+            given_bars_pass(
+                beams, face, *(parse_counted(bars) if isinstance(bars, str) else bars),
+                thickness=thickness, materials=materials, cover=cover, layer_below=below,
+            )
+            for face, bars, cover, below in (("bottom", bottom, materials.cover, layer), ("top", top, TOP_COVER, 0.0))
+        ]  # fmt: skip
+        return next((cases[i] for i in rows if not (carries[i] or (faces[0][i] and faces[1][i]))), None)
+
+    if probe is not None and 0 <= probe < k and (hopeless or both) and given is not None:
+        if failing(_case_beams(table, state, [probe]), [probe], given.bottom, given.top) is not None:
+            return probe
+    beams = _case_beams(table, state)
+    everyone = list(range(k))
+    if hopeless or both:
+        assert given is not None
+        return failing(beams, everyone, given.bottom, given.top)
+    carries = [
+        plain and _plain_carries_values(beams.max_moment[i], beams.min_moment[i], beams.max_shear[i], phi_mn, phi_vn)
+        for i in everyone
+    ]
+    if all(carries):
+        return None
+    diagrams = beams.diagrams()
     bottom, top, _, _ = _chosen_bars(diagrams, thickness, materials, given, layer)
-    for diagram, plain in zip(diagrams, carries, strict=True):
-        if plain:
+    if bottom is not None and top is not None:
+        return failing(beams, everyone, bottom, top)
+    # a face without bars (none needed where they were chosen): case by case, as design_along
+    for i, (diagram, carried) in enumerate(zip(diagrams, carries, strict=True)):
+        if carried:
             continue
         design = design_longitudinal(
             diagram, thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer, words=False
         )
         if not design.passes:
-            return False
-    return True
+            return i
+    return None
 
 
-def _transverse_layer(evaluation: Evaluation) -> float:
+def _transverse_layer(state: Statics) -> float:
     """The diameter of the transverse bars under the bottom longitudinal bars (m): the bars given or
     chosen across the width; 0 for a plain footing (common practice: the longitudinal bars sit on the
     transverse layer, so their d is one transverse bar less)."""
     from ..checks._strength import strength_grid
     from .bars import bar
 
-    grid = strength_grid(evaluation.statics)
+    grid = strength_grid(state)
     if grid.plain:
         return 0.0
     size = int(np.asarray(grid.design.size))
@@ -302,8 +362,13 @@ def _plain_capacities(width: float, thickness: float, fc: float, lam: float) -> 
 
 
 def _plain_carries(diagram: BeamDiagram, phi_mn: float, phi_vn: float) -> bool:
-    moment = max(abs(diagram.max_moment), abs(diagram.min_moment))
-    return moment <= phi_mn * (1.0 + TOLERANCE) and diagram.max_shear <= phi_vn * (1.0 + TOLERANCE)
+    return _plain_carries_values(diagram.max_moment, diagram.min_moment, diagram.max_shear, phi_mn, phi_vn)
+
+
+def _plain_carries_values(max_moment: float, min_moment: float, max_shear: float, phi_mn: float, phi_vn: float) -> bool:
+    """|M| <= φMn and |V| <= φVn of the plain section (ACI 318-19 14.5.2.1, 14.5.5.1)."""
+    moment = max(abs(max_moment), abs(min_moment))
+    return moment <= phi_mn * (1.0 + TOLERANCE) and max_shear <= phi_vn * (1.0 + TOLERANCE)
 
 
 def _plain_along(

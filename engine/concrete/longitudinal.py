@@ -34,7 +34,7 @@ from functools import lru_cache
 import numpy as np
 
 from ..errors import InputError
-from ..soil_pressure import pressure_at, pressure_distribution
+from ..soil_pressure import PressureDistribution, pressure_at, pressure_distribution
 from .bars import INCH, Bar, counted_text, parse_counted, practical_bars
 from .transverse import (
     MIN_NET_TENSILE_STRAIN,
@@ -154,6 +154,36 @@ def rigid_soil_stations(
     kink = length - contact if eccentricity >= 0.0 else contact
     x = _with_points(x, np.array([min(max(kink, 0.0), length)]), NODE_GAP * length)
     return x, pressure_at(dist, eccentricity, length, x)
+
+
+def rigid_soil_stations_of(
+    vertical: np.ndarray, eccentricity: np.ndarray, width: float, length: float, count: int = 201
+) -> list[tuple[np.ndarray, np.ndarray]]:
+    """:func:`rigid_soil_stations` of several cases on one footing: the pressures of all of them in one
+    call of :func:`engine.soil_pressure.pressure_distribution` (numpy over cases), then each case's
+    stations with the end of its contact, as :func:`rigid_soil_stations` gives them.
+
+    Args:
+        vertical, eccentricity: N (N) and e (m) of each case. width: B (m). length: L_f (m).
+        count: evenly spaced stations (at least 2).
+    """
+    x = np.linspace(0.0, length, max(int(count), 2))
+    ns = np.asarray(vertical, dtype=float)
+    es = np.asarray(eccentricity, dtype=float)
+    dist = pressure_distribution(ns, es, width, length)
+    out = []
+    for i, e in enumerate(es.tolist()):
+        if not bool(dist.stable[i]):
+            out.append((x, np.zeros_like(x)))
+            continue
+        one = PressureDistribution(
+            q_max=dist.q_max[i], q_min=dist.q_min[i], contact_length=dist.contact_length[i], stable=dist.stable[i]
+        )
+        contact = float(one.contact_length)
+        kink = length - contact if e >= 0.0 else contact
+        nodes = _with_points(x, np.array([min(max(kink, 0.0), length)]), NODE_GAP * length)
+        out.append((nodes, pressure_at(one, e, length, nodes)))
+    return out
 
 
 def _with_points(stations: np.ndarray, points: np.ndarray, gap: float) -> np.ndarray:
@@ -340,14 +370,64 @@ def beam_diagram(
     )
 
 
-def beam_diagrams(
+def _check_one(
+    xs: np.ndarray, qs: np.ndarray, lines: Sequence[tuple[float, float, float]], points: Sequence[tuple[float, float]]
+) -> None:
+    """The input checks of :func:`beam_diagram` (and of its loads) on one load set of
+    :func:`beam_diagrams`, in the same order, with the same messages."""
+    for value, start, end in lines:  # the loads as case_diagram builds them, before beam_diagram
+        BeamLineLoad(value=value, start=start, end=end)
+    for value, at in points:
+        BeamPointLoad(value=value, at=at)
+    if xs.ndim != 1 or xs.size < 2 or not np.all(np.diff(xs) > 0.0) or not np.all(np.isfinite(xs)):
+        raise InputError("x", "stations must be at least two finite positions, increasing")
+    if qs.shape != xs.shape or not np.all(np.isfinite(qs)):
+        raise InputError("pressure", "expected one finite pressure at each station")
+    low, high = float(xs[0]), float(xs[-1])
+    slack = 1e-9 * (high - low)
+    for i, (_, start, end) in enumerate(lines):
+        if start < low - slack or end > high + slack:
+            raise InputError(f"line_loads[{i}]", "the line load runs past the footing")
+    for i, (_, at) in enumerate(points):
+        if not low - slack <= at <= high + slack:
+            raise InputError(f"point_loads[{i}]", "the point load is off the footing")
+
+
+def _fine(
+    stations: Sequence[np.ndarray],
+    pressures: Sequence[np.ndarray],
+    lines: np.ndarray,
+    used: np.ndarray,
+    points: np.ndarray,
+    pressed: np.ndarray,
+) -> bool:
+    """Every load set of :func:`beam_diagrams` passes :func:`_check_one` (checked all at once)."""
+    if any(xs.ndim != 1 or xs.size < 2 or qs.shape != xs.shape for xs, qs in zip(stations, pressures, strict=True)):
+        return False
+    flat = np.concatenate(stations)
+    steps = np.diff(flat)
+    ends = np.cumsum([xs.size for xs in stations])[:-1] - 1  # the steps from one set to the next
+    steps[ends] = 1.0
+    if not (np.all(np.isfinite(flat)) and np.all(steps > 0.0) and np.all(np.isfinite(np.concatenate(pressures)))):
+        return False
+    low = np.array([xs[0] for xs in stations])[:, None]
+    high = np.array([xs[-1] for xs in stations])[:, None]
+    slack = 1e-9 * (high - low)
+    with np.errstate(invalid="ignore"):
+        line_ok = np.isfinite(lines).all(axis=0) & (lines[2] > lines[1]) & (lines[1] >= low - slack) & (lines[2] <= high + slack)
+        point_ok = np.isfinite(points).all(axis=0) & (points[1] >= low - slack) & (points[1] <= high + slack)
+    return bool(np.all(line_ok | ~used) and np.all(point_ok | ~pressed))
+
+
+def beam_arrays(
     stations: Sequence[np.ndarray],
     pressures: Sequence[np.ndarray],
     width: float,
     line_loads: Sequence[Sequence[tuple[float, float, float]]],
     point_loads: Sequence[Sequence[tuple[float, float]]],
-) -> list[BeamDiagram]:
-    """:func:`beam_diagram` of several load sets on one footing at once (statics, derived here).
+) -> BeamArrays:
+    """:func:`beam_diagram` of several (at least one) load sets on one footing at once (statics,
+    derived here).
 
     The same equations as :func:`beam_diagram`, evaluated for every load set together (numpy over
     load sets x segments): each set keeps its own nodes (its stations and its loads' ends), and the
@@ -368,35 +448,27 @@ def beam_diagrams(
     if not (math.isfinite(width) and width > 0.0):
         raise InputError("width", "must be a finite number greater than zero")
     if k == 0:
-        return []
+        raise InputError("stations", "expected at least one load set")
+    slots = max((len(lines) for lines in line_loads), default=0)
+    table = np.zeros((3, k, slots))  # slot j holds each set's j-th line load: w, start, end
+    used = np.zeros((k, slots), dtype=bool)
+    for i, lines in enumerate(line_loads):
+        if lines:
+            table[:, i, : len(lines)] = np.asarray(lines, dtype=float).T
+            used[i, : len(lines)] = True
+    count = max((len(points) for points in point_loads), default=0)
+    forces = np.zeros((2, k, count))  # slot p holds each set's p-th point load: P, at
+    pushed = np.zeros((k, count), dtype=bool)
+    for i, points in enumerate(point_loads):
+        if points:
+            forces[:, i, : len(points)] = np.asarray(points, dtype=float).T
+            pushed[i, : len(points)] = True
+    if not _fine(stations, pressures, table, used, forces, pressed=pushed):
+        for xs, qs, lines, points in zip(stations, pressures, line_loads, point_loads, strict=True):
+            _check_one(xs, qs, lines, points)  # says which, in the order beam_diagram would
     node_lists = []
-    for xs, qs, lines, points in zip(stations, pressures, line_loads, point_loads, strict=True):
-        if xs.ndim != 1 or xs.size < 2 or not np.all(np.diff(xs) > 0.0) or not np.all(np.isfinite(xs)):
-            raise InputError("x", "stations must be at least two finite positions, increasing")
-        if qs.shape != xs.shape or not np.all(np.isfinite(qs)):
-            raise InputError("pressure", "expected one finite pressure at each station")
+    for xs, lines, points in zip(stations, line_loads, point_loads, strict=True):
         low, high = float(xs[0]), float(xs[-1])
-        slack = 1e-9 * (high - low)
-        line_array = np.asarray(lines, dtype=float).reshape(-1, 3)
-        point_array = np.asarray(points, dtype=float).reshape(-1, 2)
-        fine = (
-            np.all(np.isfinite(line_array))
-            and np.all(np.isfinite(point_array))
-            and np.all(line_array[:, 2] > line_array[:, 1])
-            and np.all(line_array[:, 1] >= low - slack)
-            and np.all(line_array[:, 2] <= high + slack)
-            and np.all(point_array[:, 1] >= low - slack)
-            and np.all(point_array[:, 1] <= high + slack)
-        )
-        if not fine:  # say which load, as BeamLineLoad, BeamPointLoad and beam_diagram would
-            for i, (value, start, end) in enumerate(lines):
-                BeamLineLoad(value=value, start=start, end=end)
-                if start < low - slack or end > high + slack:
-                    raise InputError(f"line_loads[{i}]", "the line load runs past the footing")
-            for i, (value, at) in enumerate(points):
-                BeamPointLoad(value=value, at=at)
-                if not low - slack <= at <= high + slack:
-                    raise InputError(f"point_loads[{i}]", "the point load is off the footing")
         extra = [min(max(v, low), high) for line in lines for v in (line[1], line[2])]
         extra += [min(max(p[1], low), high) for p in points]
         node_lists.append(_with_points_sorted(xs.tolist(), sorted(extra), NODE_GAP * (high - low)))
@@ -412,13 +484,7 @@ def beam_diagrams(
     h = np.diff(nodes, axis=1)
     real = h > 0.0
     safe = np.where(real, h, 1.0)
-    # line loads slot by slot (slot j holds each set's j-th load, so each set sums in its own order)
-    slots = max((len(lines) for lines in line_loads), default=0)
-    if slots:
-        table = np.zeros((3, k, slots))
-        for i, lines in enumerate(line_loads):
-            if lines:
-                table[:, i, : len(lines)] = np.asarray(lines, dtype=float).T
+    # line loads slot by slot (each set sums its own loads in its own order)
     w = np.zeros_like(h)
     for j in range(slots):
         intensity, begin, finish = table[0, :, j : j + 1], table[1, :, j : j + 1], table[2, :, j : j + 1]
@@ -428,15 +494,9 @@ def beam_diagrams(
     n1 = up[:, 1:] - w
     jumps = np.zeros_like(nodes)
     rows = np.arange(k)
-    count = max((len(points) for points in point_loads), default=0)
-    if count:
-        forces = np.zeros((2, k, count))
-        for i, points in enumerate(point_loads):
-            if points:
-                forces[:, i, : len(points)] = np.asarray(points, dtype=float).T
-        for p in range(count):
-            at = np.argmin(np.abs(nodes - forces[1, :, p : p + 1]), axis=1)
-            jumps[rows, at] += forces[0, :, p]
+    for p in range(count):
+        at = np.argmin(np.abs(nodes - forces[1, :, p : p + 1]), axis=1)
+        jumps[rows, at] += forces[0, :, p]
     zero = np.zeros((k, 1))
     right = np.concatenate([zero, np.cumsum(0.5 * h * (n0 + n1), axis=1)], axis=1) - np.cumsum(jumps, axis=1)
     left = right + jumps
@@ -467,28 +527,88 @@ def beam_diagrams(
     top = np.argmax(np.where(valid, all_m, -np.inf), axis=1)
     bottom = np.argmin(np.where(valid, all_m, np.inf), axis=1)
     largest_shear = np.max(np.maximum(np.abs(left), np.abs(right)), axis=1)  # padding repeats the far end
-    out = []
-    for i, size in enumerate(sizes):
-        t, u = int(top[i]), int(bottom[i])
-        out.append(
-            BeamDiagram(
-                x=nodes[i, :size],
-                shear_left=left[i, :size],
-                shear_right=right[i, :size],
-                moment=moment[i, :size],
-                width=float(width),
-                net_start=n0[i, : size - 1],
-                net_end=n1[i, : size - 1],
-                closure_shear=float(right[i, size - 1]),
-                closure_moment=float(moment[i, size - 1]),
-                max_moment=float(max(all_m[i, t], 0.0)),
-                max_moment_at=float(all_x[i, t]),
-                min_moment=float(min(all_m[i, u], 0.0)),
-                min_moment_at=float(all_x[i, u]),
-                max_shear=float(largest_shear[i]),
-            )
+    rows_t, rows_u = all_m[rows, top].tolist(), all_m[rows, bottom].tolist()
+    return BeamArrays(
+        nodes=nodes,
+        shear_left=left,
+        shear_right=right,
+        moment=moment,
+        net_start=n0,
+        net_end=n1,
+        sizes=tuple(sizes),
+        width=float(width),
+        max_moment=tuple(float(max(v, 0.0)) for v in rows_t),
+        max_moment_at=tuple(all_x[rows, top].tolist()),
+        min_moment=tuple(float(min(v, 0.0)) for v in rows_u),
+        min_moment_at=tuple(all_x[rows, bottom].tolist()),
+        max_shear=tuple(largest_shear.tolist()),
+    )
+
+
+@dataclass(frozen=True, slots=True, eq=False)
+class BeamArrays:
+    """The diagrams of :func:`beam_arrays`: one row per load set, padded at the far end.
+
+    Attributes:
+        nodes, shear_left, shear_right, moment: (sets, nodes) as in :class:`BeamDiagram`; row i is
+            real up to ``sizes[i]``, then repeats its far end.
+        net_start, net_end: (sets, nodes - 1), n at both ends of each segment.
+        sizes: the number of nodes of each set. width: B (m).
+        max_moment, max_moment_at, min_moment, min_moment_at, max_shear: each set's extremes.
+    """
+
+    nodes: np.ndarray
+    shear_left: np.ndarray
+    shear_right: np.ndarray
+    moment: np.ndarray
+    net_start: np.ndarray
+    net_end: np.ndarray
+    sizes: tuple[int, ...]
+    width: float
+    max_moment: tuple[float, ...]
+    max_moment_at: tuple[float, ...]
+    min_moment: tuple[float, ...]
+    min_moment_at: tuple[float, ...]
+    max_shear: tuple[float, ...]
+
+    def diagram(self, i: int) -> BeamDiagram:
+        """The diagram of set ``i``."""
+        size = self.sizes[i]
+        return BeamDiagram(
+            x=self.nodes[i, :size],
+            shear_left=self.shear_left[i, :size],
+            shear_right=self.shear_right[i, :size],
+            moment=self.moment[i, :size],
+            width=self.width,
+            net_start=self.net_start[i, : size - 1],
+            net_end=self.net_end[i, : size - 1],
+            closure_shear=float(self.shear_right[i, size - 1]),
+            closure_moment=float(self.moment[i, size - 1]),
+            max_moment=self.max_moment[i],
+            max_moment_at=self.max_moment_at[i],
+            min_moment=self.min_moment[i],
+            min_moment_at=self.min_moment_at[i],
+            max_shear=self.max_shear[i],
         )
-    return out
+
+    def diagrams(self) -> list[BeamDiagram]:
+        return [self.diagram(i) for i in range(len(self.sizes))]
+
+
+def beam_diagrams(
+    stations: Sequence[np.ndarray],
+    pressures: Sequence[np.ndarray],
+    width: float,
+    line_loads: Sequence[Sequence[tuple[float, float, float]]],
+    point_loads: Sequence[Sequence[tuple[float, float]]],
+) -> list[BeamDiagram]:
+    """:func:`beam_diagram` of several load sets on one footing at once: :func:`beam_arrays`, one
+    :class:`BeamDiagram` per set (the arguments are those of :func:`beam_arrays`)."""
+    if len(stations) == 0:
+        if not (math.isfinite(width) and width > 0.0):
+            raise InputError("width", "must be a finite number greater than zero")
+        return []
+    return beam_arrays(stations, pressures, width, line_loads, point_loads).diagrams()
 
 
 @dataclass(frozen=True, slots=True)
@@ -646,6 +766,67 @@ def bars_fail_anywhere(
     )
     minimum = float(minimum_steel(width, thickness))
     return min(provided / minimum, max_count / count, count / MIN_BARS) < 1.0 - TOLERANCE
+
+
+def given_bars_pass(
+    beams: BeamArrays,
+    face: str,
+    count: int,
+    the_bar: Bar,
+    *,
+    thickness: float,
+    materials: Materials,
+    cover: float,
+    layer_below: float = 0.0,
+    phi_shear: float = PHI_SHEAR,
+    aggregate: float = AGGREGATE,
+) -> list[bool]:
+    """Whether ``count`` bars on ``face`` pass, for every load set of ``beams`` at once: the verdict
+    of :func:`design_longitudinal` on that face with these bars given, case by case (the same
+    ratios, ACI 318-19 22.2, 22.5.5.1, 7.6.1.1, 25.2.1 and two bars, on the same numbers; numpy over
+    cases x segments in place of :func:`_segments` and :func:`_face` per diagram)."""
+    width = beams.width
+    k = len(beams.sizes)
+    # _segments on every row: the moment noise, the hogging segments and the largest |V| on each
+    noise = np.array([MOMENT_NOISE * max(abs(a), abs(b)) for a, b in zip(beams.max_moment, beams.min_moment, strict=True)])
+    m0, m1 = beams.moment[:, :-1], beams.moment[:, 1:]
+    governing = np.where(np.abs(m1) > np.abs(m0), m1, m0)
+    hogging = governing < -noise[:, None]
+    v_start, v_end = beams.shear_right[:, :-1], beams.shear_left[:, 1:]
+    v_seg = np.maximum(np.abs(v_start), np.abs(v_end))
+    n0, n1 = beams.net_start, beams.net_end
+    h = np.diff(beams.nodes, axis=1)
+    crosses = n0 * n1 < 0.0
+    with np.errstate(divide="ignore", invalid="ignore"):
+        xi = np.where(crosses, n0 / (n0 - n1) * h, 0.0)
+    v_peak = np.abs(v_start + 0.5 * n0 * xi)
+    inner = crosses & (v_peak > v_seg)
+    v_seg = np.where(inner, v_peak, v_seg)
+    real = np.arange(h.shape[1])[None, :] < (np.asarray(beams.sizes) - 1)[:, None]
+    in_tension = (~hogging if face == "bottom" else hogging) & real
+    v_face = np.where(in_tension, v_seg, 0.0)
+    # _face's evaluate with the bars given, every row
+    d, provided, capacity, strain, phi_vc, max_count = _section(
+        count, the_bar, width, thickness, cover, layer_below, materials, phi_shear, aggregate
+    )
+    moments = list(beams.max_moment) if face == "bottom" else [-m for m in beams.min_moment]
+    required = np.asarray(steel_required(np.array(moments), width, d, materials.fc, materials.fy), dtype=float).tolist()
+    with np.errstate(divide="ignore", invalid="ignore"):
+        shear_ratios = np.where(v_face > 0.0, phi_vc / v_face, np.inf)
+    least_shear = np.min(shear_ratios, axis=1).tolist() if shear_ratios.shape[1] else [math.inf] * k
+    minimum = float(minimum_steel(width, thickness))
+    out = []
+    for moment, req, shear in zip(moments, required, least_shear, strict=True):
+        ratio = min(
+            provided / max(req, minimum) if math.isfinite(req) else 0.0,
+            capacity / moment if moment > 0.0 else math.inf,
+            strain / MIN_NET_TENSILE_STRAIN if moment > 0.0 else math.inf,
+            float(shear),
+            max_count / count,
+            count / MIN_BARS,
+        )
+        out.append(ratio >= 1.0 - TOLERANCE)
+    return out
 
 
 def _face(
@@ -839,6 +1020,7 @@ def design_longitudinal(
 __all__ = [
     "CANNOT_SPREAD",
     "CHORD_OFFSET",
+    "BeamArrays",
     "BeamDiagram",
     "BeamLineLoad",
     "BeamPointLoad",
@@ -846,9 +1028,12 @@ __all__ = [
     "LongitudinalDesign",
     "bars_fail_anywhere",
     "bars_that_fit",
+    "beam_arrays",
     "beam_diagram",
     "beam_diagrams",
     "chord_couple",
     "design_longitudinal",
+    "given_bars_pass",
     "rigid_soil_stations",
+    "rigid_soil_stations_of",
 ]

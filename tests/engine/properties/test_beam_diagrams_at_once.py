@@ -17,7 +17,7 @@ from dataclasses import replace
 import numpy as np
 from hypothesis import assume, given, settings
 from hypothesis import strategies as st
-from kernline.engine.concrete.along import case_diagram, case_diagrams, design_along, passes_along
+from kernline.engine.concrete.along import case_diagram, case_diagrams, design_along, failing_case_along, passes_along
 from kernline.engine.concrete.longitudinal import (
     BeamLineLoad,
     BeamPointLoad,
@@ -112,7 +112,8 @@ RAW, PROJECT = _demo_walls()
 )
 def test_case_diagrams_equal_case_diagram_on_random_walls(index, construction, width_in, thickness_in, scale, bars):
     """case_diagrams gives every strength case's case_diagram, and passes_along the verdict of
-    design_along, on the demo's walls (inputs only) with other constructions, sizes, loads and bars (D)."""
+    design_along (whichever case failing_case_along tries first), on the demo's walls (inputs only)
+    with other constructions, sizes, loads and bars (D)."""
     from kernline.engine.concrete.bars import bar
     from kernline.engine.model import Reinforcement, WallConstruction
 
@@ -138,4 +139,44 @@ def test_case_diagrams_equal_case_diagram_on_random_walls(index, construction, w
     assert len(together) == len(table.cases)
     for i, diagram in enumerate(together):
         assert_same(case_diagram(table, evaluation, i), diagram)
-    assert passes_along(table, evaluation) == design_along(table, evaluation)[0].passes
+    passes = design_along(table, evaluation)[0].passes
+    assert passes_along(table, evaluation) == passes
+    for probe in (0, len(table.cases) // 2, len(table.cases) - 1):  # trying one case first changes nothing
+        assert (failing_case_along(table, evaluation.statics, probe) is None) == passes
+
+
+@FAST
+@given(
+    st.integers(0, len(PROJECT.walls) - 1),
+    st.sampled_from(["concrete", "light-frame"]),
+    st.floats(12.0, 120.0),
+    st.floats(12.0, 48.0),
+    st.floats(0.2, 4.0),
+    st.sampled_from([(2, 4), (2, 5), (3, 5), (4, 6), (6, 8), (12, 8)]),
+)
+def test_given_bars_pass_case_by_case_as_design_longitudinal(index, construction, width_in, thickness_in, scale, bars):
+    """given_bars_pass says, for every case at once, what design_longitudinal says of each face with
+    the same bars given (D: the same ratios on the same numbers)."""
+    from kernline.engine.concrete.along import _case_beams, _setup
+    from kernline.engine.concrete.bars import bar
+    from kernline.engine.concrete.longitudinal import TOP_COVER, design_longitudinal, given_bars_pass
+    from kernline.engine.model import WallConstruction
+
+    wall = PROJECT.walls[index]
+    loads = tuple(replace(load, value=load.value * scale) for load in wall.loads)
+    footing = replace(wall.footing, width=max(width_in * INCH, wall.supported_thickness), thickness=thickness_in * INCH)
+    wall = replace(wall, construction=WallConstruction(construction), loads=loads, footing=footing)
+    result = check_wall(PROJECT, wall)
+    table, state = result.strength_table, result.strength_evaluation.statics
+    thickness, materials, _, layer = _setup(table, state)
+    beams = _case_beams(table, state)
+    given_bars = (bars[0], bar(bars[1]))
+    low = given_bars_pass(
+        beams, "bottom", *given_bars, thickness=thickness, materials=materials, cover=materials.cover, layer_below=layer
+    )
+    high = given_bars_pass(beams, "top", *given_bars, thickness=thickness, materials=materials, cover=TOP_COVER)
+    for i, diagram in enumerate(beams.diagrams()):
+        design = design_longitudinal(
+            diagram, thickness=thickness, materials=materials, bottom=given_bars, top=given_bars, layer_below=layer, words=False
+        )
+        assert (low[i], high[i]) == (design.bottom.passes, design.top.passes)
