@@ -15,9 +15,10 @@ from kernline.engine.presumptive import TABLE_1806_2
 from kernline.engine.project_file import OPTION_KEYS
 from kernline.engine.registry import Check, CodeBasis, Family, checks, code_by_id, codes
 from kernline.engine.units import Kind
-from PySide6.QtCore import QCoreApplication, QEvent, Qt
-from PySide6.QtGui import QBrush, QColor, QIcon
+from PySide6.QtCore import QCoreApplication, QEvent, QModelIndex, QObject, Qt
+from PySide6.QtGui import QBrush, QColor, QFocusEvent, QIcon, QKeyEvent
 from PySide6.QtWidgets import (
+    QAbstractItemDelegate,
     QAbstractItemView,
     QAbstractScrollArea,
     QCheckBox,
@@ -363,7 +364,95 @@ _ASSUMED_ROLE = Qt.ItemDataRole.UserRole + 8
 CASES = tuple(c.value for c in LoadCase)
 
 
-class _ChoiceDelegate(QStyledItemDelegate):
+def _leaves_backward(event: QKeyEvent) -> bool:
+    return event.key() == Qt.Key.Key_Backtab or bool(event.modifiers() & Qt.KeyboardModifier.ShiftModifier)
+
+
+class _CellDelegate(QStyledItemDelegate):
+    """A cell editor that answers Ctrl+Tab (Ctrl+Shift+Tab) as Qt's widgets that keep Tab do: the entry is
+    committed and the keyboard leaves the table for the next (previous) input."""
+
+    def eventFilter(self, editor: QObject, event: QEvent) -> bool:  # noqa: N802 - Qt's name
+        if (
+            event.type() == QEvent.Type.KeyPress
+            and isinstance(event, QKeyEvent)
+            and event.key() in (Qt.Key.Key_Tab, Qt.Key.Key_Backtab)
+            and event.modifiers() & Qt.KeyboardModifier.ControlModifier
+            and isinstance(editor, QWidget)
+        ):
+            table = self.parent()
+            self.commitData.emit(editor)
+            self.closeEditor.emit(editor, QAbstractItemDelegate.EndEditHint.NoHint)
+            if isinstance(table, CellTable):
+                table.leave(forward=not _leaves_backward(event))
+            return True
+        return super().eventFilter(editor, event)
+
+
+class CellTable(QTableWidget):
+    """An editable table that Tab walks cell by cell, row by row, and leaves after its last cell (Shift+Tab:
+    before its first) for the next (previous) input of the form; Ctrl+Tab and Ctrl+Shift+Tab leave it from
+    any cell, as Qt's widgets that keep Tab do. Tab entering the table starts at its first cell, Shift+Tab
+    at its last. The arrow keys move between cells as in any table."""
+
+    def __init__(self, rows: int, columns: int, parent: QWidget | None = None) -> None:
+        super().__init__(rows, columns, parent)
+        self.setTabKeyNavigation(True)
+        self.setItemDelegate(_CellDelegate(self))
+
+    def _step(self, forward: bool) -> Any:
+        """The cell Tab (Shift+Tab) goes to from the current one; an invalid index after the last (before the
+        first) cell, where Qt's own table would wrap round."""
+        current = self.currentIndex()
+        action = QAbstractItemView.CursorAction.MoveNext if forward else QAbstractItemView.CursorAction.MovePrevious
+        target = self.moveCursor(action, Qt.KeyboardModifier.NoModifier)
+        if not target.isValid() or not current.isValid():
+            return target
+        here, there = (current.row(), current.column()), (target.row(), target.column())
+        if (there <= here) if forward else (there >= here):
+            return QModelIndex()  # wrapped round: out of the table instead
+        return target
+
+    def leave(self, forward: bool) -> None:
+        """Give the focus to the input after (before) the table."""
+        QAbstractScrollArea.focusNextPrevChild(self, forward)
+
+    def focusNextPrevChild(self, next: bool) -> bool:  # noqa: N802, A002 - Qt's names
+        if self.hasFocus() and self.tabKeyNavigation() and self.rowCount() and self._step(next).isValid():
+            return super().focusNextPrevChild(next)  # the next cell
+        return QAbstractScrollArea.focusNextPrevChild(self, next)  # out of the table
+
+    def keyPressEvent(self, event: QKeyEvent) -> None:  # noqa: N802 - Qt's name
+        if event.key() in (Qt.Key.Key_Tab, Qt.Key.Key_Backtab) and event.modifiers() & Qt.KeyboardModifier.ControlModifier:
+            self.leave(forward=not _leaves_backward(event))
+            event.accept()
+            return
+        super().keyPressEvent(event)
+
+    def closeEditor(self, editor: QWidget, hint: QAbstractItemDelegate.EndEditHint) -> None:  # noqa: N802 - Qt's name
+        hints = QAbstractItemDelegate.EndEditHint
+        if hint in (hints.EditNextItem, hints.EditPreviousItem):
+            forward = hint == hints.EditNextItem
+            if not self._step(forward).isValid():  # Tab from the last cell being edited: out of the table
+                super().closeEditor(editor, hints.NoHint)
+                self.leave(forward)
+                return
+        super().closeEditor(editor, hint)
+
+    def focusInEvent(self, event: QFocusEvent) -> None:  # noqa: N802 - Qt's name
+        rows, columns = self.rowCount(), self.columnCount()
+        if (
+            self.tabKeyNavigation()
+            and rows
+            and columns
+            and event.reason() in (Qt.FocusReason.TabFocusReason, Qt.FocusReason.BacktabFocusReason)
+        ):
+            last = event.reason() == Qt.FocusReason.BacktabFocusReason
+            self.setCurrentCell(rows - 1 if last else 0, columns - 1 if last else 0)
+        super().focusInEvent(event)
+
+
+class _ChoiceDelegate(_CellDelegate):
     """A combo box editor with fixed choices for the Type and Case columns."""
 
     def __init__(self, choices: Sequence[str], parent: QWidget | None = None) -> None:
@@ -391,7 +480,7 @@ class LoadsEditor(QWidget):
     def __init__(self, document: ProjectDocument, parent: QWidget | None = None) -> None:
         super().__init__(parent)
         self.document = document
-        self.table = QTableWidget(0, len(LOAD_COLUMNS), self)
+        self.table = CellTable(0, len(LOAD_COLUMNS), self)
         self.table.setObjectName("loadsTable")
         self.table.setHorizontalHeaderLabels(LOAD_COLUMNS)
         for col, tip in enumerate(LOAD_TIPS):
@@ -408,7 +497,6 @@ class LoadsEditor(QWidget):
             | QAbstractItemView.EditTrigger.AnyKeyPressed
             | QAbstractItemView.EditTrigger.SelectedClicked
         )
-        self.table.setTabKeyNavigation(False)  # Tab goes on to the next input; the arrow keys move between cells
         self.table.setItemDelegateForColumn(0, _ChoiceDelegate(KINDS, self.table))
         self.table.setItemDelegateForColumn(1, _ChoiceDelegate(CASES, self.table))
         self.table.setMinimumHeight(150)
@@ -694,9 +782,8 @@ class CombinationsEditor(QWidget):
             "the method's; untick to return to the method's list."
         )
         self.checks: tuple[Check, ...] = ()
-        self.table = QTableWidget(0, 0, self)
+        self.table = CellTable(0, 0, self)
         self.table.setObjectName("combinationsTable")
-        self.table.setTabKeyNavigation(False)  # Tab goes on to the next input; the arrow keys move between cells
         self._set_columns()
         self.table.verticalHeader().setDefaultSectionSize(20)
         self.table.verticalHeader().hide()
@@ -778,6 +865,7 @@ class CombinationsEditor(QWidget):
             self._refreshing = False
         self.add_button.setEnabled(custom)
         self.remove_button.setEnabled(custom)
+        self.table.setTabKeyNavigation(custom)  # the method's list is read only: Tab passes it in one step
 
     def _preset_as_raw(self) -> list[dict[str, Any]]:
         out = []

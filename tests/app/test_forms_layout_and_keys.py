@@ -55,7 +55,8 @@ def _tab_through(qtbot, window, start: QWidget, stop: QWidget, limit: int = 400)
         now = QApplication.focusWidget()
         if now is stop:
             return seen
-        seen.append(now)
+        if now is not seen[-1]:  # an editable table keeps the focus while Tab walks its cells
+            seen.append(now)
     raise AssertionError("Tab never reached the end of the forms")
 
 
