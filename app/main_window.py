@@ -971,10 +971,7 @@ class MainWindow(QMainWindow):
         self.statusBar().showMessage(text, 15000)
 
     def _wall_passes(self, wall_id: str) -> bool:
-        result = self.document.results.get(wall_id)
-        if result is None:
-            return False
-        return bool(getattr(result, "passes_all", result.passes))  # the design along the length too, where there is one
+        return self.design_map.wall_passes(wall_id)
 
     def size_change_text(self, wall_id: str, values: Mapping[str, float]) -> str:
         """ "C3: B 1'-4" × t_f 1'-0" → B 2'-0" × t_f 1'-2"" (and L_f when the extensions change)."""
@@ -1009,13 +1006,11 @@ class MainWindow(QMainWindow):
         if not sizes:
             self.statusBar().showMessage("Nothing to adopt: every sized wall already has its chosen size.", 8000)
             return "nothing"
-        failing = {wid: v for wid, v in sizes.items() if not self._wall_passes(wid)}
+        failing = self.design_map.failing_sizes()
         if failing:
             changes = [self.size_change_text(wid, v) for wid, v in failing.items()]
             count = len(failing)
-            refused = doc.push(
-                commands.adopt_sizes(doc, failing, f"Adopt the chosen sizes of {count} failing wall{'s' if count > 1 else ''}")
-            )
+            refused = self.design_map.adopt_all()
             if refused:
                 self.statusBar().showMessage(f"Not adopted: {refused}", 12000)
                 return "nothing"
@@ -1043,6 +1038,7 @@ class MainWindow(QMainWindow):
             self.statusBar().showMessage("No footing changed.", 5000)
             return "declined"
         refused = doc.push(commands.adopt_sizes(doc, sizes, f"Bring {walls} that pass to their smallest passing sizes"))
+        # (the design map's adopt_all(include_passing=True) does the same; the undo text here says they passed)
         if refused:
             self.statusBar().showMessage(f"Not adopted: {refused}", 12000)
             return "nothing"

@@ -186,7 +186,9 @@ class DesignMapView(QWidget):
         self.adopt_button = QPushButton("Adopt ringed size")
         self.adopt_button.setToolTip("Make the engine's chosen size this wall's footing (undoable)")
         self.adopt_all_button = QPushButton("Adopt all chosen sizes")
-        self.adopt_all_button.setToolTip("Make each sized wall's chosen size its footing, in one undoable step")
+        self.adopt_all_button.setToolTip(
+            "Make each failing wall's chosen size its footing, in one undoable step; walls that pass keep theirs"
+        )
         buttons = QGridLayout()
         buttons.setSpacing(3)
         for k, b in enumerate((self.size_button, self.size_all_button, self.adopt_button, self.adopt_all_button)):
@@ -524,12 +526,32 @@ class DesignMapView(QWidget):
                 sizes[wall.id] = values
         return sizes
 
-    def adopt_all(self) -> str | None:
-        sizes = self.adoptable_sizes()
+    def wall_passes(self, wall_id: str) -> bool:
+        """Whether the wall passes every check as it stands (the design along its length too, where there is
+        one); a wall without results (not checkable) counts as not passing."""
+        result = self.document.results.get(wall_id)
+        if result is None:
+            return False
+        return bool(getattr(result, "passes_all", result.passes))
+
+    def failing_sizes(self) -> dict[str, dict[str, float]]:
+        """The :meth:`adoptable_sizes` of the walls that fail as they stand."""
+        return {wid: values for wid, values in self.adoptable_sizes().items() if not self.wall_passes(wid)}
+
+    def adopt_all(self, include_passing: bool = False) -> str | None:
+        """Make the chosen sizes the walls' footings, in one undoable step; returns a refusal, if any.
+
+        Only walls that fail as they stand change: a wall that passes keeps its footing (its chosen size
+        may be smaller, with less margin) unless ``include_passing`` asks for every wall, as the window
+        does after listing the changes and asking.
+        """
+        sizes = self.adoptable_sizes() if include_passing else self.failing_sizes()
         if not sizes:
             return "nothing to adopt"
         doc = self.document
-        return doc.push(commands.adopt_sizes(doc, sizes))
+        count = len(sizes)
+        walls = f"{count} {'failing ' if not include_passing else ''}wall{'s' if count > 1 else ''}"
+        return doc.push(commands.adopt_sizes(doc, sizes, f"Adopt the chosen sizes of {walls}"))
 
     def _view_point(self, scene_pos) -> tuple[float, float] | None:
         vb = self.plot.getPlotItem().getViewBox()

@@ -141,3 +141,27 @@ def test_words_about_an_adoption_do_not_survive_new_or_open(qtbot, window, demo_
     assert window.open_path(demo_file)
     assert "Adopted" not in window.statusBar().currentMessage()
     assert view.readout.text() == hint
+
+
+def test_the_design_maps_adopt_all_called_directly_leaves_passing_walls_alone(qtbot, window):
+    """The view's own adopt_all (not only the window's button) changes only failing walls; asked to include
+    the passing ones, it changes every wall whose chosen size differs, in one undo step."""
+    doc = window.document
+    _size_all(qtbot, window)
+    before = _footings(doc.raw)
+    _project, checked = _engine(doc.raw)
+    failing = {wid for wid, (_w, r) in checked.items() if not _passes(r)}
+    differing = set(window.design_map.adoptable_sizes())
+    assert failing == {"C3"} and differing - failing  # a passing wall the engine would shrink: the case at stake
+    count = doc.undo_stack.count()
+    assert window.design_map.adopt_all() is None
+    assert doc.undo_stack.count() == count + 1
+    after = _footings(doc.raw)
+    assert {wid for wid in before if before[wid] != after[wid]} == failing
+    assert window.design_map.adopt_all() == "nothing to adopt"  # no failing wall left to change
+    assert window.design_map.adopt_all(include_passing=True) is None
+    assert doc.undo_stack.count() == count + 2
+    changed = _footings(doc.raw)
+    assert {wid for wid in before if before[wid] != changed[wid]} == differing
+    doc.undo_stack.undo()
+    assert _footings(doc.raw) == after
