@@ -61,7 +61,7 @@ from .views.drawings import DrawingsPanel
 from .views.fields import guard_wheel
 from .views.forms import ProjectForm, WallForm
 from .views.help import PANE_TOPICS, HelpWindow, anchor_for
-from .views.notes import AssumptionsView, WarningsView
+from .views.notes import AssumptionsView, FittedLabel, WarningsView
 from .views.recovery_dialog import RecoveryDialog
 from .views.schedule import ScheduleView
 from .views.verdict import VerdictView
@@ -262,7 +262,11 @@ class MainWindow(QMainWindow):
         self.warnings_view = WarningsView(doc)
         # the warnings take a slot of their own with its height reserved, so that warnings coming
         # and going never move the tabs; when there are none the slot says so
-        self.no_warnings = QLabel("Look again: nothing — no input looks like a common mistake.")
+        self.no_warnings = FittedLabel()
+        self.no_warnings.set_wordings(
+            "Look again: nothing — no input looks like a common mistake.", "Look again: nothing to look at", "Look again: none"
+        )
+        self.no_warnings.setToolTip("No input looks like a common mistake (inputs legal but usually wrong are listed here).")
         self.no_warnings.setObjectName("hint")
         self.no_warnings.setContentsMargins(6, 0, 6, 0)
         self.warnings_slot = QWidget()

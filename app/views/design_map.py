@@ -261,7 +261,7 @@ class DesignMapView(QWidget):
         self.size_button.clicked.connect(self.size_requested)
         self.size_all_button.clicked.connect(self.size_all_requested)
         self.adopt_button.clicked.connect(self.adopt_chosen)
-        self.adopt_all_button.clicked.connect(self.adopt_all)
+        self.adopt_all_button.clicked.connect(lambda: self.adopt_all())  # clicked(bool) must not reach include_passing
         self.plot.getPlotItem().getViewBox().sigResized.connect(self._on_resized)
         self.plot.scene().sigMouseMoved.connect(self._on_mouse_moved)
         self.plot.scene().sigMouseClicked.connect(self._on_mouse_clicked)

@@ -8,7 +8,7 @@ assumptions are the parser's :attr:`engine.model.Project.assumptions`.
 
 from __future__ import annotations
 
-from PySide6.QtCore import Qt, Signal
+from PySide6.QtCore import QSize, Qt, Signal
 from PySide6.QtWidgets import (
     QHeaderView,
     QLabel,
@@ -27,6 +27,42 @@ from ..style import assumed_icon
 FIELD_ROLE = Qt.ItemDataRole.UserRole + 11
 
 
+class FittedLabel(QLabel):
+    """A one-line label that shows the longest of its wordings that fits its width (the last, shortest one
+    when none does); the whole thought belongs in its tooltip. Its height never changes, so a title that
+    shortens in a narrow column moves nothing below it."""
+
+    def __init__(self, parent: QWidget | None = None) -> None:
+        super().__init__(parent)
+        self.wordings: tuple[str, ...] = ("",)
+        self.setSizePolicy(QSizePolicy.Policy.Ignored, QSizePolicy.Policy.Fixed)
+        self.setWordWrap(False)
+
+    def set_wordings(self, *wordings: str) -> None:
+        """Longest first; the first is the whole thought, the last short enough for the narrowest column."""
+        self.wordings = wordings or ("",)
+        self._fit()
+
+    def text_fits(self) -> bool:
+        """Whether the text shown fits the label's width (what the tests read)."""
+        return self.fontMetrics().horizontalAdvance(self.text()) <= self.contentsRect().width()
+
+    def _fit(self) -> None:
+        metrics = self.fontMetrics()
+        room = self.contentsRect().width()
+        shown = next((w for w in self.wordings if metrics.horizontalAdvance(w) <= room), self.wordings[-1])
+        if shown != self.text():
+            self.setText(shown)
+
+    def resizeEvent(self, event) -> None:  # noqa: N802 - Qt's name
+        super().resizeEvent(event)
+        self._fit()
+
+    def minimumSizeHint(self) -> QSize:  # noqa: N802 - Qt's name
+        hint = super().minimumSizeHint()
+        return QSize(self.fontMetrics().horizontalAdvance(self.wordings[-1]), hint.height())
+
+
 class WarningsView(QWidget):
     """The project's input warnings, one line each (the whole sentence in the tooltip); hidden when there are none."""
 
@@ -37,11 +73,8 @@ class WarningsView(QWidget):
     def __init__(self, document: ProjectDocument, parent: QWidget | None = None) -> None:
         super().__init__(parent)
         self.document = document
-        self.title = QLabel(self)
+        self.title = FittedLabel(self)
         self.title.setObjectName("warningsTitle")
-        self.title.setToolTip(
-            "Inputs that are legal but usually a mistake. A warning changes no result; click one to go to its field."
-        )
         self.list = QListWidget(self)
         self.list.setObjectName("warningsList")
         self.list.setWordWrap(False)
@@ -79,7 +112,16 @@ class WarningsView(QWidget):
             item.setToolTip(f"{text}\n\nClick to go to the field.")
             self.list.addItem(item)
         count = len(shown)
-        self.title.setText(f"Look again ({count}) — legal inputs that are often a mistake; click one to go to its field")
+        self.title.set_wordings(
+            f"Look again ({count}) — legal inputs that are often a mistake; click one to go to its field",
+            f"Look again ({count}) — inputs often a mistake; click one",
+            f"Look again ({count}) — click one to go to its field",
+            f"Look again ({count})",
+        )
+        self.title.setToolTip(
+            f"Look again ({count}): inputs that are legal but usually a mistake. A warning changes no result; "
+            "click one to go to its field."
+        )
         rows = min(count, self.VISIBLE_ROWS)
         row_height = self.list.sizeHintForRow(0) if count else 0
         self.list.setFixedHeight(rows * row_height + 2 * self.list.frameWidth() + 2)
