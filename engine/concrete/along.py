@@ -345,6 +345,9 @@ def _transverse_layer(state: Statics) -> float:
     from ..checks._strength import strength_grid
     from .bars import bar
 
+    given = state.table.wall.footing.reinforcement
+    if given is not None and given.plain:  # what strength_grid calls plain, without designing it
+        return 0.0
     grid = strength_grid(state)
     if grid.plain:
         return 0.0

@@ -467,11 +467,15 @@ def beam_arrays(
         for xs, qs, lines, points in zip(stations, pressures, line_loads, point_loads, strict=True):
             _check_one(xs, qs, lines, points)  # says which, in the order beam_diagram would
     node_lists = []
-    for xs, lines, points in zip(stations, line_loads, point_loads, strict=True):
+    known: dict[tuple[bytes, bytes], list[float]] = {}  # sets with the same stations and load ends
+    for i, (xs, lines, points) in enumerate(zip(stations, line_loads, point_loads, strict=True)):
         low, high = float(xs[0]), float(xs[-1])
-        extra = [min(max(v, low), high) for line in lines for v in (line[1], line[2])]
-        extra += [min(max(p[1], low), high) for p in points]
-        node_lists.append(_with_points_sorted(xs.tolist(), sorted(extra), NODE_GAP * (high - low)))
+        ends = np.concatenate([table[1:, i, : len(lines)].ravel(), forces[1, i, : len(points)]])
+        extra = np.sort(np.clip(ends, low, high))
+        key = (xs.tobytes(), extra.tobytes())
+        if key not in known:
+            known[key] = _with_points_sorted(xs.tolist(), extra.tolist(), NODE_GAP * (high - low))
+        node_lists.append(known[key])
     sizes = [len(n) for n in node_lists]
     m = max(sizes)
     nodes = np.empty((k, m))
@@ -744,6 +748,13 @@ def _section(
     return d, provided, float(flex.capacity), float(flex.strain), phi_vc, max_count
 
 
+@lru_cache(maxsize=4096)
+def _steel_required(moment: float, width: float, d: float, fc: float, fy: float) -> float:
+    """:func:`engine.concrete.transverse.steel_required` of one section, kept (every count of one bar
+    size has the same d, so the search over the bars asks it again)."""
+    return float(steel_required(moment, width, d, fc, fy))
+
+
 def bars_fail_anywhere(
     count: int,
     the_bar: Bar,
@@ -870,7 +881,7 @@ def _face(
         d, provided, capacity, strain, phi_vc, max_count = _section(
             count, the_bar, width, thickness, cover, layer_below, materials, phi_shear, aggregate
         )
-        required = float(steel_required(moment, width, d, materials.fc, materials.fy))
+        required = _steel_required(moment, width, d, materials.fc, materials.fy)
         with np.errstate(divide="ignore", invalid="ignore"):
             shear_ratios = np.where(v_face > 0.0, phi_vc / v_face, np.inf)
         worst = int(np.argmin(shear_ratios))
