@@ -167,6 +167,12 @@ def extended(wall: Wall, extension: float) -> Wall:
     return replace(wall, footing=footing)
 
 
+def round_volume(section: np.ndarray | float, length: float) -> np.ndarray:
+    """B*t_f*L_f rounded to 1e-12 m^3, so that equal volumes compare equal (m^3). Rounding is
+    monotone, so the volume of the least B*t_f bounds every other from below."""
+    return np.round(np.asarray(section) * length, 12)
+
+
 def size_footing(project: Project, wall: Wall) -> SizingResult:
     """Find the passing candidate with the least concrete on the wall's sizing grid.
 
@@ -174,15 +180,21 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
     length is fixed). With ``sizing.extension_max`` > 0 a third axis adds equal extensions e at both
     ends (0 to extension_max by extension_step); the choice then has the least volume B*t_f*L_f,
     ties going to the shorter, then the thinner, then the narrower footing. The map returned is the
-    one at the chosen extension (at the largest one when nothing passes).
+    one at the chosen extension (at the largest one when nothing passes). Longer footings whose least
+    B*t_f already holds no less concrete than the choice are not evaluated (they cannot be chosen).
     """
     widths, thicknesses = candidate_grid(wall)
     z = wall.sizing
     extensions = candidate_values(0.0, z.extension_max, z.extension_step) if z.extension_max > 0.0 else np.zeros(1)
     maps = []
     best: tuple[float, float, float, float, int, int, int] | None = None  # volume, e, t, b, k, row, col
+    smallest = float(thicknesses.min() * widths.min()) if thicknesses.size and widths.size else 0.0
     for k, e in enumerate(extensions.tolist()):
         trial = extended(wall, e)
+        if best is not None and smallest > 0.0 and round_volume(smallest, trial.footing_length) >= best[0]:
+            # even the least B*t_f at this length (and at every longer one) has no less concrete than
+            # the choice, and a tie goes to the shorter: nothing from here on can be chosen
+            break
         tables = _tables(project, trial)
         check_normalized, allowed, all_checks = feasibility_maps(tables, widths, thicknesses)
         passes = allowed & (np.min(check_normalized, axis=0) >= 1.0 - 1e-9)
@@ -190,7 +202,7 @@ def size_footing(project: Project, wall: Wall) -> SizingResult:
         if not passes.any():
             continue
         rows, cols = np.nonzero(passes)
-        volume = np.round(thicknesses[rows] * widths[cols] * trial.footing_length, 12)
+        volume = round_volume(thicknesses[rows] * widths[cols], trial.footing_length)
         # least volume; ties to the shorter (this e is the shortest so far at equal volume), thinner, narrower
         order = np.lexsort((widths[cols], thicknesses[rows], volume))
         i = int(order[0])
