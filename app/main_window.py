@@ -81,6 +81,7 @@ DRAWINGS_SHARE = 0.5  # of the right column's height: elevation and pressure; th
 VERDICT_SPARE_LINES = 2  # lines of text the verdict's headline and hint may take beyond one each
 DRAWINGS_CAPTIONS = 1  # lines of room for the drawings' captions to wrap without moving the panes
 WIDE_COLUMN = 780  # a right column this wide puts the warnings beside the verdict instead of under it
+MAP_LEAST_HEIGHT = 240  # a design map tab page lower than this shows the map in the drawings' place while it is open
 REFERENCES = (
     "ASCE 7-16 and ASCE 7-22 (load combinations, section 2.4); IBC 2021 (sections 1605, 1806 and 1809); "
     "Das and Bowles (soil pressure under eccentric load)"
@@ -200,6 +201,10 @@ class MainWindow(QMainWindow):
         self.document = ProjectDocument(self)
         self.runner = SizingRunner(self)
         self.package_writer = PackageWriter(self)
+        self._map_timer = QTimer(self)
+        self._map_timer.setSingleShot(True)
+        self._map_timer.setInterval(0)
+        self._map_timer.timeout.connect(self._place_map)
         self.setObjectName("mainWindow")
         self.setStyleSheet(STYLE_SHEET)
         self.resize(1480, 940)
@@ -697,9 +702,22 @@ class MainWindow(QMainWindow):
         self.design_map.busy = self.runner.busy(f"wall:{wall.id}") or self.runner.busy("all")
         self.design_map.render()
 
+    def _place_map(self) -> None:
+        """In a short window (the design map's tab page lower than :data:`MAP_LEAST_HEIGHT`) the map, while
+        its tab is shown, takes the drawings' place, which has the height; its buttons, readout and legend
+        stay in the tab. No pane moves: only what the drawings pane shows changes."""
+        dm = self.design_map
+        lend = self.tabs.currentWidget() is dm and 0 < dm.height() < MAP_LEAST_HEIGHT
+        if lend == dm.plot_lent:
+            return
+        dm.lend_plot(self.drawings.map_layout if lend else None)
+        self.drawings.show_map(lend)
+        self._set_tab_order()
+
     def _on_tab_changed(self, _index: int) -> None:
         """Render the tab that came into view; no pane moves (the tabs always have their share)."""
         doc = self.document
+        self._place_map()
         current = self.tabs.currentWidget()
         if current is self.cases_table:
             self.cases_table.set_result(doc.current_result, doc.units)
@@ -830,6 +848,7 @@ class MainWindow(QMainWindow):
         """Drawings above, verdict and tabs below, in fixed shares of the column's height; verdict and warnings
         side by side once the column is wide enough."""
         right = self.right_splitter
+        self._map_timer.start()  # the map's place, once the tabs have their new height
         self._place_warnings(right.width() >= WIDE_COLUMN)
         self._fit_verdict(resized=True)
         height = right.height() - right.handleWidth()

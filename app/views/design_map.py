@@ -21,7 +21,17 @@ from kernline.engine.sizing import SizingResult, sized_footing_values
 from kernline.engine.stability import table_checks
 from kernline.engine.units import Kind
 from PySide6.QtCore import QPointF, QRectF, Qt, Signal
-from PySide6.QtWidgets import QFrame, QGridLayout, QHBoxLayout, QLabel, QPushButton, QScrollArea, QVBoxLayout, QWidget
+from PySide6.QtWidgets import (
+    QBoxLayout,
+    QFrame,
+    QGridLayout,
+    QHBoxLayout,
+    QLabel,
+    QPushButton,
+    QScrollArea,
+    QVBoxLayout,
+    QWidget,
+)
 
 from .. import commands
 from ..document import ProjectDocument, SizingEntry
@@ -36,6 +46,7 @@ RING_ROOM = 0.08  # of the grid's span, kept around it for the ring of a corner 
 RING_RADIUS_PX = 11.0  # the chosen ring's 18 px symbol, its pen and a pixel to spare
 LABEL_GAP_PX = 3.0  # between a boundary's end and its label, and between two nudged labels
 SIDE_WIDTH = 320  # px: the buttons, message and legend beside the map
+_NO_LIMIT = 16_777_215  # Qt's QWIDGETSIZE_MAX
 
 
 def _rgb(hex_colour: str) -> list[int]:
@@ -249,6 +260,8 @@ class DesignMapView(QWidget):
         layout.setSpacing(6)
         layout.addWidget(self.plot, 1)
         layout.addWidget(self.side)
+        self.row = layout
+        self.plot_lent = False  # the map shown in another pane's place (see lend_plot)
 
         self.entry: SizingEntry | None = None
         self.fresh = False
@@ -525,6 +538,28 @@ class DesignMapView(QWidget):
             if any(abs(value - getattr(wall.footing, key)) > 1e-9 for key, value in values.items()):
                 sizes[wall.id] = values
         return sizes
+
+    def lend_plot(self, holder: QBoxLayout | None) -> None:
+        """Show the map itself in ``holder`` (a short window shows it in the drawings' place, where it has the
+        height), the buttons, readout and legend taking this page's whole width; with None, take it back
+        beside them. The map's items and labels stay as they are: only its size changes."""
+        lent = holder is not None
+        if lent == self.plot_lent:
+            return
+        self.plot_lent = lent
+        if holder is not None:
+            self.row.removeWidget(self.plot)
+            holder.addWidget(self.plot, 1)
+            self.side.setMinimumWidth(0)
+            self.side.setMaximumWidth(_NO_LIMIT)
+        else:
+            parent = self.plot.parentWidget()
+            layout = parent.layout() if parent is not None else None
+            if layout is not None:
+                layout.removeWidget(self.plot)
+            self.row.insertWidget(0, self.plot, 1)
+            self.side.setFixedWidth(SIDE_WIDTH)
+        self.plot.show()
 
     def wall_passes(self, wall_id: str) -> bool:
         """Whether the wall passes every check as it stands (the design along its length too, where there is

@@ -113,12 +113,34 @@ class DrawingsPanel(QWidget):
         self.splitter.setStretchFactor(0, 3)
         self.splitter.setStretchFactor(1, 2)
         self.splitter.setChildrenCollapsible(False)
+        # in a short window the design map, while its tab is shown, takes this pane's place (see show_map)
+        self.map_title = QLabel("Design map — here while its tab is open (the drawings come back when you leave it)")
+        self.map_title.setObjectName("sectionTitle")
+        self.map_title.setWordWrap(True)
+        self.map_page = QWidget()
+        self.map_page.setObjectName("drawingsMapPage")
+        self.map_layout = QVBoxLayout(self.map_page)
+        self.map_layout.setContentsMargins(6, 4, 6, 0)
+        self.map_layout.setSpacing(2)
+        self.map_layout.addWidget(self.map_title)
+        self.stack = QStackedWidget(self)
+        self.stack.addWidget(self.splitter)
+        self.stack.addWidget(self.map_page)
         layout = QVBoxLayout(self)
         layout.setContentsMargins(0, 0, 0, 0)
-        layout.addWidget(self.splitter)
+        layout.addWidget(self.stack)
         self.picker.activated.connect(self._on_picked)
         self.page_bar.currentChanged.connect(self._on_page_changed)
         self.elevation.scale_changed.connect(self._on_scale_changed)
+
+    @property
+    def showing_map(self) -> bool:
+        return self.stack.currentWidget() is self.map_page
+
+    def show_map(self, shown: bool) -> None:
+        """Show the design map's page (its plot placed in :attr:`map_layout` by the design map) in place of the
+        drawings, or the drawings again. The pane keeps its size either way."""
+        self.stack.setCurrentWidget(self.map_page if shown else self.splitter)
 
     def _on_picked(self, _index: int) -> None:
         choice = self.picker.choice()
