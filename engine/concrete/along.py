@@ -130,9 +130,8 @@ def _case_beams(table: CaseTable, state: Statics, only: Sequence[int] | None = N
         step = float(edges[1] - edges[0])
         unit = float(np.sum(step * mids * mids))
         strips = [(float(mids[j]), float(edges[j]), float(edges[j + 1])) for j in range(WALL_STRIPS)]
-    vertical = np.asarray(state.vertical)[chosen]
-    eccentricity = np.asarray(state.eccentricity)[chosen]
-    soil = rigid_soil_stations_of(vertical, eccentricity, width, length)
+    vertical = np.asarray(state.vertical)[chosen].tolist()
+    eccentricity = np.asarray(state.eccentricity)[chosen].tolist()
     lines_of, points_of = [], []
     for index in chosen:
         case = table.cases[index]
@@ -165,7 +164,20 @@ def _case_beams(table: CaseTable, state: Statics, only: Sequence[int] | None = N
                 lines.extend((scale * mid, a, b) for mid, a, b in strips)
         lines_of.append(lines)
         points_of.append(points)
-    return beam_arrays([x for x, _ in soil], [q for _, q in soil], width, lines_of, points_of)
+    # cases with the same loads and the same N and e (combinations that differ only in load cases
+    # the wall does not have) have the same diagram: computed once
+    first: dict[tuple[object, ...], int] = {}
+    inverse = [
+        first.setdefault((n, e, tuple(lines), tuple(points)), len(first))
+        for n, e, lines, points in zip(vertical, eccentricity, lines_of, points_of, strict=True)
+    ]
+    unique = list(first.values())
+    rows = [inverse.index(u) for u in unique]  # a row of each distinct case
+    soil = rigid_soil_stations_of(np.array([vertical[r] for r in rows]), np.array([eccentricity[r] for r in rows]), width, length)
+    beams = beam_arrays(
+        [x for x, _ in soil], [q for _, q in soil], width, [lines_of[r] for r in rows], [points_of[r] for r in rows]
+    )
+    return beams if len(rows) == len(inverse) else beams.rows(inverse)
 
 
 def _setup(table: CaseTable, state: Statics) -> tuple[float, Materials, Reinforcement | None, float]:
@@ -214,35 +226,53 @@ def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[Longitudinal
     thickness, materials, given, layer = _setup(table, evaluation.statics)
     concrete = table.concrete
     assert concrete is not None
-    diagrams = case_diagrams(table, evaluation)
-    if not diagrams:
+    if not table.cases:
         raise ValueError("no strength case")
+    beams = _case_beams(table, evaluation.statics)
+    diagrams = beams.diagrams()
     bottom, top, sag, hog = _chosen_bars(diagrams, thickness, materials, given, layer)
     largest = sag if diagrams[sag].max_moment >= -diagrams[hog].min_moment else hog
     plain = given is not None and given.plain
+    width = float(np.asarray(evaluation.statics.width))
     if plain:  # the plain section first: when it carries every case, the bars are only checked at one
-        width = float(np.asarray(evaluation.statics.width))
         phi_mn, phi_vn = _plain_capacities(width, thickness, concrete.fc, concrete.lam)
         if all(_plain_carries(d, phi_mn, phi_vn) for d in diagrams):
             one = design_longitudinal(
                 diagrams[largest], thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer
             )
             return _plain_along([one], width, thickness, concrete.fc, concrete.lam)[0], largest, diagrams[largest]
-    # every case checked quickly; only the governing failure is worded (a search over the bars)
-    designs = [
-        design_longitudinal(d, thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer, words=False)
-        for d in diagrams
-    ]
-    first = next((i for i, d in enumerate(designs) if not d.passes), None)
-    if first is not None:
-        designs[first] = design_longitudinal(
-            diagrams[first], thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer
+
+    def design(i: int, words: bool) -> LongitudinalDesign:
+        return design_longitudinal(
+            diagrams[i], thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer, words=words
         )
+
+    # every case checked quickly (all at once where both faces have bars); only the first failure of
+    # the bars is worded (a search over the bars), and only the governing case's design is built
+    designs: dict[int, LongitudinalDesign] = {}
+    if bottom is not None and top is not None:
+        faces = [
+            given_bars_pass(
+                beams, face, *(parse_counted(bars) if isinstance(bars, str) else bars),
+                thickness=thickness, materials=materials, cover=cover, layer_below=below,
+            )
+            for face, bars, cover, below in (("bottom", bottom, materials.cover, layer), ("top", top, TOP_COVER, 0.0))
+        ]  # fmt: skip
+        bars_pass = [low and high for low, high in zip(*faces, strict=True)]
+    else:
+        designs = {i: design(i, False) for i in range(len(diagrams))}
+        bars_pass = [d.passes for d in designs.values()]
+    first = next((i for i, ok in enumerate(bars_pass) if not ok), None)
+    if first is not None:
+        designs[first] = design(first, True)
     if plain:
-        designs = _plain_along(designs, float(np.asarray(evaluation.statics.width)), thickness, concrete.fc, concrete.lam)
-    failing = [i for i, d in enumerate(designs) if not d.passes]
-    index = failing[0] if failing else largest
-    return designs[index], index, diagrams[index]
+        carried = [_plain_carries(d, phi_mn, phi_vn) for d in diagrams]
+        bars_pass = [c or ok for c, ok in zip(carried, bars_pass, strict=True)]
+    index = next((i for i, ok in enumerate(bars_pass) if not ok), largest)
+    chosen = designs[index] if index in designs else design(index, False)
+    if plain:
+        chosen = _plain_along([chosen], width, thickness, concrete.fc, concrete.lam)[0]
+    return chosen, index, diagrams[index]
 
 
 def passes_along(table: CaseTable, evaluation: Evaluation) -> bool:

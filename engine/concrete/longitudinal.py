@@ -598,6 +598,29 @@ class BeamArrays:
     def diagrams(self) -> list[BeamDiagram]:
         return [self.diagram(i) for i in range(len(self.sizes))]
 
+    def rows(self, index: Sequence[int]) -> BeamArrays:
+        """These sets, in this order (a set may repeat)."""
+        at = np.asarray(index, dtype=int)
+
+        def pick(values: tuple[float, ...]) -> tuple[float, ...]:
+            return tuple(values[i] for i in index)
+
+        return BeamArrays(
+            nodes=self.nodes[at],
+            shear_left=self.shear_left[at],
+            shear_right=self.shear_right[at],
+            moment=self.moment[at],
+            net_start=self.net_start[at],
+            net_end=self.net_end[at],
+            sizes=tuple(self.sizes[i] for i in index),
+            width=self.width,
+            max_moment=pick(self.max_moment),
+            max_moment_at=pick(self.max_moment_at),
+            min_moment=pick(self.min_moment),
+            min_moment_at=pick(self.min_moment_at),
+            max_shear=pick(self.max_shear),
+        )
+
 
 def beam_diagrams(
     stations: Sequence[np.ndarray],

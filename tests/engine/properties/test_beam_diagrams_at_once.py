@@ -15,6 +15,7 @@ import json
 from dataclasses import replace
 
 import numpy as np
+import pytest
 from hypothesis import assume, given, settings
 from hypothesis import strategies as st
 from kernline.engine.concrete.along import case_diagram, case_diagrams, design_along, failing_case_along, passes_along
@@ -93,6 +94,49 @@ def test_diagrams_at_once_equal_each_diagram_alone(length, width, data):
         assert_same(beam_diagram(x, q, width, lines, points), diagram)
 
 
+def reference_design_along(table, evaluation):
+    """The design along the length case by case, as Kernline did it before the cases were computed
+    together: case_diagram and design_longitudinal for every case, the first failure worded, the plain
+    section's verdict over each (the reference the faster design_along must reproduce)."""
+    from kernline.engine.concrete.along import (
+        _chosen_bars,
+        _plain_along,
+        _plain_capacities,
+        _plain_carries,
+        _setup,
+    )
+    from kernline.engine.concrete.longitudinal import design_longitudinal
+
+    thickness, materials, given, layer = _setup(table, evaluation.statics)
+    concrete = table.concrete
+    diagrams = [case_diagram(table, evaluation, i) for i in range(len(table.cases))]
+    bottom, top, sag, hog = _chosen_bars(diagrams, thickness, materials, given, layer)
+    largest = sag if diagrams[sag].max_moment >= -diagrams[hog].min_moment else hog
+    plain = given is not None and given.plain
+    width = float(np.asarray(evaluation.statics.width))
+    if plain:
+        phi_mn, phi_vn = _plain_capacities(width, thickness, concrete.fc, concrete.lam)
+        if all(_plain_carries(d, phi_mn, phi_vn) for d in diagrams):
+            one = design_longitudinal(
+                diagrams[largest], thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer
+            )
+            return _plain_along([one], width, thickness, concrete.fc, concrete.lam)[0], largest, diagrams[largest]
+    designs = [
+        design_longitudinal(d, thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer, words=False)
+        for d in diagrams
+    ]
+    first = next((i for i, d in enumerate(designs) if not d.passes), None)
+    if first is not None:
+        designs[first] = design_longitudinal(
+            diagrams[first], thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer
+        )
+    if plain:
+        designs = _plain_along(designs, width, thickness, concrete.fc, concrete.lam)
+    failing = [i for i, d in enumerate(designs) if not d.passes]
+    index = failing[0] if failing else largest
+    return designs[index], index, diagrams[index]
+
+
 def _demo_walls():
     raw = json.loads(resource_path("demo.kernline").read_text(encoding="utf-8"))
     return raw, parse_project(raw)
@@ -111,7 +155,8 @@ RAW, PROJECT = _demo_walls()
     st.sampled_from(["as given", "designed", "plain, designed", "light", "plain, light"]),
 )
 def test_case_diagrams_equal_case_diagram_on_random_walls(index, construction, width_in, thickness_in, scale, bars):
-    """case_diagrams gives every strength case's case_diagram, and passes_along the verdict of
+    """case_diagrams gives every strength case's case_diagram, design_along what the case-by-case
+    reference gives, and passes_along the verdict of
     design_along (whichever case failing_case_along tries first), on the demo's walls (inputs only)
     with other constructions, sizes, loads and bars (D)."""
     from kernline.engine.concrete.bars import bar
@@ -139,7 +184,23 @@ def test_case_diagrams_equal_case_diagram_on_random_walls(index, construction, w
     assert len(together) == len(table.cases)
     for i, diagram in enumerate(together):
         assert_same(case_diagram(table, evaluation, i), diagram)
-    passes = design_along(table, evaluation)[0].passes
+    design, index, diagram = design_along(table, evaluation)
+    expected, expected_index, expected_diagram = reference_design_along(table, evaluation)
+    assert index == expected_index
+    assert_same(expected_diagram, diagram)
+    assert_same(expected.diagram, design.diagram)
+    assert (design.passes, design.message, design.plain_carries) == (expected.passes, expected.message, expected.plain_carries)
+    assert (design.plain_moment_capacity, design.plain_shear_capacity) == (
+        expected.plain_moment_capacity,
+        expected.plain_shear_capacity,
+    )
+    for face in ("bottom", "top"):
+        ours, theirs = getattr(design, face), getattr(expected, face)
+        for name in theirs.__slots__:
+            value = getattr(theirs, name)
+            wanted = pytest.approx(value, rel=1e-12, abs=1e-12) if isinstance(value, float) else value
+            assert getattr(ours, name) == wanted, (face, name)
+    passes = design.passes
     assert passes_along(table, evaluation) == passes
     for probe in (0, len(table.cases) // 2, len(table.cases) - 1):  # trying one case first changes nothing
         assert (failing_case_along(table, evaluation.statics, probe) is None) == passes
