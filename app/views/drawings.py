@@ -170,7 +170,9 @@ class DrawingsPanel(QWidget):
     def _share(self) -> None:
         """Split the height between the elevation and the page below as the page needs."""
         page = self.page_bar.currentIndex()
-        total = sum(self.splitter.sizes()) or self.splitter.height()
+        # the panel's own height (the splitter fills it): on a resize the splitter's sizes are still the old ones,
+        # and a share of those would be overruled when the splitter itself is resized
+        total = self.height() - self.splitter.handleWidth()
         if total > 0:
             upper = int(round(ELEVATION_SHARE[page] * total))
             self.splitter.setSizes([upper, total - upper])

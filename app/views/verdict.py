@@ -23,6 +23,7 @@ from __future__ import annotations
 import math
 from typing import Any
 
+from kernline.engine.concrete.bars import counted_text
 from kernline.engine.model import LateralLoad, Wall
 from kernline.engine.registry import Check, Family
 from kernline.engine.results import Governing, WallResult
@@ -214,7 +215,7 @@ class VerdictView(QWidget):
                 case.setToolTip(tip)
             _set_colour(verdict, WARM if not g.passes else GRAPHITE, bold=True)
         ready = along_ready(result)
-        along = along_words(result) if ready else ""
+        along = along_words(result, units) if ready else ""
         whole = result.passes_all if ready else result.passes
         if whole:
             follows = "" if ready else "; the design along the length follows"
@@ -256,11 +257,12 @@ def along_ready(result: WallResult) -> bool:
     return table is None or table.concrete is None or "along" in result.memo
 
 
-def along_words(result: WallResult) -> str:
+def along_words(result: WallResult, units: str = "US") -> str:
     """The bars along the length and whether the footing carries its strength cases as a beam, from
     the engine's design along the length, in one short sentence ("" without a concrete design):
     "Along L_f: bottom 3 #5, top 2 #4 (entered) — carries its strength cases." or "... — fails."
-    (the engine's words on why: :func:`along_reason`)."""
+    (the engine's words on why: :func:`along_reason`). In SI the bars take their soft-metric names
+    ("3 No. 16"), as the form shows them."""
     along = result.along
     if along is None:
         return ""
@@ -269,7 +271,8 @@ def along_words(result: WallResult) -> str:
     faces, sources = [], []
     for face, faced in (("bottom", design.bottom), ("top", design.top)):
         if faced.bars:
-            faces.append(f"{face} {faced.bars}")
+            named = counted_text(faced.count, faced.bar, units) if faced.bar is not None and faced.count else faced.bars
+            faces.append(f"{face} {named}")
             sources.append(ENTERED if given is not None and getattr(given, face) is not None else "designed")
     if len(set(sources)) == 1:
         bars = ", ".join(faces) + f" ({sources[0]})"

@@ -37,6 +37,23 @@ from ..document import ProjectDocument
 from ..style import GRAPHITE, MUTED, NG_MARK, OK_MARK, WARM
 
 COLUMNS = ("Wall", "B × t_f", "Least margin")
+MM = 0.001  # m
+
+
+def footing_size_text(width: float, thickness: float, units: str) -> str:
+    """B × t_f as the walls list shows it: 1'-6" × 1'-0" (US); 457 × 305 in SI, millimetres to the millimetre
+    with the unit in the column's title (:func:`size_title`), so that the least margin beside it keeps its
+    room in the list's width."""
+    if units == "SI":
+        return f"{width / MM:.0f} × {thickness / MM:.0f}"
+    return f"{format_length(width, units)} × {format_length(thickness, units)}"
+
+
+def size_title(units: str) -> str:
+    """The footing column's title: "B × t_f", with "(mm)" in SI (see :func:`footing_size_text`)."""
+    return f"{COLUMNS[1]} (mm)" if units == "SI" else COLUMNS[1]
+
+
 ALONG_DELAY_MS = 150  # idle time after a refresh before the designs along the length are worked out
 
 
@@ -161,10 +178,12 @@ class WallsView(QWidget):
                 item = QTreeWidgetItem()
                 item.setFlags(item.flags() | Qt.ItemFlag.ItemIsEditable)
                 self.tree.addTopLevelItem(item)
+            if self.tree.headerItem().text(1) != size_title(units):
+                self.tree.headerItem().setText(1, size_title(units))
             for i, wall in enumerate(walls):
                 item = self.tree.topLevelItem(i)
                 result = doc.result_of(wall)
-                size = f"{format_length(wall.footing.width, units)} × {format_length(wall.footing.thickness, units)}"
+                size = footing_size_text(wall.footing.width, wall.footing.thickness, units)
                 if result is None:  # site values missing: nothing is checked
                     self._show_unchecked(item, wall.id, size, wall.label)
                     continue

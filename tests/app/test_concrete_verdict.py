@@ -29,3 +29,16 @@ def test_concrete_checks_have_rows_of_their_own(make_window, tmp_path, qtbot):
         assert a.height() >= names[i].fontMetrics().height() - 1, names[i].text()
         for b in rects[i + 1 :]:
             assert not a.intersects(b), (a, b)
+
+
+def test_the_bars_along_the_length_take_their_metric_names_in_si(qtbot, window):
+    """The verdict's "Along L_f" line names the bars as the form does: "3 #5" in US, "3 No. 16" in SI
+    (ASTM A615M soft-metric names of the same bars)."""
+    from window_helpers import select_wall
+
+    select_wall(window, "C3")
+    qtbot.waitUntil(lambda: "Along L_f" in window.verdict.hint.text(), timeout=10_000)
+    assert "3 #5" in window.verdict.hint.text()
+    window.set_units("SI")
+    qtbot.waitUntil(lambda: "3 No. 16" in window.verdict.hint.text(), timeout=10_000)
+    assert "#" not in window.verdict.hint.text().split("—")[0]

@@ -25,7 +25,9 @@ def test_switch_to_si_and_back(qtbot, window):
     assert "kPa" in window.drawings.pressure.getPlotItem().getAxis("left").labelText
     assert window.drawings.pressure.shown_allowable == pytest.approx(95.76052, rel=1e-5)
     assert "kN/m" in window.wall_form.loads.table.item(0, 2).text()
-    assert "m" in window.walls_view.tree.topLevelItem(0).text(1)
+    assert window.walls_view.tree.headerItem().text(1).endswith("(mm)") and "'" not in window.walls_view.tree.topLevelItem(
+        0
+    ).text(1)
     assert doc.project.walls == model  # the SI values inside do not change
     si_verdict = window.verdict.texts()
     # margins and cases do not depend on units; the demands and capacities are said in kPa, kN, m
@@ -47,3 +49,23 @@ def test_switch_to_si_and_back(qtbot, window):
     doc.undo_stack.undo()
     doc.undo_stack.undo()
     assert doc.undo_stack.index() == 0
+
+
+@pytest.mark.parametrize("units", ["US", "SI"])
+def test_the_walls_list_columns_fit_at_1280_by_800(qtbot, window, units):
+    """Every wall's id, footing and least margin are whole in the 250 px list (SI names the unit once)."""
+    window.set_units(units)
+    window.resize(1280, 800)
+    qtbot.waitUntil(lambda: window.size().toTuple() == (1280, 800), timeout=2000)
+    qtbot.wait(20)
+    tree = window.walls_view.tree
+    header = tree.header()
+    assert header.sectionPosition(2) + header.sectionSize(2) <= tree.viewport().width()
+    for i in range(tree.topLevelItemCount()):
+        item = tree.topLevelItem(i)
+        for col in range(3):
+            room = header.sectionSize(col) - (tree.indentation() if col == 0 else 0)
+            assert tree.fontMetrics().horizontalAdvance(item.text(col)) <= room, (item.text(col), room)
+    if units == "SI":
+        assert tree.topLevelItem(0).text(1) == "457 × 305"  # N1: 18 in × 12 in, in mm
+        assert tree.headerItem().text(1) == "B × t_f (mm)"
