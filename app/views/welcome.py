@@ -6,10 +6,12 @@ touches no document: it only asks, through its signals, for the window to open s
 
 from __future__ import annotations
 
+import json
 from collections.abc import Sequence
 from pathlib import Path
 
 from kernline.engine import __version__
+from kernline.engine.resources import resource_path
 from PySide6.QtCore import Qt, Signal
 from PySide6.QtWidgets import QFrame, QHBoxLayout, QLabel, QPushButton, QSizePolicy, QVBoxLayout, QWidget
 
@@ -38,6 +40,20 @@ QLabel#recentMissing {{ color: {WARM}; }}
 """
 
 
+NUMBER_WORDS = ("no", "one", "two", "three", "four", "five", "six", "seven", "eight", "nine", "ten")
+
+
+def demo_words() -> str:
+    """What the demo project is, its walls counted from the demo file itself (so the words follow the demo)."""
+    try:
+        walls = json.loads(resource_path("demo.kernline").read_text(encoding="utf-8")).get("walls", [])
+    except (OSError, ValueError, AttributeError):
+        return "A two-storey clinic; one of its walls fails bearing until it is sized."
+    count = len(walls)
+    number = NUMBER_WORDS[count] if count < len(NUMBER_WORDS) else str(count)
+    return f"A two-storey clinic with {number} wall{'s' if count != 1 else ''}; one of them fails bearing until it is sized."
+
+
 class WelcomePanel(QWidget):
     """Open the demo, start a new project, open a file, or pick one of the recent projects."""
 
@@ -62,17 +78,14 @@ class WelcomePanel(QWidget):
         title_row.addStretch(1)
         lead = QLabel(
             "Checks concrete strip footings under shear walls for overturning, sliding and soil bearing "
-            "under ASCE 7-16 load combinations, and finds the smallest footing that passes."
+            "under ASCE 7-16 load combinations, designs their concrete (ACI 318-19), and finds the smallest "
+            "footing that passes."
         )
         lead.setObjectName("welcomeLead")
         lead.setWordWrap(True)
 
         entries = (
-            self._action(
-                "Open the demo project",
-                "A two-storey clinic with four walls; one of them fails bearing until it is sized.",
-                primary=True,
-            ),
+            self._action("Open the demo project", demo_words(), primary=True),
             self._action("New project", "One wall with starting values, to be replaced with your own."),
             self._action("Open a project file…", "A .kernline file saved earlier."),
         )
