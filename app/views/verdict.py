@@ -45,7 +45,7 @@ from PySide6.QtWidgets import QGridLayout, QLabel, QSizePolicy, QVBoxLayout, QWi
 from ..style import GRAPHITE, MUTED, NG_MARK, NO_DEMAND_MARK, OK_MARK, WARM
 
 CASE_FONT_SCALE = 0.92  # the case column is secondary: a little smaller, and muted
-CASE_MIN_WIDTH = 150
+CASE_MIN_WIDTH = 110  # px: "0.516D + 0.7E (+)" whole; the demand and capacity beside it come first
 ALONG_DELAY_MS = 150  # idle time after a render before the design along the length is worked out  # px: a long demand-against-capacity text is elided before the case column is
 
 

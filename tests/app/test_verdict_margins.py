@@ -6,6 +6,7 @@ from __future__ import annotations
 
 import json
 
+import pytest
 from kernline.engine.summary import case_text, comparison_text, margin_text, state_words
 from PySide6.QtCore import QRect
 from PySide6.QtWidgets import QApplication, QLabel
@@ -109,3 +110,15 @@ def test_rows_stay_readable_at_1280_by_800(qtbot, make_window, tmp_path):
     for i, a in enumerate(rects):
         for b in rects[i + 1 :]:
             assert not a.intersects(b), (a, b)
+
+
+@pytest.mark.parametrize("size", [(1280, 800), (1480, 940), (1920, 1080)])
+def test_the_stability_statements_are_whole_at_every_size(qtbot, window, size):
+    """Demand against capacity of overturning, sliding and bearing is read whole (the case beside it gives way
+    and keeps its words in the tooltip)."""
+    window.resize(*size)
+    qtbot.waitUntil(lambda: window.size().toTuple() == size, timeout=2000)
+    qtbot.wait(20)
+    for check, (_name, statement, _mark, _case) in window.verdict.rows.items():
+        if check.id in ("overturning", "sliding", "bearing"):
+            assert statement.fontMetrics().horizontalAdvance(statement.text()) <= statement.width(), (check.id, size)
