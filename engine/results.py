@@ -159,7 +159,7 @@ class WallResult:
     def along(self) -> Any:
         """The design along the length, ``(LongitudinalDesign, case index, BeamDiagram)`` of
         :func:`engine.concrete.along.design_along`, or None without a concrete design; computed on
-        first use (tens of milliseconds) and kept."""
+        first use (a few milliseconds) and kept."""
         if "along" not in self.memo:
             table, ev = self.strength_table, self.strength_evaluation
             if table is None or ev is None or not table.cases or table.concrete is None:
