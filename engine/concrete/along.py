@@ -262,13 +262,13 @@ def design_along(table: CaseTable, evaluation: Evaluation) -> tuple[Longitudinal
     else:
         designs = {i: design(i, False) for i in range(len(diagrams))}
         bars_pass = [d.passes for d in designs.values()]
-    first = next((i for i, ok in enumerate(bars_pass) if not ok), None)
-    if first is not None:
-        designs[first] = design(first, True)
-    if plain:
+    if plain:  # a case the plain section carries passes whatever its bars do
         carried = [_plain_carries(d, phi_mn, phi_vn) for d in diagrams]
         bars_pass = [c or ok for c, ok in zip(carried, bars_pass, strict=True)]
-    index = next((i for i, ok in enumerate(bars_pass) if not ok), largest)
+    first = next((i for i, ok in enumerate(bars_pass) if not ok), None)
+    if first is not None:  # the governing failure, worded (the first one the design does not carry)
+        designs[first] = design(first, True)
+    index = first if first is not None else largest
     chosen = designs[index] if index in designs else design(index, False)
     if plain:
         chosen = _plain_along([chosen], width, thickness, concrete.fc, concrete.lam)[0]
@@ -423,7 +423,10 @@ def _plain_along(
             )
         else:
             why = "the plain section does not carry the moment and shear along the length (ACI 318-19 14.5.2.1, 14.5.5.1)"
-            message = why + ("; " + design.message if design.message else "; the bars carry them")
+            if design.message:
+                message = f"{why}; {design.message}"
+            else:
+                message = why + ("; the bars carry them" if design.passes else "; nor do the bars")
             out.append(
                 replace(design, message=message, plain_moment_capacity=phi_mn, plain_shear_capacity=phi_vn, plain_carries=False)
             )

@@ -53,3 +53,23 @@ def test_sizing_skips_sizes_that_fail_along_the_length():
     assert sized.feasible and "along the length" in sized.message
     chosen = replace(wall, footing=replace(wall.footing, width=sized.width, thickness=sized.thickness))
     assert check_wall(project, chosen).passes_all
+
+
+def test_a_plain_footing_whose_bars_fail_is_never_said_to_be_carried_by_its_bars():
+    """A case the plain section does not carry and whose bars fail reads as failing in words, even
+    when its own design carries no message (the words go to the first failure the design keeps)."""
+    from kernline.engine.concrete.along import _plain_along
+
+    raw = demo()
+    c3 = next(w for w in raw["walls"] if w["id"] == "C3")
+    c3["footing"]["width"] = "20 in"
+    c3["footing"]["reinforcement"] = {"transverse": "plain", "bottom": "2 #4", "top": "2 #4"}
+    project = parse_project(copy.deepcopy(raw))
+    wall = next(w for w in project.walls if w.id == "C3")
+    design = check_wall(project, wall).along[0]
+    assert not design.plain_carries and not design.passes and "plain section does not carry" in design.message
+    bare = replace(design, message="", plain_carries=None)
+    concrete = project.concrete
+    (again,) = _plain_along([bare], wall.footing.width, wall.footing.thickness, concrete.fc, concrete.lam)
+    assert not again.passes and not again.plain_carries
+    assert "the bars carry them" not in again.message and again.message.endswith("nor do the bars")
