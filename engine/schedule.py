@@ -114,7 +114,7 @@ def footing_bars(project: Project, wall: Wall, result: WallResult) -> FootingBar
 
     The transverse bars are the flexure record's (checked when entered, else chosen); the bottom and
     top bars are those of the design along the length (``result.along``, :func:`engine.concrete.along.
-    design_along`), which the result works out on first use (tens of ms a wall) and keeps.
+    design_along`), which the result works out on first use (a few milliseconds a wall) and keeps.
     """
     from .concrete.bars import counted_text
 
