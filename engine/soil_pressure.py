@@ -50,7 +50,10 @@ def resultant_eccentricity(moment_about_centre: ArrayLike, vertical: ArrayLike) 
         e = m / n
     no_resultant = n <= 0.0
     if no_resultant.any():
-        e = np.where(no_resultant, np.copysign(np.inf, m), e)
+        if isinstance(e, np.ndarray) and e.ndim:  # overwrite in place: no second grid-sized array
+            np.copyto(e, np.copysign(np.inf, m), where=no_resultant)
+        else:
+            e = np.where(no_resultant, np.copysign(np.inf, m), e)
     return e
 
 
@@ -83,22 +86,41 @@ def pressure_distribution(vertical: ArrayLike, eccentricity: ArrayLike, width: A
         width: B (m).
         length: L (m).
     """
+    # The same arithmetic as the formulas above, done in as few grid-sized arrays as possible (the
+    # sizing grid calls this on cases x thicknesses x widths): each step writes into an array whose
+    # previous value is no longer needed, and the beyond-the-kern branch is divided only where it applies.
     n = np.asarray(vertical, dtype=float)
-    e = np.abs(np.asarray(eccentricity, dtype=float))
-    stable = (n > 0.0) & (e < 0.5 * length)
+    w = np.asarray(width, dtype=float)
+    e_in = np.asarray(eccentricity, dtype=float)
+    along = np.broadcast_shapes(n.shape, e_in.shape)  # the shape of stable and contact_length
+    shape = np.broadcast_shapes(along, w.shape)  # the shape of q_max and q_min
+    half = 0.5 * length
+    e = np.abs(e_in, out=np.empty(shape))  # |e|
+    e_along = e if along == shape else np.abs(e_in)
+    stable = (n > 0.0) & (e_along < half)
     in_kern = e <= length / 6.0
-    half_minus_e = 0.5 * length - e
+    contact = np.subtract(half, e_along, out=np.empty(along))
+    contact *= 3.0  # a = 3 (L/2 - |e|) beyond the kern
+    np.copyto(contact, length, where=in_kern if along == shape else e_along <= length / 6.0)
     with np.errstate(divide="ignore", invalid="ignore", over="ignore"):
-        average = n / (np.asarray(width) * length)  # N / (B L)
-        swing = average * (6.0 / length) * e  # N / (B L) * 6|e|/L
-        q_max = np.where(in_kern, average + swing, (2.0 / 3.0) * n / (np.asarray(width) * half_minus_e))
-    q_min = np.where(in_kern, np.maximum(average - swing, 0.0), 0.0)  # no rounding below zero at e = L/6
-    contact = np.where(in_kern, length, 3.0 * half_minus_e)
+        average = np.divide(n, w * length, out=np.empty(shape))  # N / (B L)
+        swing = np.multiply(average, 6.0 / length, out=np.empty(shape))
+        swing *= e  # N / (B L) * 6|e|/L
+        q_max = np.add(average, swing, out=np.empty(shape))  # in the kern
+        q_min = np.subtract(average, swing, out=average)
+        np.maximum(q_min, 0.0, out=q_min)  # no rounding below zero at e = L/6
+        beyond = ~in_kern
+        if beyond.any():
+            # beyond the kern: q_max = 2 N / (3 B (L/2 - |e|)), q_min = 0
+            half_minus_e = np.subtract(half, e, out=e)
+            two_thirds_n = np.multiply(n, 2.0 / 3.0, out=swing)
+            np.divide(two_thirds_n, np.multiply(w, half_minus_e, out=half_minus_e), out=q_max, where=beyond)
+            np.copyto(q_min, 0.0, where=beyond)
     unstable = ~stable
     if unstable.any():
-        q_max = np.where(unstable, np.inf, q_max)
-        q_min = np.where(unstable, 0.0, q_min)
-        contact = np.where(unstable, 0.0, contact)
+        np.copyto(q_max, np.inf, where=unstable)
+        np.copyto(q_min, 0.0, where=unstable)
+        np.copyto(contact, 0.0, where=unstable)
     return PressureDistribution(q_max=q_max, q_min=q_min, contact_length=contact, stable=stable)
 
 

@@ -16,6 +16,7 @@ from functools import lru_cache
 import numpy as np
 
 from . import overturning, soil_pressure
+from .checks._arrays import full
 from .combinations import DesignCase, combinations_of, design_cases
 from .loads import lateral_resultants, self_weight, vertical_resultants
 from .model import ConcreteSettings, DesignCriteria, LoadCase, Project, Site, SlidingBasis, SoilProperties, Wall
@@ -260,6 +261,7 @@ class Evaluation:
         """(checks, ...) lowest ratio / required of each check over the cases it applies to (inf: none)."""
         out = []
         grid = self.statics.grid_shape
+        per_case = self.statics.per_case
         for j, check in enumerate(self.checks):
             ratio = self.arrays[check].ratio
             if not check.per_case:
@@ -269,8 +271,9 @@ class Evaluation:
             if not mask.any():
                 out.append(np.full(grid, np.inf))
                 continue
-            rows = ratio if mask.all() else ratio[mask]
-            out.append(np.broadcast_to(rows.min(axis=0), grid) / self.required[j])
+            # the least over the cases the check applies to (no copy of those rows)
+            lowest = ratio.min(axis=0) if mask.all() else ratio.min(axis=0, where=per_case(mask), initial=np.inf)
+            out.append(np.broadcast_to(lowest, grid) / self.required[j])
         return np.stack(out)
 
     # the shared statics, by their names
@@ -390,7 +393,8 @@ def statics(table: CaseTable, width: float | np.ndarray, thickness: float | np.n
     if soil.sliding_basis is SlidingBasis.DEAD:
         # IBC 2021 Table 1806.2 note a, 1806.3.2: friction on the dead load f_D (D + W_f); never more
         # than the whole N the soil feels, which uplift in the combination may have reduced
-        normal = np.minimum(per_case(table.applied_dead) + factored_weight, vertical)
+        normal = per_case(table.applied_dead) + factored_weight
+        np.minimum(normal, vertical, out=normal)
     else:
         normal = vertical
     e = soil_pressure.resultant_eccentricity(moment, vertical)
@@ -403,16 +407,16 @@ def statics(table: CaseTable, width: float | np.ndarray, thickness: float | np.n
         shape=shape,
         self_weight=weight,
         factored_weight=factored_weight,
-        vertical=np.broadcast_to(vertical, shape),
-        moment=np.broadcast_to(moment, shape),
-        eccentricity=np.broadcast_to(e, shape),
-        q_max=np.broadcast_to(pressure.q_max, shape),
-        q_min=np.broadcast_to(pressure.q_min, shape),
-        contact_length=np.broadcast_to(pressure.contact_length, shape),
-        stable=np.broadcast_to(pressure.stable, shape),
-        lateral_moment=np.broadcast_to(lateral, shape),
-        overturning_lateral_moment=np.broadcast_to(reduced, shape),
-        sliding_normal=np.broadcast_to(normal, shape),
+        vertical=full(vertical, shape),
+        moment=full(moment, shape),
+        eccentricity=full(e, shape),
+        q_max=full(pressure.q_max, shape),
+        q_min=full(pressure.q_min, shape),
+        contact_length=full(pressure.contact_length, shape),
+        stable=full(pressure.stable, shape),
+        lateral_moment=full(lateral, shape),
+        overturning_lateral_moment=full(reduced, shape),
+        sliding_normal=full(normal, shape),
     )
 
 

@@ -15,6 +15,7 @@ import numpy as np
 from .. import overturning
 from ..registry import Check, CheckArrays, Family, register_check
 from ..registry import json_number as _num
+from ._arrays import full
 
 if TYPE_CHECKING:  # pragma: no cover
     from ..stability import Statics
@@ -39,10 +40,18 @@ class OverturningCheck(Check):
         table, per_case = state.table, state.per_case
         half = 0.5 * table.length
         weight = state.factored_weight  # acts at L_f/2: resists when downward, overturns when net upward
-        resisting = per_case(table.applied_resisting) + np.maximum(weight, 0.0) * half
-        moment = per_case(table.applied_overturning) + np.maximum(-weight, 0.0) * half + state.overturning_lateral_moment
+        # sum M_R = applied resisting + max(f_D W_f, 0) L_f/2, each step in one array (the grid is large)
+        resisting = np.maximum(weight, 0.0)
+        resisting *= half
+        resisting += per_case(table.applied_resisting)
+        # sum M_O = applied overturning + max(-f_D W_f, 0) L_f/2 + the shears' moment about the base
+        moment = np.negative(weight)
+        np.maximum(moment, 0.0, out=moment)
+        moment *= half
+        moment += per_case(table.applied_overturning)
+        moment += state.overturning_lateral_moment
         ratio = overturning.overturning_ratio(resisting, moment)
-        return CheckArrays(ratio=np.broadcast_to(ratio, state.shape), parts={"resisting": resisting, "moment": moment})
+        return CheckArrays(ratio=full(ratio, state.shape), parts={"resisting": resisting, "moment": moment})
 
     def record(self, state: Statics, arrays: CheckArrays, index: int, required: float) -> OverturningResult:
         from ..results import meets

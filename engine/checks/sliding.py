@@ -13,6 +13,7 @@ import numpy as np
 from .. import sliding
 from ..registry import Check, CheckArrays, Family, register_check
 from ..registry import json_number as _num
+from ._arrays import full
 
 if TYPE_CHECKING:  # pragma: no cover
     from ..stability import Statics
@@ -40,15 +41,20 @@ class SlidingCheck(Check):
         table, soil = state.table, state.table.soil
         normal = state.sliding_normal
         friction = sliding.friction_resistance(soil.friction, normal)
-        cohesion = sliding.cohesion_resistance(soil.cohesion, state.width, state.contact_length, normal)
+        if soil.cohesion == 0.0:  # no cohesion: zero everywhere, without a grid-sized array of zeros
+            cohesion = np.broadcast_to(0.0, np.broadcast_shapes(state.width.shape, state.contact_length.shape, normal.shape))
+        else:
+            cohesion = sliding.cohesion_resistance(soil.cohesion, state.width, state.contact_length, normal)
         passive = np.broadcast_to(
             sliding.passive_resistance(soil.passive, state.width, table.wall.footing.cover, state.thickness, soil.passive_ignore),
             state.shape,
         )
         shear = state.per_case(table.shear)
-        ratio = sliding.sliding_ratio(friction + cohesion + passive, shear)
+        resistance = friction + cohesion  # (friction + cohesion) + passive, summed in one array
+        resistance += passive
+        ratio = sliding.sliding_ratio(resistance, shear)
         return CheckArrays(
-            ratio=np.broadcast_to(ratio, state.shape),
+            ratio=full(ratio, state.shape),
             parts={"friction": friction, "cohesion": cohesion, "passive": passive, "force": np.broadcast_to(shear, state.shape)},
         )
 
