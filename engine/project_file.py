@@ -11,7 +11,6 @@ whole.
 from __future__ import annotations
 
 import copy
-import difflib
 import json
 import math
 import os
@@ -170,6 +169,8 @@ def _keys(obj: dict[str, Any], allowed: tuple[str, ...]) -> None:
             continue
         shown = key if len(key) <= 40 else key[:37] + "..."
         lowered = {k.lower(): k for k in allowed}
+        import difflib  # only for this message: not imported by every load
+
         close = difflib.get_close_matches(key.lower(), list(lowered), n=1, cutoff=0.6)
         if close:
             hint = f'did you mean "{lowered[close[0]]}"?'

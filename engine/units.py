@@ -292,9 +292,12 @@ class _PintAnswers:
         if os.environ.get("KERNLINE_UNIT_CACHE", "1") == "0":
             return self.answers
         try:
-            from importlib.metadata import version
+            from . import _installed_version  # pint's version, without importing pint or importlib.metadata
 
-            stamp = f"{self.FORMAT}|{version('pint')}|".encode() + resource_path("kernline_units.txt").read_bytes()
+            pint_version = _installed_version("pint")
+            if pint_version is None:
+                raise LookupError("pint is not installed")
+            stamp = f"{self.FORMAT}|{pint_version}|".encode() + resource_path("kernline_units.txt").read_bytes()
             name = f"unit-factors-{hashlib.sha256(stamp).hexdigest()[:16]}.json"
             base = (
                 os.environ.get("XDG_CACHE_HOME")
