@@ -63,14 +63,9 @@ def strength_grid(state: Statics) -> StrengthGrid:
     wall = table.wall
     # net pressure: the rigid-footing peak less the uniform pressure of the factored self weight
     # f_D W_f / (B L_f), which the footing and the soil on it carry straight to the soil
-    # (each step in one grid-sized array; a case with no equilibrium, or no finite pressure, gives 0)
-    q = np.divide(np.asarray(state.factored_weight, dtype=float), state.width * table.length)  # f_D W_f / (B L_f)
-    q = np.subtract(np.asarray(state.q_max, dtype=float), q, out=q if q.shape == state.shape else None)
-    stable = np.asarray(state.stable)
-    if not stable.all():
-        np.copyto(q, 0.0, where=~stable)
-    np.maximum(q, 0.0, out=q)
-    np.copyto(q, 0.0, where=~np.isfinite(q))
+    own = np.asarray(state.factored_weight, dtype=float) / (state.width * table.length)
+    q = np.where(np.asarray(state.stable), np.asarray(state.q_max, dtype=float) - own, 0.0)
+    q = np.where(np.isfinite(q), np.maximum(q, 0.0), 0.0)
     if q.shape[0]:
         index = np.argmax(q, axis=0)
         q_u = np.max(q, axis=0)

@@ -40,16 +40,23 @@ class OverturningCheck(Check):
         table, per_case = state.table, state.per_case
         half = 0.5 * table.length
         weight = state.factored_weight  # acts at L_f/2: resists when downward, overturns when net upward
-        # sum M_R = applied resisting + max(f_D W_f, 0) L_f/2, each step in one array (the grid is large)
-        resisting = np.maximum(weight, 0.0)
-        resisting *= half
-        resisting += per_case(table.applied_resisting)
-        # sum M_O = applied overturning + max(-f_D W_f, 0) L_f/2 + the shears' moment about the base
-        moment = np.negative(weight)
-        np.maximum(moment, 0.0, out=moment)
-        moment *= half
-        moment += per_case(table.applied_overturning)
-        moment += state.overturning_lateral_moment
+        if (weight > 0.0).all():
+            # the usual case, the footing's weight resists in every case: max(f_D W_f, 0) = f_D W_f and
+            # max(-f_D W_f, 0) L_f/2 = +0 exactly, so the sums below are those of the general case
+            resisting = np.multiply(weight, half)
+            resisting += per_case(table.applied_resisting)
+            moment = np.add(per_case(table.applied_overturning) + 0.0, state.overturning_lateral_moment)
+        else:
+            # sum M_R = applied resisting + max(f_D W_f, 0) L_f/2, each step in one array (the grid is large)
+            resisting = np.maximum(weight, 0.0)
+            resisting *= half
+            resisting += per_case(table.applied_resisting)
+            # sum M_O = applied overturning + max(-f_D W_f, 0) L_f/2 + the shears' moment about the base
+            moment = np.negative(weight)
+            np.maximum(moment, 0.0, out=moment)
+            moment *= half
+            moment += per_case(table.applied_overturning)
+            moment += state.overturning_lateral_moment
         ratio = overturning.overturning_ratio(resisting, moment)
         return CheckArrays(ratio=full(ratio, state.shape), parts={"resisting": resisting, "moment": moment})
 

@@ -104,3 +104,36 @@ def test_grid_minima_equal_each_size_on_its_own(index):
                     assert got == want
                 else:
                     assert got == pytest.approx(want, rel=1e-12)
+
+
+@pytest.mark.parametrize("index", range(5))
+def test_overturning_sums_the_same_whether_or_not_every_weight_resists(index):
+    """The overturning check's shortcut for footings whose weight resists in every case gives, element
+    by element, the sums of the general formula sum M_R = applied + max(f_D W_f, 0) L_f/2, sum M_O =
+    applied + max(-f_D W_f, 0) L_f/2 + sum f H (h + t_f) (statics about the toe; Das, *Principles of
+    Foundation Engineering*, retaining-wall stability), which a grid with one weightless or lifting
+    element takes."""
+    from dataclasses import replace
+
+    from kernline.engine.checks import OVERTURNING
+    from kernline.engine.stability import case_table, statics
+
+    project = load_project(resource_path("demo.kernline")).project
+    wall = project.walls[index]
+    widths, thicknesses = candidate_grid(wall)
+    table = case_table(wall, project.soil, project.criteria, project.site)
+    state = statics(table, widths[None, :], thicknesses[:, None])
+    assert (state.factored_weight > 0.0).all()
+    usual = OVERTURNING.evaluate(state)
+    half = 0.5 * table.length
+    for value in (0.0, -1.0e4):
+        weight = np.array(state.factored_weight, copy=True)
+        weight[0, 0, 0] = value
+        general = OVERTURNING.evaluate(replace(state, factored_weight=weight))
+        for name in ("resisting", "moment"):
+            got, want = general[name].copy(), usual[name].copy()
+            got[0, 0, 0] = want[0, 0, 0] = 0.0
+            assert np.array_equal(got, want)
+        assert float(general["resisting"][0, 0, 0]) == float(table.applied_resisting[0]) + max(value, 0.0) * half
+        lateral = float(state.overturning_lateral_moment[0, 0, 0])
+        assert float(general["moment"][0, 0, 0]) == float(table.applied_overturning[0]) + max(-value, 0.0) * half + lateral
