@@ -92,8 +92,9 @@ def pressure_distribution(vertical: ArrayLike, eccentricity: ArrayLike, width: A
     n = np.asarray(vertical, dtype=float)
     w = np.asarray(width, dtype=float)
     e_in = np.asarray(eccentricity, dtype=float)
-    along = np.broadcast_shapes(n.shape, e_in.shape)  # the shape of stable and contact_length
-    shape = np.broadcast_shapes(along, w.shape)  # the shape of q_max and q_min
+    # the shape of stable and contact_length, and that of q_max and q_min (which B may widen)
+    along = n.shape if n.shape == e_in.shape else np.broadcast_shapes(n.shape, e_in.shape)
+    shape = along if not w.ndim or w.shape == along else np.broadcast_shapes(along, w.shape)
     half = 0.5 * length
     e = np.abs(e_in, out=np.empty(shape))  # |e|
     e_along = e if along == shape else np.abs(e_in)
