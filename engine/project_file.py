@@ -53,7 +53,6 @@ from .model import (
     Wall,
     WallConstruction,
 )
-from .presumptive import TABLE_1806_2
 from .registry import CodeBasis, Family, check_by_id, checks, codes
 from .units import Kind, format_length, format_quantity, length_text, parse_quantity
 
@@ -545,6 +544,8 @@ def _soil(raw: Any, present: bool) -> SoilProperties:
     report = _text(obj, "report")
     presumptive = None
     if "presumptive_class" in obj:
+        from .presumptive import TABLE_1806_2  # only for a project that names a class
+
         number = obj["presumptive_class"]
         if isinstance(number, bool) or not isinstance(number, int) or number not in TABLE_1806_2:
             raise InputError("presumptive_class", f"expected a class of IBC 2021 Table 1806.2, 1 to 5, got {_show(number)}")
