@@ -38,6 +38,7 @@ from PySide6.QtWidgets import (
     QLabel,
     QListWidget,
     QMainWindow,
+    QMenu,
     QMessageBox,
     QProgressBar,
     QScrollArea,
@@ -445,7 +446,10 @@ class MainWindow(QMainWindow):
         file_menu = bar.addMenu("&File")
         for a in (self.new_action, self.open_action, self.demo_action):
             file_menu.addAction(a)
-        self.recent_menu = file_menu.addMenu("Open &Recent")
+        # made here, owned by the window: the menu addMenu(title) returns lost its Python wrapper once
+        # the window was activated on an X server (shiboken's ownership of returned menus)
+        self.recent_menu = QMenu("Open &Recent", self)
+        file_menu.addMenu(self.recent_menu)
         file_menu.addSeparator()
         for a in (self.save_action, self.save_as_action):
             file_menu.addAction(a)

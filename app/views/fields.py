@@ -19,7 +19,7 @@ from kernline.engine.model import Project, Wall
 from kernline.engine.registry import Check, Family, checks
 from kernline.engine.units import Kind, parse_quantity
 from PySide6.QtCore import QEvent, QObject, QPoint, Qt, QTimer, Signal
-from PySide6.QtGui import QContextMenuEvent, QKeyEvent, QKeySequence, QPainter
+from PySide6.QtGui import QAction, QContextMenuEvent, QKeyEvent, QKeySequence, QPainter
 from PySide6.QtWidgets import (
     QAbstractSpinBox,
     QComboBox,
@@ -333,7 +333,10 @@ class QuantityField(QWidget):
             self.edit.style().unpolish(self.edit)
             self.edit.style().polish(self.edit)
         if on and self._assumed_action is None:
-            self._assumed_action = self.edit.addAction(assumed_icon(), QLineEdit.ActionPosition.TrailingPosition)
+            # made here with the field as its parent: the action addAction(icon, position) returns lost
+            # its Python wrapper on an X server (the C++ action lived on)
+            self._assumed_action = QAction(assumed_icon(), "", self.edit)
+            self.edit.addAction(self._assumed_action, QLineEdit.ActionPosition.TrailingPosition)
         if self._assumed_action is not None:
             self._assumed_action.setVisible(on)
             self._assumed_action.setToolTip(assumed_tip(assumption) if on else "")

@@ -96,6 +96,10 @@ def make_window(qtbot, tmp_path: Path, settings: QSettings):
         window.start(path, demo=demo and path is None)
         window.show()
         qtbot.waitExposed(window)
+        # the last window shown takes the keyboard, as a window manager would give it (offscreen it
+        # does at once; on an X server without a window manager, as under xvfb-run, only when asked)
+        window.activateWindow()
+        qtbot.waitUntil(window.isActiveWindow, timeout=3000)
         made.append(window)
         return window
 
