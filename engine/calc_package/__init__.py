@@ -667,8 +667,8 @@ def _count(n: int, noun: str) -> str:
 
 def _cover(project: Project, reports: Sequence[WallReport], title: TitleBlock, contents: tuple[ContentsEntry, ...]) -> Section:
     info = project.info
-    n_fail = sum(not r.result.passes for r in reports)
-    failing = [r.wall.id for r in reports if not r.result.passes]
+    n_fail = sum(not r.result.passes_all for r in reports)  # the design along the length included
+    failing = [r.wall.id for r in reports if not r.result.passes_all]
     ids = ", ".join(r.wall.id for r in reports)
     scope = (
         f"This package covers {_count(len(reports), 'wall')} of the project's {len(project.walls)}: {ids}."
@@ -704,7 +704,12 @@ def _cover(project: Project, reports: Sequence[WallReport], title: TitleBlock, c
         Heading("Calculation package"),
         Para(
             "Global stability of concrete strip footings under shear walls: overturning, sliding and soil bearing, "
-            "in every load combination and both directions of the lateral load."
+            "in every load combination and both directions of the lateral load"
+            + (
+                "; and each footing's design as a concrete member (ACI 318-19), across its width and along its length."
+                if project.concrete is not None
+                else "."
+            )
         ),
         Heading("Project information", 2),
         KeyValues(
@@ -1164,8 +1169,10 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
             else:
                 cells.append(f"{shown} / {g.required:.2f}\n{case_name(g.combination, g.direction)}")
         failing = [_CHECK_WORD.get(c, c.id) for c in reported_checks(project) if not res.governing[c].passes]
-        cells.append("passes" if res.passes else "FAILS: " + ", ".join(failing))
-        if not r.result.passes:
+        if not res.passes_along:
+            failing.append("along the length")
+        cells.append("FAILS: " + ", ".join(failing) if failing else "passes")
+        if not r.result.passes_all:
             fail_rows.append(k)
         rows.append(tuple(cells))
     blocks: list[Block] = [
@@ -1205,7 +1212,7 @@ def _schedule(project: Project, reports: Sequence[WallReport], fmt: _Fmt) -> Sec
                 state = (
                     "current footing is this size"
                     if same
-                    else ("current footing passes" if r.result.passes else "current footing FAILS")
+                    else ("current footing passes" if r.result.passes_all else "current footing FAILS")
                 )
             else:
                 size, state = "none in the bounds passes", "revise the bounds, loads or footing length"
@@ -1308,8 +1315,15 @@ def _concrete_section(project: Project, report: WallReport, fmt: _Fmt) -> Sectio
 
 
 def _wall_verdict(result: WallResult) -> Verdict:
+    along = "" if result.passes_along else " and the design along the length"
     if result.passes:
         names = ", ".join(_CHECK_WORD.get(c, c.title.lower()) for c in result.governing)
+        if along:
+            return Verdict(
+                False,
+                f"Wall {result.wall_id} passes every check ({names}) but FAILS the design along the length on its "
+                "current footing (see its concrete design sheet).",
+            )
         return Verdict(True, f"Wall {result.wall_id} PASSES every check ({names}) on its current footing.")
     parts = []
     for check in result.governing:
@@ -1320,7 +1334,7 @@ def _wall_verdict(result: WallResult) -> Verdict:
                 f"{_CHECK_WORD.get(check, check.title.lower())} (ratio {ratio_text(g.ratio, g.required, g.passes)} < {g.required:.2f} "
                 f"required{where})"
             )
-    return Verdict(False, f"Wall {result.wall_id} FAILS " + "; ".join(parts) + " on its current footing.")
+    return Verdict(False, f"Wall {result.wall_id} FAILS " + "; ".join(parts) + along + " on its current footing.")
 
 
 def _inputs(project: Project, wall: Wall, result: WallResult, fmt: _Fmt) -> list[Block]:
@@ -1522,44 +1536,6 @@ def _check_verdict(check: Check, ratio: float, required: float, passes: bool, sy
     return Verdict(passes, formula(f"{_CHECK_TITLE[check]} {word}: {symbol} = {shown} {sign} {required:.2f} required."))
 
 
-def _results_table(result: WallResult) -> list[Block]:
-    rows = []
-    fail_rows = []
-    for k, check in enumerate(result.governing):
-        g = result.governing[check]
-        if math.isinf(g.ratio):
-            rows.append((_CHECK_TITLE.get(check, check.title), "—", "no demand", f"{g.required:.2f}", "passes (no demand)"))
-            continue
-        verdict = "passes" if g.passes else "FAILS"
-        rows.append(
-            (
-                _CHECK_TITLE.get(check, check.title),
-                case_name(g.combination, g.direction) if g.combination else "(no combination: geometry)",
-                ratio_text(g.ratio, g.required, g.passes),
-                f"{g.required:.2f}",
-                verdict,
-            )
-        )
-        if not g.passes:
-            fail_rows.append(k)
-    final = "The wall passes every check." if result.passes else "The wall FAILS: the footing must be revised."
-    return [
-        Group(
-            (
-                Heading("Results on the current footing", 2),
-                Table(
-                    ("Check", "Governing case", "Ratio", "Required", "Result"),
-                    tuple(rows),
-                    (0.18, 0.42, 0.12, 0.12, 0.16),
-                    align="LLRRL",
-                    fail_rows=tuple(fail_rows),
-                ),
-                Verdict(result.passes, final),
-            )
-        )
-    ]
-
-
 def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
     wall, s = report.wall, report.sizing
     z = wall.sizing
@@ -1631,7 +1607,7 @@ def _sizing(project: Project, report: WallReport, fmt: _Fmt) -> list[Block]:
         )
     if _same_size(wall, s):
         blocks.append(Verdict(True, "The current footing is this smallest passing size."))
-    elif report.result.passes:
+    elif report.result.passes_all:
         blocks.append(
             Verdict(
                 True,
