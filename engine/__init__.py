@@ -28,31 +28,56 @@ from typing import Any
 def _installed_version(distribution: str) -> str | None:
     """The version of an installed distribution, as ``importlib.metadata.version`` gives it, or None.
 
-    Reads the ``Version:`` line of the first ``<name>-<version>.dist-info/METADATA`` on ``sys.path``
-    (the folder importlib.metadata finds), and only when there is none asks importlib.metadata itself:
-    importing it (and the email package it parses with) costs about 15 ms of every ``kernline check``.
+    Reads the ``Version:`` header of the first ``<name>-<version>.dist-info/METADATA`` or
+    ``<name>.egg-info`` (``PKG-INFO``) on ``sys.path``, the metadata importlib.metadata finds first,
+    and only when there is none asks importlib.metadata itself: importing it (and the email package
+    it parses with) costs about 15 ms of every ``kernline check``.
     """
-    wanted = distribution.lower().replace("-", "_").replace(".", "_")
+    wanted = _normalized(distribution)
     for entry in sys.path:
+        folder = entry or "."
         try:
-            names = os.listdir(entry or ".")
+            names = os.listdir(folder)
         except OSError:  # a zip file, a path hook or a missing folder: left to importlib.metadata
             continue
         for name in names:
-            if not name.endswith(".dist-info") or "-" not in name:
+            if name.endswith(".dist-info"):
+                headers = os.path.join(folder, name, "METADATA")
+                stem = name[: -len(".dist-info")]
+            elif name.endswith(".egg-info"):
+                path = os.path.join(folder, name)
+                headers = os.path.join(path, "PKG-INFO") if os.path.isdir(path) else path
+                stem = name[: -len(".egg-info")]
+            else:
                 continue
-            if name.split("-", 1)[0].lower().replace("-", "_").replace(".", "_") != wanted:
+            if _normalized(stem.split("-", 1)[0]) != wanted:
                 continue
-            try:
-                with open(os.path.join(entry or ".", name, "METADATA"), encoding="utf-8") as fh:
-                    for line in fh:
-                        if line.startswith("Version:"):
-                            return line[len("Version:") :].strip()
-                        if not line.strip():  # the end of the headers
-                            break
-            except OSError:
-                pass
-            break  # the first folder found is the one importlib.metadata reads
+            found = _version_header(headers)
+            return found if found is not None else _metadata_version(distribution)
+    return _metadata_version(distribution)
+
+
+def _normalized(name: str) -> str:
+    """A distribution name as packaging compares them (PEP 503: case and runs of -_. alike)."""
+    return "_".join(part for part in name.lower().replace("-", "_").replace(".", "_").split("_") if part)
+
+
+def _version_header(path: str) -> str | None:
+    """The ``Version:`` header of a METADATA or PKG-INFO file, or None."""
+    try:
+        with open(path, encoding="utf-8") as fh:
+            for line in fh:
+                if line.startswith("Version:"):
+                    return line[len("Version:") :].strip()
+                if not line.strip():  # the end of the headers
+                    break
+    except (OSError, UnicodeDecodeError):
+        pass
+    return None
+
+
+def _metadata_version(distribution: str) -> str | None:
+    """``importlib.metadata.version``, or None for a distribution that is not installed."""
     from importlib.metadata import PackageNotFoundError, version
 
     try:
