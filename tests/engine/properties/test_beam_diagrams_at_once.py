@@ -96,8 +96,8 @@ def test_diagrams_at_once_equal_each_diagram_alone(length, width, data):
 
 def reference_design_along(table, evaluation):
     """The design along the length case by case, as Kernline did it before the cases were computed
-    together: case_diagram and design_longitudinal for every case, the first failure worded, the plain
-    section's verdict over each (the reference the faster design_along must reproduce)."""
+    together: case_diagram and design_longitudinal for every case, the first failure that the plain
+    section does not carry either worded, the plain section's verdict over each (the reference the faster design_along must reproduce)."""
     from kernline.engine.concrete.along import (
         _chosen_bars,
         _plain_along,
@@ -125,7 +125,9 @@ def reference_design_along(table, evaluation):
         design_longitudinal(d, thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer, words=False)
         for d in diagrams
     ]
-    first = next((i for i, d in enumerate(designs) if not d.passes), None)
+    carried = [plain and _plain_carries(d, phi_mn, phi_vn) for d in diagrams]
+    # the governing failure is worded: the first case neither the plain section nor the bars carry
+    first = next((i for i, d in enumerate(designs) if not d.passes and not carried[i]), None)
     if first is not None:
         designs[first] = design_longitudinal(
             diagrams[first], thickness=thickness, materials=materials, bottom=bottom, top=top, layer_below=layer
