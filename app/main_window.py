@@ -71,6 +71,8 @@ from .views.welcome import WelcomePanel
 
 AUTOSAVE_MS = 15_000  # an edit reaches the recovery file within this time
 RECENT_LIMIT = 8
+PACKAGE_SEAL_KEY = "package/seal_every_sheet"  # settings keys of File > Package options
+PACKAGE_VERIFICATION_KEY = "package/verification_appendix"
 FILE_FILTER = f"Kernline projects (*{EXTENSION});;All files (*)"
 PDF_FILTER = "PDF (*.pdf);;All files (*)"
 EXIT_AFTER_VARIABLE = "KERNLINE_EXIT_AFTER_MS"  # the frozen build's smoke check: quit this many ms after showing
@@ -381,6 +383,23 @@ class MainWindow(QMainWindow):
         action.triggered.connect(slot)
         return action
 
+    def _option(self, text: str, key: str, tip: str) -> QAction:
+        """A checkable package option, stored in the settings under ``key`` (off by default)."""
+        action = QAction(text, self)
+        action.setCheckable(True)
+        action.setChecked(str(self.settings.value(key, "false")).lower() == "true")
+        action.setStatusTip(tip)
+        action.setToolTip(tip)
+        action.toggled.connect(lambda on, k=key: self.settings.setValue(k, "true" if on else "false"))
+        return action
+
+    def package_options(self) -> dict[str, bool]:
+        """The options File › Package options holds, as :func:`engine.report.write_report` takes them."""
+        return {
+            "seal_every_sheet": self.seal_every_sheet_action.isChecked(),
+            "verification": self.verification_action.isChecked(),
+        }
+
     def _build_actions(self) -> None:
         # the keys are spelt out (not the platform's standard keys, which differ between desktops) so that
         # the guide's table of shortcuts holds everywhere; on macOS Qt reads Ctrl as Command
@@ -391,6 +410,18 @@ class MainWindow(QMainWindow):
         self.save_as_action = self._action("Save &As…", self.save_as, "Ctrl+Shift+S", "Save the project under a new name")
         self.export_action = self._action(
             "Export &schedule (CSV)…", self.export_schedule, None, "Write the footing schedule as CSV"
+        )
+        # the package's options, kept between sessions; both off unless chosen
+        self.seal_every_sheet_action = self._option(
+            "Seal box on every sheet",
+            PACKAGE_SEAL_KEY,
+            "Print a small seal box in every sheet's title strip (the cover always has the seal square)",
+        )
+        self.verification_action = self._option(
+            "Verification appendix",
+            PACKAGE_VERIFICATION_KEY,
+            "Run the program's benchmark cases when the package is written and print their published values "
+            "beside this version's (docs/verification.md)",
         )
         self.export_pdf_action = self._action(
             "&Export calculation package (PDF)…",
@@ -458,6 +489,10 @@ class MainWindow(QMainWindow):
         file_menu.addSeparator()
         for a in (self.export_pdf_action, self.export_action):
             file_menu.addAction(a)
+        self.package_menu = QMenu("&Package options", self)
+        for a in (self.seal_every_sheet_action, self.verification_action):
+            self.package_menu.addAction(a)
+        file_menu.addMenu(self.package_menu)
         file_menu.addSeparator()
         file_menu.addAction(self.quit_action)
         edit_menu = bar.addMenu("&Edit")
@@ -1343,7 +1378,7 @@ class MainWindow(QMainWindow):
         target = Path(path)
         # the model in force: an edit the engine refused never reached it, so it is the last valid one
         self._export_invalid = self.invalid_inputs()
-        self.package_writer.write(doc.raw, doc.project, target)
+        self.package_writer.write(doc.raw, doc.project, target, **self.package_options())
         self.export_pdf_action.setEnabled(False)
         self._set_busy(f"Writing the calculation package to {target.name}…")
         return True

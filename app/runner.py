@@ -155,18 +155,19 @@ class PackageOutcome:
         return self.error is None
 
 
-def write_package(raw: dict[str, Any], project: Project, path: Path) -> PackageOutcome:
+def write_package(raw: dict[str, Any], project: Project, path: Path, **options: bool) -> PackageOutcome:
     """Write the calculation package of ``project`` to ``path``; any failure becomes a message.
 
     The raw dict goes along so that the package prints the geotechnical report named in
-    ``soil.report`` (see :func:`engine.report.write_report`).
+    ``soil.report`` (see :func:`engine.report.write_report`); ``options`` are the package's own
+    (``seal_every_sheet``, ``verification``).
     """
     from kernline.engine.report import write_report  # reportlab is imported only when a package is written
 
     start = time.perf_counter()
     walls = len(project.walls)
     try:
-        write_report(ProjectFile(raw=raw, project=project), path)
+        write_report(ProjectFile(raw=raw, project=project), path, **options)
     except InputError as err:
         return PackageOutcome(path, walls, time.perf_counter() - start, err.problem or err.message)
     except OSError as err:
@@ -181,12 +182,12 @@ def write_package(raw: dict[str, Any], project: Project, path: Path) -> PackageO
 
 
 class _PackageJob(QRunnable):
-    def __init__(self, relay: _Relay, raw: dict[str, Any], project: Project, path: Path) -> None:
+    def __init__(self, relay: _Relay, raw: dict[str, Any], project: Project, path: Path, options: dict[str, bool]) -> None:
         super().__init__()
-        self.relay, self.raw, self.project, self.path = relay, raw, project, path
+        self.relay, self.raw, self.project, self.path, self.options = relay, raw, project, path, options
 
     def run(self) -> None:
-        self.relay.done.emit(write_package(self.raw, self.project, self.path))
+        self.relay.done.emit(write_package(self.raw, self.project, self.path, **self.options))
 
 
 class PackageWriter(QObject):
@@ -202,13 +203,14 @@ class PackageWriter(QObject):
         self._relay.done.connect(self._on_done)
         self.busy = False
 
-    def write(self, raw: dict[str, Any], project: Project, path: str | Path) -> bool:
-        """Start writing ``project`` (with its raw file dict) to ``path``; False if one is still being written."""
+    def write(self, raw: dict[str, Any], project: Project, path: str | Path, **options: bool) -> bool:
+        """Start writing ``project`` (with its raw file dict) to ``path`` with the package's ``options``
+        (:func:`write_package`); False if one is still being written."""
         if self.busy:
             return False
         self.busy = True
         # the worker gets its own copy: the window keeps editing the raw dict meanwhile
-        self.pool.start(_PackageJob(self._relay, copy.deepcopy(raw), project, Path(path)))
+        self.pool.start(_PackageJob(self._relay, copy.deepcopy(raw), project, Path(path), dict(options)))
         return True
 
     def wait(self, msecs: int = 30_000) -> bool:
