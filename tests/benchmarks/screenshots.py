@@ -83,7 +83,12 @@ def take(app: QApplication, out: Path, size: tuple[int, int]) -> list[Path]:
         doc = window.document
 
         def shot(name: str) -> None:
-            app.processEvents()
+            # the design along the length is worked out once typing has paused (150 ms): let it finish,
+            # so the verdict shows it rather than "follows"
+            settle = QElapsedTimer()
+            settle.start()
+            while settle.elapsed() < 600:
+                app.processEvents()
             path = out / name.replace(".png", f"{ending}.png")
             window.grab().save(str(path))
             shots.append(path)
