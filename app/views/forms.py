@@ -1069,12 +1069,7 @@ class WallForm(QWidget):
 
     def set_choice(self, path: tuple[str, ...], value: Any) -> None:
         """Choose ``value`` in the wall's choice box of ``path`` as a user would (for tests and keyboard use)."""
-        choice = self.choices[path]
-        index = choice.index_of(value)
-        if index < 0:
-            raise ValueError(f"{value!r} is not a choice of {path_text(path)}")
-        choice.box.setCurrentIndex(index)
-        choice.box.activated.emit(index)
+        self.choices[path].choose(value)
 
     def field_widget(self, rest: str) -> QWidget | None:
         """The current wall's input at ``rest`` ("footing.width", "construction"), or None."""
@@ -1277,6 +1272,14 @@ class Choice:
             ):
                 return i
         return -1
+
+    def choose(self, value: Any) -> None:
+        """Choose ``value`` as a user would (the box's ``activated`` signal commits it)."""
+        index = self.index_of(value)
+        if index < 0:
+            raise ValueError(f"{value!r} is not a choice of {path_text(self.path)}")
+        self.box.setCurrentIndex(index)
+        self.box.activated.emit(index)
 
     def show_value(self, value: Any, assumption: Any = None) -> None:
         index = self.index_of(value)
@@ -1506,12 +1509,7 @@ class ProjectForm(QWidget):
 
     def set_choice(self, path: tuple[str, ...], value: Any) -> None:
         """Choose ``value`` in the choice box of ``path`` as a user would (for tests and keyboard use)."""
-        choice = self.choices[path]
-        index = choice.index_of(value)
-        if index < 0:
-            raise ValueError(f"{value!r} is not a choice of {path_text(path)}")
-        choice.box.setCurrentIndex(index)
-        choice.box.activated.emit(index)
+        self.choices[path].choose(value)
 
     # ---- rendering -----------------------------------------------------------------------------
 

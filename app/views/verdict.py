@@ -34,7 +34,6 @@ from kernline.engine.summary import (
     NO_EQUILIBRIUM,
     case_text,
     comparison_text,
-    margin,
     margin_text,
     state_words,
 )
@@ -289,13 +288,11 @@ def along_reason(result: WallResult) -> str:
 
 def _least(result: WallResult) -> str:
     """ "; least margin 14% (bearing)": the check closest to its requirement ("" when none has demand)."""
-    loaded = [g for g in result.governing.values() if not math.isinf(g.ratio)]
-    if not loaded:
+    least = result.worst  # a check without demand has an infinite ratio: the least only when none has demand
+    if math.isinf(least.ratio):
         return ""
-    least = min(loaded, key=lambda g: g.normalized)
-    return (
-        f"; least margin {max(0, math.floor(100.0 * margin(least.ratio, least.required) + 1e-9))}% ({least.check.title.lower()})"
-    )
+    percent = margin_text(least.ratio, least.required, True).removesuffix(" margin")
+    return f"; least margin {percent} ({least.check.title.lower()})"
 
 
 class _Hint(QLabel):

@@ -30,16 +30,12 @@ from .longitudinal import (
     TOP_COVER,
     BeamArrays,
     BeamDiagram,
-    BeamLineLoad,
-    BeamPointLoad,
     LongitudinalDesign,
     bars_fail_anywhere,
     beam_arrays,
-    beam_diagram,
     chord_couple,
     design_longitudinal,
     given_bars_pass,
-    rigid_soil_stations,
     rigid_soil_stations_of,
 )
 from .transverse import TOLERANCE
@@ -56,56 +52,19 @@ WALL_STRIPS = 24
 
 
 def case_diagram(table: CaseTable, evaluation: Evaluation, index: int) -> BeamDiagram:
-    """The beam diagram of strength case ``index`` on the size ``evaluation`` was made for."""
-    wall = table.wall
-    case = table.cases[index]
-    combo, sign = case.combination, case.direction.sign
-    width = float(np.asarray(evaluation.statics.width))
-    thickness = float(np.asarray(evaluation.statics.thickness))
-    length = table.length
-    start = wall.footing.extension_start
-    lines: list[BeamLineLoad] = []
-    points: list[BeamPointLoad] = []
-    weight = float(self_weight(wall, table.soil, width, thickness).total) * combo.factor(LoadCase.D)
-    if weight:
-        lines.append(BeamLineLoad(value=weight / length, start=0.0, end=length, label="self weight"))
-    moment = 0.0
-    for load in wall.loads:
-        f = combo.factor(load.case)
-        if f == 0.0:
-            continue
-        mirror = sign < 0 and getattr(load, "reverses", False)
-        if isinstance(load, LineLoad):
-            a, b = (wall.length - load.end, wall.length - load.start) if mirror else (load.start, load.end)
-            lines.append(BeamLineLoad(value=f * load.value, start=start + a, end=start + b, label=load.label))
-        elif isinstance(load, PointLoad):
-            at = wall.length - load.at if mirror else load.at
-            points.append(BeamPointLoad(value=f * load.value, at=start + at, label=load.label))
-        elif isinstance(load, LateralLoad) and sign != 0:
-            moment += sign * f * load.value * (load.height + thickness)
-    if moment:
-        wall_start, wall_end = start, start + wall.length
-        if wall.construction is WallConstruction.LIGHT_FRAME:
-            points.extend(chord_couple(moment, wall_start=wall_start, wall_end=wall_end, offset=wall.chord_offset))
-        else:
-            edges = np.linspace(wall_start, wall_end, WALL_STRIPS + 1)
-            mids = 0.5 * (edges[:-1] + edges[1:]) - 0.5 * (wall_start + wall_end)
-            step = float(edges[1] - edges[0])
-            scale = moment / float(np.sum(step * mids * mids))  # sum w_i step (x_i - x_mid) = M
-            for k in range(WALL_STRIPS):
-                lines.append(BeamLineLoad(value=scale * float(mids[k]), start=float(edges[k]), end=float(edges[k + 1])))
-    vertical = float(evaluation.statics.vertical[index])
-    eccentricity = float(evaluation.statics.eccentricity[index])
-    x, q = rigid_soil_stations(vertical, eccentricity, width, length)
-    return beam_diagram(x, q, width, lines, points)
+    """The beam diagram of strength case ``index`` on the size ``evaluation`` was made for (the loads
+    of :func:`_case_beams`, that case alone)."""
+    return _case_beams(table, evaluation.statics, only=[index]).diagram(0)
 
 
 def case_diagrams(table: CaseTable, evaluation: Evaluation) -> list[BeamDiagram]:
     """The beam diagram of every strength case on the size ``evaluation`` was made for, at once.
 
-    The same loads, in the same order, as :func:`case_diagram` builds case by case, handed to
+    Each case's loads (the factored self weight over L_f, the wall's factored line and point loads,
+    mirrored where a load reverses with the direction, and the overturning as a chord couple of a
+    light-frame wall or a linear pressure along a rigid wall) handed to
     :func:`engine.concrete.longitudinal.beam_arrays` (numpy over cases); a property test compares
-    the two.
+    it with :func:`engine.concrete.longitudinal.beam_diagram`, one load set at a time.
     """
     return _case_beams(table, evaluation.statics).diagrams() if table.cases else []
 
